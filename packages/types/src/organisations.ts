@@ -1,0 +1,59 @@
+import { z } from 'zod';
+import { RoleSchema } from './roles.js';
+
+export const MemberSchema = z.object({
+  userId: z.uuid(),
+  name: z.string(),
+  email: z.string(),
+  role: RoleSchema,
+  joinedAt: z.iso.datetime({ offset: true }),
+});
+export type Member = z.infer<typeof MemberSchema>;
+
+export const InvitationCreateSchema = z.object({
+  email: z.email({ message: 'Enter a valid e-mail address, like name@example.org.' }).trim().toLowerCase(),
+  role: RoleSchema,
+});
+export type InvitationCreate = z.infer<typeof InvitationCreateSchema>;
+
+export const InvitationSchema = z.object({
+  id: z.uuid(),
+  email: z.string(),
+  role: RoleSchema,
+  invitedBy: z.string(),
+  createdAt: z.iso.datetime({ offset: true }),
+  expiresAt: z.iso.datetime({ offset: true }),
+});
+export type Invitation = z.infer<typeof InvitationSchema>;
+
+/** What the invitee sees before accepting (GET /api/invitations/:token). */
+export const InvitationPreviewSchema = z.object({
+  organisationName: z.string(),
+  email: z.string(),
+  role: RoleSchema,
+  invitedBy: z.string(),
+  accountExists: z.boolean(),
+  expiresAt: z.iso.datetime({ offset: true }),
+});
+export type InvitationPreview = z.infer<typeof InvitationPreviewSchema>;
+
+/** Accepting: a new account gives name and password; an existing one gives its password. */
+export const InvitationAcceptSchema = z.object({
+  name: z.string().trim().min(1).max(120).optional(),
+  password: z.string().min(1, { message: 'Enter a password.' }).max(200),
+});
+export type InvitationAccept = z.infer<typeof InvitationAcceptSchema>;
+
+export const MemberRoleUpdateSchema = z.object({ role: RoleSchema });
+export type MemberRoleUpdate = z.infer<typeof MemberRoleUpdateSchema>;
+
+export const AuditEntrySchema = z.object({
+  id: z.uuid(),
+  at: z.iso.datetime({ offset: true }),
+  actorName: z.string().nullable(),
+  action: z.string(),
+  objectType: z.string(),
+  objectId: z.string().nullable(),
+  details: z.record(z.string(), z.unknown()),
+});
+export type AuditEntry = z.infer<typeof AuditEntrySchema>;
