@@ -1,0 +1,29 @@
+import { describe, expect, it } from 'vitest';
+import { stressIncreaseStrip } from './stress-increase-strip.js';
+
+describe('stressIncreaseStrip({ pressureKpa, widthM, xM, depthM })', () => {
+  // Table of Δσz/q below a strip against 2z/B and 2x/B (Das, Principles of Geotechnical
+  // Engineering), from memory, three printed decimals: tolerance 0.0005.
+  it.each([
+    [1, 0, 0.818],
+    [2, 0, 0.55],
+    [4, 0, 0.306],
+  ])('at 2z/B = %s, 2x/B = %s the ratio Δσz/q is the published %s', (twoZOverB, twoXOverB, expected) => {
+    const value = stressIncreaseStrip({ pressureKpa: 1, widthM: 2, xM: twoXOverB, depthM: twoZOverB });
+    expect(Math.abs(value - expected)).toBeLessThanOrEqual(0.0005);
+  });
+
+  it('under an edge, just below the surface, carries half the pressure', () => {
+    expect(stressIncreaseStrip({ pressureKpa: 100, widthM: 2, xM: 1, depthM: 1e-9 })).toBeCloseTo(50, 6);
+  });
+
+  it('is symmetric about the centre line', () => {
+    expect(stressIncreaseStrip({ pressureKpa: 100, widthM: 3, xM: -2.2, depthM: 1.5 })).toBeCloseTo(stressIncreaseStrip({ pressureKpa: 100, widthM: 3, xM: 2.2, depthM: 1.5 }), 12);
+  });
+
+  it('throws RangeError for a non-positive width or depth, or non-finite offset', () => {
+    expect(() => stressIncreaseStrip({ pressureKpa: 1, widthM: 0, xM: 0, depthM: 1 })).toThrow(new RangeError('stressIncreaseStrip requires finite widthM > 0'));
+    expect(() => stressIncreaseStrip({ pressureKpa: 1, widthM: 1, xM: 0, depthM: 0 })).toThrow(new RangeError('stressIncreaseStrip requires finite depthM > 0'));
+    expect(() => stressIncreaseStrip({ pressureKpa: 1, widthM: 1, xM: Infinity, depthM: 1 })).toThrow(new RangeError('stressIncreaseStrip requires finite pressureKpa and xM'));
+  });
+});
