@@ -1,0 +1,77 @@
+import { existsSync } from 'node:fs';
+import path from 'node:path';
+import { fileURLToPath } from 'node:url';
+import cookieParser from 'cookie-parser';
+import express, { type Express } from 'express';
+import helmet from 'helmet';
+import { pinoHttp } from 'pino-http';
+import { env } from './config/env.js';
+import { createCsrf } from './http/csrf.js';
+import { apiNotFound, errorMiddleware } from './http/error-middleware.js';
+import { logger } from './http/logger.js';
+import { defineRoutes } from './http/routes.js';
+import { isSecureOrigin } from './http/session-cookie.js';
+import { auditRouter } from './modules/audit/audit.router.js';
+import { authRouter } from './modules/auth/auth.router.js';
+import { healthRouter } from './modules/health/health.router.js';
+import { invitationsRouter, orgInvitationsRouter } from './modules/invitations/invitations.router.js';
+import { membersRouter } from './modules/organisations/members.router.js';
+
+const DEFAULT_WEB_DIST = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '../../web/dist');
+
+/** The whole HTTP application, without listening; the data source must be initialised. */
+export function createApp(): Express {
+  const config = env();
+  const app = express();
+  app.disable('x-powered-by');
+  app.set('trust proxy', 'loopback');
+
+  app.use(
+    helmet({
+      contentSecurityPolicy: {
+        directives: {
+          defaultSrc: ["'self'"],
+          scriptSrc: ["'self'"],
+          // plotly injects <style> elements at run time.
+          styleSrc: ["'self'", "'unsafe-inline'"],
+          imgSrc: ["'self'", 'data:', 'blob:'],
+          fontSrc: ["'self'", 'data:'],
+          connectSrc: ["'self'"],
+          workerSrc: ["'self'", 'blob:'],
+          objectSrc: ["'none'"],
+          frameAncestors: ["'none'"],
+          upgradeInsecureRequests: isSecureOrigin() ? [] : null,
+        },
+      },
+      strictTransportSecurity: isSecureOrigin(),
+    }),
+  );
+  app.use(pinoHttp({ logger, autoLogging: config.NODE_ENV !== 'test' }));
+  app.use(express.json({ limit: '1mb' }));
+  app.use(cookieParser());
+
+  const csrf = createCsrf();
+  app.use('/api', csrf.protect);
+
+  app.use(healthRouter());
+  app.use(authRouter(csrf));
+  app.use(invitationsRouter());
+  app.use(orgInvitationsRouter());
+  app.use(membersRouter());
+  app.use(auditRouter());
+  app.use('/api', apiNotFound);
+
+  const webDist = config.WEB_DIST ?? DEFAULT_WEB_DIST;
+  if (config.NODE_ENV === 'production' && existsSync(path.join(webDist, 'index.html'))) {
+    app.use(express.static(webDist, { index: false, maxAge: '1h' }));
+    // Client-side routes (/members, /reset-password?token=…) all load the app shell.
+    app.use(
+      defineRoutes('', [
+        { method: 'get', path: '/*splat', access: 'public', handler: (_req, res) => res.sendFile(path.join(webDist, 'index.html')) },
+      ]),
+    );
+  }
+
+  app.use(errorMiddleware);
+  return app;
+}

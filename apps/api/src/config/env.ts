@@ -1,0 +1,58 @@
+import { z } from 'zod';
+
+/**
+ * The process environment, parsed once at boot. A missing or malformed variable stops
+ * the process with a message naming it, instead of failing later inside a request.
+ */
+const EnvSchema = z.object({
+  NODE_ENV: z.enum(['development', 'test', 'production']).default('development'),
+  PORT: z.coerce.number().int().positive().default(3000),
+  DATABASE_URL: z.url({ message: 'set DATABASE_URL to a postgres:// URL' }),
+  JWT_SECRET: z.string().min(32, { message: 'set JWT_SECRET to at least 32 random characters' }),
+  PUBLIC_URL: z.url({ message: 'set PUBLIC_URL to the address people open, like http://127.0.0.1:3000' }),
+  S3_ENDPOINT: z.url({ message: 'set S3_ENDPOINT to the S3 server, like http://127.0.0.1:4569' }),
+  S3_ACCESS_KEY: z.string().min(1),
+  S3_SECRET_KEY: z.string().min(1),
+  S3_BUCKET: z.string().min(3),
+  S3_REGION: z.string().default('us-east-1'),
+  SMTP_URL: z.url({ message: 'set SMTP_URL to the mail server, like smtp://127.0.0.1:1025' }),
+  MAIL_FROM: z.string().default('Porestack <no-reply@porestack.test>'),
+  /** bcrypt work factor; 12 unless set. Never below 10. */
+  BCRYPT_COST: z.coerce.number().int().min(10).max(15).default(12),
+  /** Failed sign-ins allowed per IP and e-mail within the window, then 429. */
+  SIGN_IN_RATE_LIMIT: z.coerce.number().int().positive().default(10),
+  SIGN_IN_RATE_WINDOW_MINUTES: z.coerce.number().int().positive().default(15),
+  SESSION_DAYS: z.coerce.number().int().positive().default(7),
+  LOG_LEVEL: z.enum(['fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent']).optional(),
+  /** Folder of the built web app served in production. */
+  WEB_DIST: z.string().optional(),
+});
+export type Env = z.infer<typeof EnvSchema>;
+
+function formatIssues(error: z.ZodError): string {
+  return error.issues.map((issue) => `  ${issue.path.join('.')}: ${issue.message}`).join('\n');
+}
+
+let cached: Env | undefined;
+
+/** The parsed environment; exits the process with a clear message when it is invalid. */
+export function env(): Env {
+  if (cached) return cached;
+  const result = EnvSchema.safeParse(process.env);
+  if (!result.success) {
+    process.stderr.write(`Porestack API: the environment is incomplete:\n${formatIssues(result.error)}\n`);
+    process.exit(1);
+  }
+  cached = result.data;
+  return cached;
+}
+
+/** Only the database URL: what the TypeORM CLI needs to run migrations. */
+export function databaseUrl(): string {
+  const result = EnvSchema.shape.DATABASE_URL.safeParse(process.env['DATABASE_URL']);
+  if (!result.success) {
+    process.stderr.write('Porestack API: set DATABASE_URL to a postgres:// URL.\n');
+    process.exit(1);
+  }
+  return result.data;
+}

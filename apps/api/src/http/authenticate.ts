@@ -1,0 +1,40 @@
+import { ROLE_LABELS, type Role } from '@porestack/types';
+import type { Request } from 'express';
+import { dataSource } from '../data-source.js';
+import { DomainError, NotFoundError } from '../errors/domain-error.js';
+import { MembershipEntity } from '../modules/organisations/membership.entity.js';
+import { UserEntity } from '../modules/users/user.entity.js';
+import { UUID_PATTERN } from './params.js';
+import type { TenantContext } from './request-context.js';
+import { readSessionClaims } from './session-cookie.js';
+
+/** The user of a valid session cookie; a changed password (newer session_version) ends older sessions. */
+export async function authenticate(req: Request): Promise<UserEntity> {
+  const claims = readSessionClaims(req);
+  const user = claims ? await dataSource.getRepository(UserEntity).findOneBy({ id: claims.sub }) : null;
+  if (!claims || !user || user.sessionVersion !== claims.ver) {
+    throw new DomainError('unauthenticated', 'You are not signed in, or your session has ended. Sign in and try again.');
+  }
+  return user;
+}
+
+/**
+ * The caller's membership in `:orgId`. Not a member answers exactly as a missing
+ * organisation (404), so ids of other tenants reveal nothing.
+ */
+export async function resolveTenant(userId: string, orgId: string | undefined, roles: readonly Role[]): Promise<TenantContext> {
+  if (!orgId || !UUID_PATTERN.test(orgId)) throw new NotFoundError('organisation');
+  const membership = await dataSource.getRepository(MembershipEntity).findOne({
+    where: { organisationId: orgId, userId },
+    relations: { organisation: true },
+  });
+  if (!membership) throw new NotFoundError('organisation');
+  if (!roles.includes(membership.role)) {
+    const allowed = roles.map((role) => ROLE_LABELS[role]).join(', ');
+    throw new DomainError(
+      'forbidden',
+      `Your role in ${membership.organisation.name} (${ROLE_LABELS[membership.role]}) cannot do this; it needs: ${allowed}. Ask an administrator of the organisation if you need it.`,
+    );
+  }
+  return { orgId, organisationName: membership.organisation.name, role: membership.role };
+}

@@ -1,0 +1,63 @@
+import type { ApiError } from '@porestack/types';
+import type { ErrorRequestHandler, RequestHandler } from 'express';
+import { DomainError, type ErrorCode } from '../errors/domain-error.js';
+import { logger } from './logger.js';
+
+/** Exhaustive: adding a code without a status is a compile error. */
+const STATUS_BY_CODE: Record<ErrorCode, number> = {
+  invalid_json: 400,
+  validation_failed: 400,
+  payload_too_large: 413,
+  csrf_invalid: 403,
+  unauthenticated: 401,
+  invalid_credentials: 401,
+  forbidden: 403,
+  not_found: 404,
+  email_taken: 409,
+  already_member: 409,
+  last_admin: 409,
+  rate_limited: 429,
+  token_invalid: 400,
+  token_used: 410,
+  token_expired: 410,
+  service_unavailable: 503,
+  internal: 500,
+};
+
+export function statusFor(code: ErrorCode): number {
+  return STATUS_BY_CODE[code];
+}
+
+/** body-parser errors carry a `type`; map the two a client can cause. */
+function fromBodyParser(error: unknown): DomainError | null {
+  if (typeof error !== 'object' || error === null || !('type' in error)) return null;
+  if (error.type === 'entity.parse.failed') {
+    return new DomainError('invalid_json', 'The request body is not valid JSON. Check the data sent and try again.');
+  }
+  if (error.type === 'entity.too.large') {
+    return new DomainError('payload_too_large', 'The request is too large. Send less data at once.');
+  }
+  return null;
+}
+
+export const errorMiddleware: ErrorRequestHandler = (error: unknown, req, res, _next) => {
+  const known = error instanceof DomainError ? error : fromBodyParser(error);
+  if (known) {
+    const body: ApiError = { code: known.code, message: known.message };
+    if (known.issues) body.issues = known.issues;
+    res.status(statusFor(known.code)).json(body);
+    return;
+  }
+  (req.log ?? logger).error({ err: error }, 'unhandled error');
+  const body: ApiError = {
+    code: 'internal',
+    message: 'Something went wrong on our side. Try again in a moment; if it keeps happening, tell your administrator.',
+  };
+  res.status(500).json(body);
+};
+
+/** Unknown /api paths answer JSON, not the SPA. */
+export const apiNotFound: RequestHandler = (req, res) => {
+  const body: ApiError = { code: 'not_found', message: `There is no API endpoint ${req.method} ${req.originalUrl}.` };
+  res.status(404).json(body);
+};

@@ -1,0 +1,11 @@
+import type { Request } from 'express';
+import { NotFoundError } from '../errors/domain-error.js';
+
+export const UUID_PATTERN = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
+
+/** A uuid path parameter; anything else answers 404 like a missing object (never a database error). */
+export function uuidParam(req: Request, name: string, what: string): string {
+  const value = req.params[name];
+  if (typeof value !== 'string' || !UUID_PATTERN.test(value)) throw new NotFoundError(what);
+  return value;
+}

@@ -1,0 +1,21 @@
+import type { z } from 'zod';
+import { DomainError, type FieldIssue } from '../errors/domain-error.js';
+
+/**
+ * Validates a request body, query or params object with a shared schema and returns the
+ * parsed value (Express 5's `req.query` is read-only, so nothing is written back).
+ * @throws DomainError `validation_failed` listing each field's problem.
+ */
+export function parse<S extends z.ZodType>(schema: S, value: unknown): z.output<S> {
+  const result = schema.safeParse(value ?? {});
+  if (result.success) return result.data;
+  const issues: FieldIssue[] = result.error.issues.map((issue) => ({
+    path: issue.path.map(String).join('.'),
+    message: issue.message,
+  }));
+  const first = issues[0];
+  const summary = issues.length === 1 && first
+    ? `${first.path ? `${first.path}: ` : ''}${first.message}`
+    : `${issues.length} fields need attention: ${issues.map((i) => i.path || 'request').join(', ')}.`;
+  throw new DomainError('validation_failed', `The request was not accepted. ${summary}`, issues);
+}

@@ -1,0 +1,114 @@
+import type { Role } from '@porestack/types';
+import { Router, type Express, type NextFunction, type Request, type RequestHandler, type Response } from 'express';
+import { authenticate, resolveTenant } from './authenticate.js';
+
+/**
+ * Route policies — the one place where who may call a route is declared.
+ *
+ * Every API route is registered through `defineRoutes`, never with `router.get(...)`
+ * directly. Each entry names its method, its path (relative to the base), its access
+ * and its handler; the helper registers the route behind a guard that enforces the
+ * access and carries it, so `listRoutes(app)` can read every route's policy back and
+ * a test fails when any route was registered without one.
+ *
+ *   access: 'public'       anyone, signed in or not
+ *   access: 'signed-in'    any signed-in user          → req.user
+ *   access: ['admin', …]   a member of `:orgId` holding one of these roles
+ *                          → req.user and req.tenant; a non-member gets 404
+ *                          (as for a missing organisation), a member with
+ *                          another role 403. The path must contain `:orgId`.
+ *
+ * Adding a resource under an organisation:
+ *
+ *   export function testsRouter(): Router {
+ *     return defineRoutes('/api/orgs/:orgId/tests', [
+ *       { method: 'get', path: '/', access: ['technician', 'lab_manager', 'designer'], handler: list },
+ *       { method: 'post', path: '/', access: ['technician'], before: [upload.single('file')], handler: create },
+ *     ]);
+ *   }
+ *   // and in app.ts: app.use(testsRouter());
+ */
+export type Access = 'public' | 'signed-in' | readonly Role[];
+
+export type HttpMethod = 'get' | 'post' | 'put' | 'patch' | 'delete';
+
+export interface RouteDefinition {
+  method: HttpMethod;
+  /** Relative to the base given to defineRoutes; '/' for the base itself. */
+  path: string;
+  access: Access;
+  /** Middleware run after the guard and before the handler (rate limits, uploads). */
+  before?: RequestHandler[];
+  /** Thin: parse, call a service, send. A rejected promise reaches the error middleware. */
+  handler: (req: Request, res: Response) => unknown;
+}
+
+export interface RoutePolicy {
+  method: string;
+  path: string;
+  access: Access | undefined;
+}
+
+const ACCESS = Symbol('porestack.access');
+type Guard = RequestHandler & { [ACCESS]: Access };
+
+function guardFor(access: Access): Guard {
+  const guard: RequestHandler = async (req: Request, _res: Response, next: NextFunction) => {
+    if (access === 'public') return next();
+    req.user = await authenticate(req);
+    if (access !== 'signed-in') {
+      req.tenant = await resolveTenant(req.user.id, req.params['orgId'] as string | undefined, access);
+    }
+    next();
+  };
+  return Object.assign(guard, { [ACCESS]: access });
+}
+
+function joinPath(base: string, path: string): string {
+  if (path === '/' || path === '') return base || '/';
+  return `${base.replace(/\/$/, '')}${path.startsWith('/') ? path : `/${path}`}`;
+}
+
+/**
+ * A router whose routes are registered at their full paths (mount it with `app.use(router)`,
+ * without a path, so the full paths stay visible to `listRoutes`).
+ */
+export function defineRoutes(base: string, routes: RouteDefinition[]): Router {
+  const router = Router();
+  for (const route of routes) {
+    const fullPath = joinPath(base, route.path);
+    if (Array.isArray(route.access) && !fullPath.includes(':orgId')) {
+      throw new Error(`${route.method.toUpperCase()} ${fullPath}: a role policy needs an :orgId in the path`);
+    }
+    router[route.method](fullPath, guardFor(route.access), ...(route.before ?? []), async (req, res) => {
+      await route.handler(req, res);
+    });
+  }
+  return router;
+}
+
+interface StackLayer {
+  route?: { path: string; methods: Record<string, boolean>; stack: Array<{ handle: unknown }> };
+  handle?: { stack?: StackLayer[] };
+}
+
+function collect(stack: StackLayer[], into: RoutePolicy[]): void {
+  for (const layer of stack) {
+    if (layer.route) {
+      const guard = layer.route.stack[0]?.handle as Partial<Guard> | undefined;
+      const access = guard?.[ACCESS];
+      for (const method of Object.keys(layer.route.methods)) {
+        into.push({ method: method.toUpperCase(), path: layer.route.path, access });
+      }
+    } else if (layer.handle?.stack) {
+      collect(layer.handle.stack, into);
+    }
+  }
+}
+
+/** Every route registered on the app, with its declared access (undefined when it has none). */
+export function listRoutes(app: Express): RoutePolicy[] {
+  const routes: RoutePolicy[] = [];
+  collect((app.router as unknown as { stack: StackLayer[] }).stack, routes);
+  return routes;
+}

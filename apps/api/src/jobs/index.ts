@@ -1,0 +1,5 @@
+import { deleteExpiredTokensJob } from './delete-expired-tokens.job.js';
+import type { JobDefinition } from './job-definition.js';
+
+/** Every job the worker runs. */
+export const JOBS: JobDefinition[] = [deleteExpiredTokensJob];

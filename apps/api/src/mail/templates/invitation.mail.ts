@@ -1,0 +1,21 @@
+import { ROLE_LABELS, type Role } from '@porestack/types';
+import { renderMail, type MailContent } from './layout.js';
+
+export function invitationMail(input: {
+  organisationName: string;
+  invitedBy: string;
+  role: Role;
+  url: string;
+  validDays: number;
+}): MailContent {
+  return renderMail({
+    subject: `${input.invitedBy} invited you to ${input.organisationName} on Porestack`,
+    paragraphs: [
+      'Hello,',
+      `${input.invitedBy} invited you to join ${input.organisationName} on Porestack as ${ROLE_LABELS[input.role]}.`,
+      `Open the link below to accept. It works once, for ${input.validDays} days.`,
+    ],
+    action: { label: 'Accept the invitation', url: input.url },
+    footer: 'If you were not expecting this, ignore this e-mail: nothing happens until the link is opened and accepted.',
+  });
+}

@@ -1,0 +1,17 @@
+import type { Router } from 'express';
+import { currentTenant } from '../../http/request-context.js';
+import { defineRoutes } from '../../http/routes.js';
+import { audit } from './audit.service.js';
+
+export function auditRouter(): Router {
+  return defineRoutes('/api/orgs/:orgId/audit', [
+    {
+      method: 'get',
+      path: '/',
+      access: ['admin'],
+      handler: async (req, res) => {
+        res.json(await audit.list(currentTenant(req).orgId));
+      },
+    },
+  ]);
+}

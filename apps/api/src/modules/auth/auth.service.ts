@@ -1,0 +1,72 @@
+import type { Session, SignIn, SignUp } from '@porestack/types';
+import { dataSource } from '../../data-source.js';
+import { audit } from '../audit/audit.service.js';
+import { MembershipEntity } from '../organisations/membership.entity.js';
+import { OrganisationEntity } from '../organisations/organisation.entity.js';
+import { hashPassword, verifyAgainstNothing, verifyPassword } from '../users/passwords.js';
+import { sessionFor } from '../users/sessions.service.js';
+import { UserEntity } from '../users/user.entity.js';
+import { emailTaken, invalidCredentials } from './auth.exception.js';
+
+export interface SignedIn {
+  user: UserEntity;
+  session: Session;
+}
+
+/** Creates the account and its organisation, with the new user as its admin. */
+export async function signUp(input: SignUp): Promise<SignedIn> {
+  const passwordHash = await hashPassword(input.password);
+  return dataSource.transaction(async (manager) => {
+    const users = manager.getRepository(UserEntity);
+    if (await users.existsBy({ email: input.email })) throw emailTaken();
+    const user = await users.save(users.create({ email: input.email, name: input.name, passwordHash }));
+    const organisations = manager.getRepository(OrganisationEntity);
+    const organisation = await organisations.save(organisations.create({ name: input.organisationName }));
+    await manager.getRepository(MembershipEntity).insert({ organisationId: organisation.id, userId: user.id, role: 'admin' });
+    await audit.record(
+      { organisationId: null, actorUserId: user.id, action: 'user.signed_up', objectType: 'user', objectId: user.id },
+      manager,
+    );
+    await audit.record(
+      {
+        organisationId: organisation.id,
+        actorUserId: user.id,
+        action: 'organisation.created',
+        objectType: 'organisation',
+        objectId: organisation.id,
+        details: { name: organisation.name },
+      },
+      manager,
+    );
+    return { user, session: await sessionFor(user, manager) };
+  });
+}
+
+export async function signIn(input: SignIn, ip: string | undefined): Promise<SignedIn> {
+  const user = await dataSource.getRepository(UserEntity).findOneBy({ email: input.email });
+  const valid = user ? await verifyPassword(input.password, user.passwordHash) : await verifyAgainstNothing(input.password);
+  if (!user || !valid) {
+    await audit.record({
+      organisationId: null,
+      actorUserId: user?.id ?? null,
+      action: 'auth.sign_in_failed',
+      objectType: 'user',
+      objectId: user?.id ?? null,
+      details: { email: input.email, ip: ip ?? null },
+    });
+    throw invalidCredentials();
+  }
+  await audit.record({
+    organisationId: null,
+    actorUserId: user.id,
+    action: 'auth.signed_in',
+    objectType: 'user',
+    objectId: user.id,
+    details: { ip: ip ?? null },
+  });
+  return { user, session: await sessionFor(user) };
+}
+
+export async function recordSignOut(userId: string): Promise<void> {
+  await audit.record({ organisationId: null, actorUserId: userId, action: 'auth.signed_out', objectType: 'user', objectId: userId });
+}

@@ -1,0 +1,71 @@
+import { InvitationAcceptSchema, InvitationCreateSchema } from '@porestack/types';
+import type { Router } from 'express';
+import { uuidParam } from '../../http/params.js';
+import { parse } from '../../http/parse.js';
+import { currentTenant, currentUser } from '../../http/request-context.js';
+import { defineRoutes } from '../../http/routes.js';
+import { setSessionCookie } from '../../http/session-cookie.js';
+import { sessionFor } from '../users/sessions.service.js';
+import {
+  acceptInvitation,
+  createInvitation,
+  listPendingInvitations,
+  previewInvitation,
+  revokeInvitation,
+} from './invitations.service.js';
+
+/** What an invitee opens from the e-mail: the token is the credential. */
+export function invitationsRouter(): Router {
+  return defineRoutes('/api/invitations', [
+    {
+      method: 'get',
+      path: '/:token',
+      access: 'public',
+      handler: async (req, res) => {
+        res.json(await previewInvitation(String(req.params['token'])));
+      },
+    },
+    {
+      method: 'post',
+      path: '/:token/accept',
+      access: 'public',
+      handler: async (req, res) => {
+        const user = await acceptInvitation(String(req.params['token']), parse(InvitationAcceptSchema, req.body));
+        setSessionCookie(res, user);
+        res.json(await sessionFor(user));
+      },
+    },
+  ]);
+}
+
+/** An organisation's invitations, managed by its admins. */
+export function orgInvitationsRouter(): Router {
+  return defineRoutes('/api/orgs/:orgId/invitations', [
+    {
+      method: 'get',
+      path: '/',
+      access: ['admin'],
+      handler: async (req, res) => {
+        res.json(await listPendingInvitations(currentTenant(req).orgId));
+      },
+    },
+    {
+      method: 'post',
+      path: '/',
+      access: ['admin'],
+      handler: async (req, res) => {
+        const input = parse(InvitationCreateSchema, req.body);
+        res.status(201).json(await createInvitation(currentTenant(req).orgId, currentUser(req), input));
+      },
+    },
+    {
+      method: 'delete',
+      path: '/:invitationId',
+      access: ['admin'],
+      handler: async (req, res) => {
+        await revokeInvitation(currentTenant(req).orgId, uuidParam(req, 'invitationId', 'invitation'), currentUser(req));
+        res.status(204).end();
+      },
+    },
+  ]);
+}

@@ -1,0 +1,188 @@
+import type { Invitation, InvitationAccept, InvitationCreate, InvitationPreview } from '@porestack/types';
+import { IsNull, MoreThan, type EntityManager } from 'typeorm';
+import { dataSource } from '../../data-source.js';
+import { NotFoundError } from '../../errors/domain-error.js';
+import { publicLink, sendMail } from '../../mail/mailer.js';
+import { invitationMail } from '../../mail/templates/invitation.mail.js';
+import { audit } from '../audit/audit.service.js';
+import { invalidCredentials } from '../auth/auth.exception.js';
+import { createOneTimeToken, hashToken } from '../auth/one-time-token.js';
+import { MembershipEntity } from '../organisations/membership.entity.js';
+import { OrganisationEntity } from '../organisations/organisation.entity.js';
+import { hashPassword, MIN_PASSWORD_LENGTH, verifyPassword } from '../users/passwords.js';
+import { UserEntity } from '../users/user.entity.js';
+import {
+  alreadyMember,
+  invitationExpired,
+  invitationRevoked,
+  invitationUnknown,
+  invitationUsed,
+  nameRequired,
+  passwordTooShort,
+} from './invitation.exception.js';
+import { InvitationEntity } from './invitation.entity.js';
+
+export const INVITATION_DAYS = 7;
+
+function toDto(row: InvitationEntity): Invitation {
+  return {
+    id: row.id,
+    email: row.email,
+    role: row.role,
+    invitedBy: row.invitedBy.name,
+    createdAt: row.createdAt.toISOString(),
+    expiresAt: row.expiresAt.toISOString(),
+  };
+}
+
+async function isMember(manager: EntityManager, orgId: string, email: string): Promise<boolean> {
+  return manager
+    .getRepository(MembershipEntity)
+    .createQueryBuilder('m')
+    .innerJoin('m.user', 'u')
+    .where('m.organisation_id = :orgId AND u.email = :email', { orgId, email })
+    .getExists();
+}
+
+/** Invites by e-mail; a new invitation to the same address replaces the pending one. */
+export async function createInvitation(orgId: string, actor: UserEntity, input: InvitationCreate): Promise<Invitation> {
+  const { token, tokenHash } = createOneTimeToken();
+  const { row, organisation } = await dataSource.transaction(async (manager) => {
+    if (await isMember(manager, orgId, input.email)) throw alreadyMember(input.email);
+    const invitations = manager.getRepository(InvitationEntity);
+    await invitations.update(
+      { organisationId: orgId, email: input.email, acceptedAt: IsNull(), revokedAt: IsNull() },
+      { revokedAt: new Date() },
+    );
+    const saved = await invitations.save(
+      invitations.create({
+        organisationId: orgId,
+        email: input.email,
+        role: input.role,
+        tokenHash,
+        invitedById: actor.id,
+        expiresAt: new Date(Date.now() + INVITATION_DAYS * 24 * 3600_000),
+      }),
+    );
+    await audit.record(
+      {
+        organisationId: orgId,
+        actorUserId: actor.id,
+        action: 'invitation.created',
+        objectType: 'invitation',
+        objectId: saved.id,
+        details: { email: input.email, role: input.role },
+      },
+      manager,
+    );
+    const org = await manager.getRepository(OrganisationEntity).findOneByOrFail({ id: orgId });
+    return { row: Object.assign(saved, { invitedBy: actor }), organisation: org };
+  });
+  await sendMail(
+    input.email,
+    invitationMail({
+      organisationName: organisation.name,
+      invitedBy: actor.name,
+      role: input.role,
+      url: publicLink(`/invitations/${encodeURIComponent(token)}`),
+      validDays: INVITATION_DAYS,
+    }),
+  );
+  return toDto(row);
+}
+
+/** Invitations neither accepted, withdrawn nor expired, newest first. */
+export async function listPendingInvitations(orgId: string): Promise<Invitation[]> {
+  const rows = await dataSource.getRepository(InvitationEntity).find({
+    where: { organisationId: orgId, acceptedAt: IsNull(), revokedAt: IsNull(), expiresAt: MoreThan(new Date()) },
+    relations: { invitedBy: true },
+    order: { createdAt: 'DESC' },
+  });
+  return rows.map(toDto);
+}
+
+export async function revokeInvitation(orgId: string, invitationId: string, actor: UserEntity): Promise<void> {
+  await dataSource.transaction(async (manager) => {
+    const invitations = manager.getRepository(InvitationEntity);
+    const row = await invitations.findOneBy({ organisationId: orgId, id: invitationId, acceptedAt: IsNull(), revokedAt: IsNull() });
+    if (!row) throw new NotFoundError('invitation');
+    await invitations.update({ organisationId: orgId, id: row.id }, { revokedAt: new Date() });
+    await audit.record(
+      {
+        organisationId: orgId,
+        actorUserId: actor.id,
+        action: 'invitation.revoked',
+        objectType: 'invitation',
+        objectId: row.id,
+        details: { email: row.email, role: row.role },
+      },
+      manager,
+    );
+  });
+}
+
+/** The invitation a link stands for, if it can still be accepted. */
+async function usableInvitation(manager: EntityManager, token: string, lock: boolean): Promise<InvitationEntity> {
+  const invitations = manager.getRepository(InvitationEntity);
+  const found = await invitations.findOne({
+    where: { tokenHash: hashToken(token) },
+    ...(lock ? { lock: { mode: 'pessimistic_write' as const } } : {}),
+  });
+  if (!found) throw invitationUnknown();
+  if (found.acceptedAt) throw invitationUsed();
+  if (found.revokedAt) throw invitationRevoked();
+  if (found.expiresAt.getTime() <= Date.now()) throw invitationExpired();
+  const row = await invitations.findOneOrFail({ where: { id: found.id }, relations: { organisation: true, invitedBy: true } });
+  return row;
+}
+
+export async function previewInvitation(token: string): Promise<InvitationPreview> {
+  const row = await usableInvitation(dataSource.manager, token, false);
+  const accountExists = await dataSource.getRepository(UserEntity).existsBy({ email: row.email });
+  return {
+    organisationName: row.organisation.name,
+    email: row.email,
+    role: row.role,
+    invitedBy: row.invitedBy.name,
+    accountExists,
+    expiresAt: row.expiresAt.toISOString(),
+  };
+}
+
+/**
+ * Accepts: creates the account (name + new password) or, when the e-mail already has one,
+ * checks its password; then adds the membership and spends the invitation.
+ */
+export async function acceptInvitation(token: string, input: InvitationAccept): Promise<UserEntity> {
+  return dataSource.transaction(async (manager) => {
+    const row = await usableInvitation(manager, token, true);
+    const users = manager.getRepository(UserEntity);
+    let user = await users.findOneBy({ email: row.email });
+    if (user) {
+      if (!(await verifyPassword(input.password, user.passwordHash))) throw invalidCredentials();
+      if (await isMember(manager, row.organisationId, row.email)) throw alreadyMember(row.email);
+    } else {
+      if (!input.name) throw nameRequired();
+      if (input.password.length < MIN_PASSWORD_LENGTH) throw passwordTooShort(MIN_PASSWORD_LENGTH);
+      user = await users.save(users.create({ email: row.email, name: input.name, passwordHash: await hashPassword(input.password) }));
+      await audit.record(
+        { organisationId: null, actorUserId: user.id, action: 'user.signed_up', objectType: 'user', objectId: user.id, details: { via: 'invitation' } },
+        manager,
+      );
+    }
+    await manager.getRepository(MembershipEntity).insert({ organisationId: row.organisationId, userId: user.id, role: row.role });
+    await manager.getRepository(InvitationEntity).update({ organisationId: row.organisationId, id: row.id }, { acceptedAt: new Date() });
+    await audit.record(
+      {
+        organisationId: row.organisationId,
+        actorUserId: user.id,
+        action: 'invitation.accepted',
+        objectType: 'invitation',
+        objectId: row.id,
+        details: { email: row.email, role: row.role },
+      },
+      manager,
+    );
+    return user;
+  });
+}

@@ -1,0 +1,39 @@
+import { MemberRoleUpdateSchema } from '@porestack/types';
+import type { Router } from 'express';
+import { uuidParam } from '../../http/params.js';
+import { parse } from '../../http/parse.js';
+import { currentTenant, currentUser } from '../../http/request-context.js';
+import { defineRoutes } from '../../http/routes.js';
+import { changeMemberRole, listMembers, removeMember } from './members.service.js';
+
+export function membersRouter(): Router {
+  return defineRoutes('/api/orgs/:orgId/members', [
+    {
+      method: 'get',
+      path: '/',
+      access: ['admin'],
+      handler: async (req, res) => {
+        res.json(await listMembers(currentTenant(req).orgId));
+      },
+    },
+    {
+      method: 'patch',
+      path: '/:userId',
+      access: ['admin'],
+      handler: async (req, res) => {
+        const userId = uuidParam(req, 'userId', 'member');
+        const { role } = parse(MemberRoleUpdateSchema, req.body);
+        res.json(await changeMemberRole(currentTenant(req).orgId, userId, role, currentUser(req)));
+      },
+    },
+    {
+      method: 'delete',
+      path: '/:userId',
+      access: ['admin'],
+      handler: async (req, res) => {
+        await removeMember(currentTenant(req).orgId, uuidParam(req, 'userId', 'member'), currentUser(req));
+        res.status(204).end();
+      },
+    },
+  ]);
+}

@@ -1,0 +1,24 @@
+import { ROLE_LABELS } from '@porestack/types';
+import type { DataSource } from 'typeorm';
+import { DEMO_ACCOUNTS, DEMO_PASSWORD, seedDemoOrganisation, type DemoOrganisation } from './demo-organisation.seed.js';
+
+export interface SeedResult {
+  demo: DemoOrganisation;
+  /** Lines for the person starting the portal (npm start prints them as they are). */
+  banner: string[];
+}
+
+/**
+ * Seeds the demo data in one transaction; running it again creates nothing twice.
+ * Later parts (lab projects, tests) go after the organisation and use `demo.userIds`.
+ */
+export async function seed(dataSource: DataSource): Promise<SeedResult> {
+  const demo = await dataSource.transaction((manager) => seedDemoOrganisation(manager));
+  const width = Math.max(...DEMO_ACCOUNTS.map((a) => ROLE_LABELS[a.role].length));
+  const banner = [
+    `  Demo organisation:        ${demo.organisation.name}`,
+    `  Demo accounts (password: ${DEMO_PASSWORD}):`,
+    ...DEMO_ACCOUNTS.map((a) => `    ${ROLE_LABELS[a.role].padEnd(width)}  ${a.email}`),
+  ];
+  return { demo, banner };
+}

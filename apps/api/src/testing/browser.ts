@@ -1,0 +1,82 @@
+import { randomUUID } from 'node:crypto';
+import type { Role, Session } from '@porestack/types';
+import type { Express } from 'express';
+import request from 'supertest';
+import { dataSource } from '../data-source.js';
+import { MembershipEntity } from '../modules/organisations/membership.entity.js';
+import { hashPassword } from '../modules/users/passwords.js';
+import { UserEntity } from '../modules/users/user.entity.js';
+
+export const TEST_PASSWORD = 'correct-horse-battery';
+
+/** An e-mail address no other test uses, at a domain that can never receive mail. */
+export function uniqueEmail(label: string): string {
+  return `${label}-${randomUUID().slice(0, 8)}@example.test`;
+}
+
+/**
+ * A browser tab against the app: keeps cookies like a browser, fetched the CSRF token
+ * once, and sends it on every state-changing request as the web app does.
+ */
+export interface Browser {
+  agent: ReturnType<typeof request.agent>;
+  csrfToken: string;
+  get(url: string): request.Test;
+  post(url: string, body?: object | string): request.Test;
+  patch(url: string, body?: object): request.Test;
+  delete(url: string): request.Test;
+}
+
+export async function openBrowser(app: Express): Promise<Browser> {
+  const agent = request.agent(app);
+  const res = await agent.get('/api/auth/csrf').expect(200);
+  const csrfToken = (res.body as { csrfToken: string }).csrfToken;
+  return {
+    agent,
+    csrfToken,
+    get: (url) => agent.get(url),
+    post: (url, body) => {
+      const req = agent.post(url).set('x-csrf-token', csrfToken);
+      return typeof body === 'string' ? req.set('content-type', 'application/json').send(body) : req.send(body ?? {});
+    },
+    patch: (url, body) => agent.patch(url).set('x-csrf-token', csrfToken).send(body ?? {}),
+    delete: (url) => agent.delete(url).set('x-csrf-token', csrfToken),
+  };
+}
+
+export interface SignedUpAdmin {
+  browser: Browser;
+  session: Session;
+  orgId: string;
+  email: string;
+}
+
+/** Signs up through the API: a new user who is admin of a new organisation. */
+export async function signUpAdmin(app: Express, label = 'admin'): Promise<SignedUpAdmin> {
+  const browser = await openBrowser(app);
+  const email = uniqueEmail(label);
+  const res = await browser
+    .post('/api/auth/sign-up', { name: `Test ${label}`, email, password: TEST_PASSWORD, organisationName: `Org of ${label}` })
+    .expect(201);
+  const session = res.body as Session;
+  const orgId = session.memberships[0]?.organisationId;
+  if (!orgId) throw new Error('sign-up answered without a membership');
+  return { browser, session, orgId, email };
+}
+
+/** A user added straight to the database with a role in `orgId` (faster than an invitation). */
+export async function createMember(orgId: string, role: Role, label: string = role): Promise<{ userId: string; email: string }> {
+  const email = uniqueEmail(label);
+  const user = await dataSource
+    .getRepository(UserEntity)
+    .save({ email, name: `Test ${label}`, passwordHash: await hashPassword(TEST_PASSWORD) });
+  await dataSource.getRepository(MembershipEntity).insert({ organisationId: orgId, userId: user.id, role });
+  return { userId: user.id, email };
+}
+
+/** A browser signed in as `email` (password TEST_PASSWORD). */
+export async function signedInBrowser(app: Express, email: string): Promise<Browser> {
+  const browser = await openBrowser(app);
+  await browser.post('/api/auth/sign-in', { email, password: TEST_PASSWORD }).expect(200);
+  return browser;
+}
