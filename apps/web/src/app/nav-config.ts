@@ -1,0 +1,36 @@
+import { ROLES, type Role } from '@porestack/types';
+import { paths } from '../config/paths';
+
+export type NavItem = {
+  /** Stable id, also used by the route guard to find who may open the page. */
+  id: string;
+  label: string;
+  to: (orgId: string) => string;
+  /** Roles that see the entry and may open the page. */
+  roles: readonly Role[];
+  /** Match the path exactly (the organisation home would otherwise be active everywhere). */
+  end?: boolean;
+};
+
+/**
+ * The organisation navigation, in display order. To add a page: add an entry here, a route in
+ * router.tsx guarded with `rolesFor('<id>')`, and its path in config/paths.ts.
+ */
+export const NAV_ITEMS = [
+  { id: 'home', label: 'Home', to: paths.org.home.to, roles: ROLES, end: true },
+  { id: 'members', label: 'Members', to: paths.org.members.to, roles: ['admin'] },
+  { id: 'activity', label: 'Activity', to: paths.org.activity.to, roles: ['admin'] },
+] as const satisfies readonly NavItem[];
+
+export type NavItemId = (typeof NAV_ITEMS)[number]['id'];
+
+/** The entries one role sees, in order. */
+export function navItemsFor(role: Role): NavItem[] {
+  return NAV_ITEMS.filter((item) => (item.roles as readonly Role[]).includes(role));
+}
+
+/** Who may open a page: the nav and the route guard read the same list. */
+export function rolesFor(id: NavItemId): readonly Role[] {
+  const item = NAV_ITEMS.find((entry) => entry.id === id);
+  return item ? item.roles : [];
+}

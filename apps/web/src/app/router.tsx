@@ -1,0 +1,70 @@
+import { createBrowserRouter, RouterProvider, type RouteObject } from 'react-router-dom';
+import { paths } from '../config/paths';
+import { FullPageSpinner } from './layout/full-page-spinner';
+import { RootLayout } from './layout/root-layout';
+import { RouteErrorBoundary } from './route-error-boundary';
+
+/**
+ * Every page is its own lazily loaded chunk; the shell, error boundary and spinner are the only
+ * eager code. Each route has its own error boundary, so a failure in one page keeps the shell.
+ */
+export const routes: RouteObject[] = [
+  {
+    path: paths.root.pattern,
+    Component: RootLayout,
+    HydrateFallback: FullPageSpinner,
+    ErrorBoundary: RouteErrorBoundary,
+    children: [
+      { index: true, lazy: () => import('./routes/index-route').then((m) => ({ Component: m.IndexRoute })), ErrorBoundary: RouteErrorBoundary },
+      {
+        lazy: () => import('./layout/auth-layout').then((m) => ({ Component: m.AuthLayout })),
+        ErrorBoundary: RouteErrorBoundary,
+        children: [
+          { path: paths.signIn.pattern, lazy: () => import('./routes/sign-in-route').then((m) => ({ Component: m.SignInRoute })), ErrorBoundary: RouteErrorBoundary },
+          { path: paths.signUp.pattern, lazy: () => import('./routes/sign-up-route').then((m) => ({ Component: m.SignUpRoute })), ErrorBoundary: RouteErrorBoundary },
+          {
+            path: paths.forgotPassword.pattern,
+            lazy: () => import('./routes/forgot-password-route').then((m) => ({ Component: m.ForgotPasswordRoute })),
+            ErrorBoundary: RouteErrorBoundary,
+          },
+          {
+            path: paths.resetPassword.pattern,
+            lazy: () => import('./routes/reset-password-route').then((m) => ({ Component: m.ResetPasswordRoute })),
+            ErrorBoundary: RouteErrorBoundary,
+          },
+          {
+            path: paths.invitation.pattern,
+            lazy: () => import('./routes/invitation-route').then((m) => ({ Component: m.InvitationRoute })),
+            ErrorBoundary: RouteErrorBoundary,
+          },
+        ],
+      },
+      {
+        path: paths.org.home.pattern,
+        lazy: () => import('./layout/org-layout').then((m) => ({ Component: m.OrgLayout })),
+        ErrorBoundary: RouteErrorBoundary,
+        children: [
+          { index: true, lazy: () => import('./routes/org-home-route').then((m) => ({ Component: m.OrgHomeRoute })), ErrorBoundary: RouteErrorBoundary },
+          {
+            path: paths.org.members.pattern,
+            lazy: () => import('./routes/members-route').then((m) => ({ Component: m.MembersRoute })),
+            ErrorBoundary: RouteErrorBoundary,
+          },
+          {
+            path: paths.org.activity.pattern,
+            lazy: () => import('./routes/activity-route').then((m) => ({ Component: m.ActivityRoute })),
+            ErrorBoundary: RouteErrorBoundary,
+          },
+          { path: '*', lazy: () => import('./routes/not-found-route').then((m) => ({ Component: m.NotFoundRoute })), ErrorBoundary: RouteErrorBoundary },
+        ],
+      },
+      { path: '*', lazy: () => import('./routes/not-found-route').then((m) => ({ Component: m.NotFoundRoute })), ErrorBoundary: RouteErrorBoundary },
+    ],
+  },
+];
+
+const router = createBrowserRouter(routes);
+
+export function AppRouter() {
+  return <RouterProvider router={router} />;
+}

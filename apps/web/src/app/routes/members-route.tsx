@@ -1,0 +1,61 @@
+import { EmptyState } from '../../components/empty-state';
+import { ErrorMessage } from '../../components/error-message';
+import { PageHeader } from '../../components/page-header';
+import { Panel } from '../../components/panel';
+import { LoadingBlock } from '../../components/spinner';
+import { useInvitations } from '../../features/organisations/api/get-invitations';
+import { useMembers } from '../../features/organisations/api/get-members';
+import { InvitationsTable } from '../../features/organisations/components/invitations-table';
+import { InviteForm } from '../../features/organisations/components/invite-form';
+import { MembersTable } from '../../features/organisations/components/members-table';
+import { rolesFor } from '../nav-config';
+import { useCurrentOrg } from '../org-context';
+import { RoleGate } from '../role-gate';
+
+export function MembersRoute() {
+  return (
+    <RoleGate roles={rolesFor('members')} purpose="managing members">
+      <MembersPage />
+    </RoleGate>
+  );
+}
+
+function MembersPage() {
+  const { orgId, user, membership } = useCurrentOrg();
+  const members = useMembers(orgId);
+  const invitations = useInvitations(orgId);
+
+  return (
+    <>
+      <PageHeader
+        title="Members"
+        description={`Everyone who works in ${membership.organisationName}, and the role that decides what each can do.`}
+      />
+      <div className="flex flex-col gap-6">
+        <Panel title="Invite a colleague" description="They get an e-mail with a link to join. The link expires after a few days.">
+          <InviteForm orgId={orgId} />
+        </Panel>
+        <Panel title="Pending invitations">
+          {invitations.isPending ? (
+            <LoadingBlock label="Loading invitations…" />
+          ) : invitations.error ? (
+            <ErrorMessage error={invitations.error} title="The invitations could not be loaded" onRetry={() => void invitations.refetch()} />
+          ) : invitations.data.length === 0 ? (
+            <EmptyState title="No invitations waiting">Invitations you send appear here until they are accepted.</EmptyState>
+          ) : (
+            <InvitationsTable orgId={orgId} invitations={invitations.data} />
+          )}
+        </Panel>
+        <Panel title="Members">
+          {members.isPending ? (
+            <LoadingBlock label="Loading members…" />
+          ) : members.error ? (
+            <ErrorMessage error={members.error} title="The members could not be loaded" onRetry={() => void members.refetch()} />
+          ) : (
+            <MembersTable orgId={orgId} members={members.data} currentUserId={user.id} />
+          )}
+        </Panel>
+      </div>
+    </>
+  );
+}

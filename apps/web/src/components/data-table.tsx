@@ -1,0 +1,34 @@
+import { flexRender, type Table } from '@tanstack/react-table';
+
+/** Dense, readable table markup for a TanStack table instance. */
+export function DataTable<Row>({ table, caption }: { table: Table<Row>; caption: string }) {
+  return (
+    <div className="overflow-x-auto rounded-lg border border-slate-200 bg-white">
+      <table className="w-full border-collapse text-left text-sm">
+        <caption className="sr-only">{caption}</caption>
+        <thead className="bg-slate-50 text-xs uppercase tracking-wide text-slate-500">
+          {table.getHeaderGroups().map((group) => (
+            <tr key={group.id}>
+              {group.headers.map((header) => (
+                <th key={header.id} scope="col" className="border-b border-slate-200 px-4 py-2 font-medium">
+                  {header.isPlaceholder ? null : flexRender(header.column.columnDef.header, header.getContext())}
+                </th>
+              ))}
+            </tr>
+          ))}
+        </thead>
+        <tbody>
+          {table.getRowModel().rows.map((row) => (
+            <tr key={row.id} className="border-b border-slate-100 last:border-b-0 hover:bg-slate-50/60">
+              {row.getVisibleCells().map((cell) => (
+                <td key={cell.id} className="px-4 py-2 align-middle text-slate-700">
+                  {flexRender(cell.column.columnDef.cell, cell.getContext())}
+                </td>
+              ))}
+            </tr>
+          ))}
+        </tbody>
+      </table>
+    </div>
+  );
+}

@@ -1,0 +1,58 @@
+import { ROLE_LABELS, type Invitation } from '@porestack/types';
+import { createColumnHelper, getCoreRowModel, useReactTable } from '@tanstack/react-table';
+import { useMemo, useState } from 'react';
+import { Button } from '../../../components/button';
+import { ConfirmDialog } from '../../../components/confirm-dialog';
+import { DataTable } from '../../../components/data-table';
+import { formatDateTime } from '../../../lib/format';
+import { useRevokeInvitation } from '../api/revoke-invitation';
+
+const column = createColumnHelper<Invitation>();
+
+export function InvitationsTable({ orgId, invitations }: { orgId: string; invitations: readonly Invitation[] }) {
+  const revoke = useRevokeInvitation(orgId);
+  const [toRevoke, setToRevoke] = useState<Invitation | null>(null);
+
+  const columns = useMemo(
+    () => [
+      column.accessor('email', { header: 'E-mail', cell: (info) => <span className="break-all font-medium text-slate-900">{info.getValue()}</span> }),
+      column.accessor('role', { header: 'Role', cell: (info) => ROLE_LABELS[info.getValue()] }),
+      column.accessor('invitedBy', { header: 'Invited by' }),
+      column.accessor('expiresAt', { header: 'Link expires', cell: (info) => formatDateTime(info.getValue()) }),
+      column.display({
+        id: 'actions',
+        header: () => <span className="sr-only">Actions</span>,
+        cell: (info) => (
+          <Button variant="ghost" size="sm" className="text-red-700" onClick={() => setToRevoke(info.row.original)}>
+            Revoke<span className="sr-only"> the invitation for {info.row.original.email}</span>
+          </Button>
+        ),
+      }),
+    ],
+    [],
+  );
+
+  const table = useReactTable({ data: invitations as Invitation[], columns, getCoreRowModel: getCoreRowModel(), getRowId: (row) => row.id });
+
+  return (
+    <>
+      <DataTable table={table} caption="Invitations waiting for an answer" />
+      <ConfirmDialog
+        open={toRevoke !== null}
+        title="Revoke this invitation?"
+        confirmLabel="Revoke invitation"
+        pending={revoke.isPending}
+        error={revoke.error}
+        onCancel={() => {
+          setToRevoke(null);
+          revoke.reset();
+        }}
+        onConfirm={() => {
+          if (toRevoke) revoke.mutate(toRevoke.id, { onSuccess: () => setToRevoke(null) });
+        }}
+      >
+        The link sent to {toRevoke?.email} stops working. You can send a new invitation at any time.
+      </ConfirmDialog>
+    </>
+  );
+}
