@@ -10,7 +10,7 @@ const config = env();
 await dataSource.initialize();
 await ensureBucket();
 
-const server = createApp().listen(config.PORT, '127.0.0.1', () => {
+const server = createApp().listen(config.PORT, config.HOST, () => {
   logger.info({ port: config.PORT, publicUrl: config.PUBLIC_URL }, 'Porestack API listening');
 });
 

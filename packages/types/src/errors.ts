@@ -1,5 +1,30 @@
 import { z } from 'zod';
 
+/**
+ * Every `code` the API answers with. The web app may switch on them (e.g. `csrf_invalid`:
+ * fetch a new token; `unauthenticated`: go to sign-in); the message is for the person.
+ */
+export const API_ERROR_CODES = [
+  'invalid_json',
+  'validation_failed',
+  'payload_too_large',
+  'csrf_invalid',
+  'unauthenticated',
+  'invalid_credentials',
+  'forbidden',
+  'not_found',
+  'email_taken',
+  'already_member',
+  'last_admin',
+  'rate_limited',
+  'token_invalid',
+  'token_used',
+  'token_expired',
+  'service_unavailable',
+  'internal',
+] as const;
+export type ApiErrorCode = (typeof API_ERROR_CODES)[number];
+
 /** Every error the API answers with has this body. */
 export const ApiErrorSchema = z.object({
   code: z.string(),

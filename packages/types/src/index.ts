@@ -1,7 +1,7 @@
 export { ROLES, RoleSchema, ROLE_LABELS } from './roles.js';
 export type { Role } from './roles.js';
-export { ApiErrorSchema } from './errors.js';
-export type { ApiError } from './errors.js';
+export { ApiErrorSchema, API_ERROR_CODES } from './errors.js';
+export type { ApiError, ApiErrorCode } from './errors.js';
 export {
   SignUpSchema,
   SignInSchema,

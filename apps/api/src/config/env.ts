@@ -7,6 +7,8 @@ import { z } from 'zod';
 const EnvSchema = z.object({
   NODE_ENV: z.enum(['development', 'test', 'production']).default('development'),
   PORT: z.coerce.number().int().positive().default(3000),
+  /** Loopback by default: a reverse proxy or a person on this machine reaches it. */
+  HOST: z.string().default('127.0.0.1'),
   DATABASE_URL: z.url({ message: 'set DATABASE_URL to a postgres:// URL' }),
   JWT_SECRET: z.string().min(32, { message: 'set JWT_SECRET to at least 32 random characters' }),
   PUBLIC_URL: z.url({ message: 'set PUBLIC_URL to the address people open, like http://127.0.0.1:3000' }),

@@ -1,27 +1,10 @@
+import type { ApiErrorCode } from '@porestack/types';
+
 /**
- * Every code the API can answer with. Services throw DomainError with one of these;
+ * Services throw DomainError with one of the shared API_ERROR_CODES (@porestack/types);
  * only the error middleware knows which HTTP status each code becomes.
  */
-export const ERROR_CODES = [
-  'invalid_json',
-  'validation_failed',
-  'payload_too_large',
-  'csrf_invalid',
-  'unauthenticated',
-  'invalid_credentials',
-  'forbidden',
-  'not_found',
-  'email_taken',
-  'already_member',
-  'last_admin',
-  'rate_limited',
-  'token_invalid',
-  'token_used',
-  'token_expired',
-  'service_unavailable',
-  'internal',
-] as const;
-export type ErrorCode = (typeof ERROR_CODES)[number];
+export type ErrorCode = ApiErrorCode;
 
 export interface FieldIssue {
   path: string;

@@ -16,6 +16,19 @@ export interface SignedIn {
 /** Creates the account and its organisation, with the new user as its admin. */
 export async function signUp(input: SignUp): Promise<SignedIn> {
   const passwordHash = await hashPassword(input.password);
+  return createAccount(input, passwordHash).catch((error: unknown) => {
+    // Two sign-ups with one e-mail at the same moment: the unique index decides.
+    if (isUniqueViolation(error, 'users_email_key')) throw emailTaken();
+    throw error;
+  });
+}
+
+function isUniqueViolation(error: unknown, constraint: string): boolean {
+  const driverError = (error as { driverError?: { code?: string; constraint?: string } }).driverError;
+  return driverError?.code === '23505' && driverError.constraint === constraint;
+}
+
+async function createAccount(input: SignUp, passwordHash: string): Promise<SignedIn> {
   return dataSource.transaction(async (manager) => {
     const users = manager.getRepository(UserEntity);
     if (await users.existsBy({ email: input.email })) throw emailTaken();
