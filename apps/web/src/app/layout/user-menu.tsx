@@ -1,11 +1,8 @@
 import { ROLE_LABELS, type Role, type User } from '@porestack/types';
 import { useEffect, useId, useRef, useState } from 'react';
-import { useNavigate } from 'react-router-dom';
 import { Button } from '../../components/button';
 import { ErrorMessage } from '../../components/error-message';
-import { paths } from '../../config/paths';
 import { useSignOut } from '../../features/auth/api/sign-out';
-import type { SignInState } from '../routes/sign-in-route';
 
 /** The person's name; opens a small panel with their address, role and sign-out. */
 export function UserMenu({ user, role }: { user: User; role: Role | null }) {
@@ -13,7 +10,6 @@ export function UserMenu({ user, role }: { user: User; role: Role | null }) {
   const panelId = useId();
   const containerRef = useRef<HTMLDivElement>(null);
   const signOut = useSignOut();
-  const navigate = useNavigate();
 
   useEffect(() => {
     if (!open) return;
@@ -63,14 +59,7 @@ export function UserMenu({ user, role }: { user: User; role: Role | null }) {
             size="sm"
             className="mt-3 w-full"
             pending={signOut.isPending}
-            onClick={() =>
-              signOut.mutate(undefined, {
-                onSuccess: () => {
-                  const state: SignInState = { notice: 'signed-out' };
-                  void navigate(paths.signIn.to(), { replace: true, state });
-                },
-              })
-            }
+            onClick={() => signOut.mutate()}
           >
             Sign out
           </Button>

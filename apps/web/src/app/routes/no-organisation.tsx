@@ -1,15 +1,12 @@
 import type { User } from '@porestack/types';
-import { useNavigate } from 'react-router-dom';
 import { Button } from '../../components/button';
 import { ErrorMessage } from '../../components/error-message';
-import { paths } from '../../config/paths';
 import { useSignOut } from '../../features/auth/api/sign-out';
 import { Brand } from '../layout/brand';
 
 /** Signed in, but no organisation holds a membership for this person (e.g. they were removed). */
 export function NoOrganisation({ user }: { user: User }) {
   const signOut = useSignOut();
-  const navigate = useNavigate();
   return (
     <div className="mx-auto flex min-h-screen max-w-md flex-col justify-center gap-6 px-4">
       <Brand />
@@ -24,7 +21,7 @@ export function NoOrganisation({ user }: { user: User }) {
           variant="secondary"
           className="mt-5"
           pending={signOut.isPending}
-          onClick={() => signOut.mutate(undefined, { onSuccess: () => void navigate(paths.signIn.to(), { replace: true }) })}
+          onClick={() => signOut.mutate()}
         >
           Sign out
         </Button>

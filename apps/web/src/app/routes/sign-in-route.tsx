@@ -1,14 +1,15 @@
-import { Link, Navigate, useLocation, useNavigate } from 'react-router-dom';
+import { Link, Navigate, useLocation, useNavigate, useSearchParams } from 'react-router-dom';
 import { Alert } from '../../components/alert';
 import { paths } from '../../config/paths';
 import { SignInForm } from '../../features/auth/components/sign-in-form';
 import { useSession } from '../../features/auth/hooks/use-session';
 import { AuthPanel } from '../layout/auth-panel';
 
-/** What other pages may pass when they send someone here. */
-export type SignInState = { from?: string; notice?: 'signed-out' | 'password-changed' };
+/** What other pages may pass when they send someone here (sign-out passes `?notice=signed-out`, as it reloads). */
+export type SignInState = { from?: string; notice?: Notice };
+type Notice = 'signed-out' | 'password-changed';
 
-const NOTICES: Record<NonNullable<SignInState['notice']>, string> = {
+const NOTICES: Record<Notice, string> = {
   'signed-out': 'You are signed out. Sign in again whenever you need Porestack.',
   'password-changed': 'Your new password is saved. Sign in with it now.',
 };
@@ -16,6 +17,9 @@ const NOTICES: Record<NonNullable<SignInState['notice']>, string> = {
 export function SignInRoute() {
   const navigate = useNavigate();
   const state = (useLocation().state ?? {}) as SignInState;
+  const [params] = useSearchParams();
+  const noticeParam = params.get('notice');
+  const notice = state.notice ?? (noticeParam === 'signed-out' ? noticeParam : undefined);
   const { session } = useSession();
   if (session) return <Navigate to={paths.root.to()} replace />;
 
@@ -32,9 +36,9 @@ export function SignInRoute() {
         </>
       }
     >
-      {state.notice ? (
+      {notice ? (
         <Alert tone="success" className="mb-4">
-          {NOTICES[state.notice]}
+          {NOTICES[notice]}
         </Alert>
       ) : null}
       <SignInForm onSignedIn={() => void navigate(state.from ?? paths.root.to(), { replace: true })} />

@@ -1,0 +1,89 @@
+import { expect, test } from '@playwright/test';
+import { linkFromMail } from './support/mail';
+import { newPerson, signUp } from './support/people';
+
+test('an admin invites a technician, who joins from the e-mailed link and sees only what a technician may use', async ({
+  page,
+  browser,
+}) => {
+  const admin = newPerson('admin');
+  const technician = newPerson('technician');
+  const orgId = await signUp(page, admin);
+
+  await page.getByRole('navigation', { name: 'Organisation' }).getByRole('link', { name: 'Members' }).click();
+  await expect(page.getByRole('heading', { level: 1, name: 'Members' })).toBeVisible();
+  const inviteForm = page.getByRole('form', { name: 'Invite a colleague' });
+  await inviteForm.getByLabel('E-mail address').fill(technician.email);
+  await inviteForm.getByLabel('Role').selectOption('technician');
+  await inviteForm.getByRole('button', { name: 'Send invitation' }).click();
+  await expect(page.getByText(`Invitation sent to ${technician.email}`)).toBeVisible();
+  const pending = page.getByRole('region', { name: 'Pending invitations' });
+  await expect(pending.getByRole('cell', { name: technician.email, exact: true })).toBeVisible();
+
+  // The invitee opens the link in their own browser, with no session.
+  const link = await linkFromMail(technician.email, '/invitations/');
+  const inviteeContext = await browser.newContext();
+  const invitee = await inviteeContext.newPage();
+  await invitee.goto(link);
+  await expect(invitee.getByRole('heading', { level: 1, name: `Join ${admin.organisationName}` })).toBeVisible();
+  await invitee.getByLabel('Your name').fill(technician.name);
+  await invitee.getByLabel('Choose a password').fill(technician.password);
+  await invitee.getByRole('button', { name: `Join ${admin.organisationName}` }).click();
+
+  await expect(invitee.getByRole('heading', { level: 1, name: admin.organisationName })).toBeVisible();
+  await expect(invitee.getByText('technician', { exact: true })).toBeVisible();
+  const nav = invitee.getByRole('navigation', { name: 'Organisation' });
+  await expect(nav.getByRole('link', { name: 'Home' })).toBeVisible();
+  await expect(nav.getByRole('link', { name: 'Members' })).toHaveCount(0);
+  await expect(nav.getByRole('link', { name: 'Activity' })).toHaveCount(0);
+
+  await invitee.goto(`/orgs/${orgId}/members`);
+  await expect(invitee.getByRole('heading', { name: 'This page is not available to your role' })).toBeVisible();
+  await invitee.goto(`/orgs/${orgId}/activity`);
+  await expect(invitee.getByRole('heading', { name: 'This page is not available to your role' })).toBeVisible();
+
+  // The link works once.
+  await invitee.goto(link);
+  await expect(invitee.getByRole('alert')).toContainText('already been accepted');
+  await inviteeContext.close();
+
+  // The admin now sees the technician as a member and no pending invitation.
+  await page.reload();
+  const members = page.getByRole('region', { name: 'Members', exact: true });
+  const row = members.getByRole('row').filter({ hasText: technician.email });
+  await expect(row.getByRole('combobox', { name: `Role of ${technician.name}` })).toHaveValue('technician');
+  await expect(page.getByText('No invitations waiting')).toBeVisible();
+
+  // Role changes take effect and are logged.
+  await row.getByRole('combobox', { name: `Role of ${technician.name}` }).selectOption('lab_manager');
+  await expect(row.getByRole('combobox', { name: `Role of ${technician.name}` })).toHaveValue('lab_manager');
+  await page.getByRole('navigation', { name: 'Organisation' }).getByRole('link', { name: 'Activity' }).click();
+  await expect(page.getByRole('heading', { level: 1, name: 'Activity' })).toBeVisible();
+  await expect(page.getByRole('cell', { name: 'Sent an invitation' })).toBeVisible();
+});
+
+test('an admin revokes an invitation and the link stops working', async ({ page, browser }) => {
+  const admin = newPerson('revoker');
+  const invitee = newPerson('designer');
+  await signUp(page, admin);
+  await page.getByRole('navigation', { name: 'Organisation' }).getByRole('link', { name: 'Members' }).click();
+  const inviteForm = page.getByRole('form', { name: 'Invite a colleague' });
+  await inviteForm.getByLabel('E-mail address').fill(invitee.email);
+  await inviteForm.getByLabel('Role').selectOption('designer');
+  await inviteForm.getByRole('button', { name: 'Send invitation' }).click();
+  await expect(page.getByText(`Invitation sent to ${invitee.email}`)).toBeVisible();
+
+  await page.getByRole('button', { name: `Revoke the invitation for ${invitee.email}` }).click();
+  const dialog = page.getByRole('alertdialog', { name: 'Revoke this invitation?' });
+  await dialog.getByRole('button', { name: 'Revoke invitation' }).click();
+  await expect(dialog).toHaveCount(0);
+  await expect(page.getByText('No invitations waiting')).toBeVisible();
+
+  const link = await linkFromMail(invitee.email, '/invitations/');
+  const context = await browser.newContext();
+  const other = await context.newPage();
+  await other.goto(link);
+  await expect(other.getByRole('heading', { name: 'This invitation cannot be used' })).toBeVisible();
+  await expect(other.getByRole('alert')).toContainText('withdrawn');
+  await context.close();
+});
