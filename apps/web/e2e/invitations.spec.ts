@@ -30,7 +30,7 @@ test('an admin invites a technician, who joins from the e-mailed link and sees o
   await invitee.getByLabel('Choose a password').fill(technician.password);
   await invitee.getByRole('button', { name: `Join ${admin.organisationName}` }).click();
 
-  await expect(invitee.getByRole('heading', { level: 1, name: admin.organisationName })).toBeVisible();
+  await expect(invitee.getByRole('heading', { level: 1, name: admin.organisationName, exact: true })).toBeVisible();
   await expect(invitee.getByText('technician', { exact: true })).toBeVisible();
   const nav = invitee.getByRole('navigation', { name: 'Organisation' });
   await expect(nav.getByRole('link', { name: 'Home' })).toBeVisible();

@@ -2,7 +2,7 @@ import type { ComponentPropsWithRef } from 'react';
 import { Spinner } from './spinner';
 
 type ButtonProps = ComponentPropsWithRef<'button'> & {
-  variant?: 'primary' | 'secondary' | 'danger' | 'ghost';
+  variant?: 'primary' | 'secondary' | 'danger' | 'ghost' | 'ghost-danger';
   size?: 'sm' | 'md';
   /** While true the button is disabled and shows a spinner, so a form cannot be sent twice. */
   pending?: boolean;
@@ -13,6 +13,7 @@ const VARIANTS: Record<NonNullable<ButtonProps['variant']>, string> = {
   secondary: 'border border-slate-300 bg-white text-slate-800 hover:bg-slate-50 disabled:text-slate-400',
   danger: 'bg-red-700 text-white hover:bg-red-800 disabled:bg-red-700/60',
   ghost: 'text-slate-700 hover:bg-slate-100 disabled:text-slate-400',
+  'ghost-danger': 'text-red-700 hover:bg-red-50 disabled:text-slate-400',
 };
 
 const SIZES: Record<NonNullable<ButtonProps['size']>, string> = {

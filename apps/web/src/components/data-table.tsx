@@ -1,16 +1,24 @@
 import { flexRender, type Table } from '@tanstack/react-table';
 
-/** Dense, readable table markup for a TanStack table instance. */
-export function DataTable<Row>({ table, caption }: { table: Table<Row>; caption: string }) {
+type DataTableProps<Row> = {
+  table: Table<Row>;
+  /** Read by screen readers: what the rows are. */
+  caption: string;
+  /** Off when the table sits flush inside a Panel, which already draws the frame. */
+  framed?: boolean;
+};
+
+/** Dense, readable table markup for a TanStack table instance; scrolls sideways on narrow screens. */
+export function DataTable<Row>({ table, caption, framed = true }: DataTableProps<Row>) {
   return (
-    <div className="overflow-x-auto rounded-lg border border-slate-200 bg-white">
+    <div className={`relative overflow-x-auto bg-white ${framed ? 'rounded-lg border border-slate-200' : 'rounded-b-lg'}`}>
       <table className="w-full border-collapse text-left text-sm">
         <caption className="sr-only">{caption}</caption>
         <thead className="bg-slate-50 text-xs uppercase tracking-wide text-slate-500">
           {table.getHeaderGroups().map((group) => (
             <tr key={group.id}>
               {group.headers.map((header) => (
-                <th key={header.id} scope="col" className="border-b border-slate-200 px-4 py-2 font-medium">
+                <th key={header.id} scope="col" className="whitespace-nowrap border-b border-slate-200 px-4 py-2 font-medium">
                   {header.isPlaceholder ? null : flexRender(header.column.columnDef.header, header.getContext())}
                 </th>
               ))}
@@ -21,7 +29,7 @@ export function DataTable<Row>({ table, caption }: { table: Table<Row>; caption:
           {table.getRowModel().rows.map((row) => (
             <tr key={row.id} className="border-b border-slate-100 last:border-b-0 hover:bg-slate-50/60">
               {row.getVisibleCells().map((cell) => (
-                <td key={cell.id} className="px-4 py-2 align-middle text-slate-700">
+                <td key={cell.id} className="whitespace-nowrap px-4 py-2 align-middle text-slate-700">
                   {flexRender(cell.column.columnDef.cell, cell.getContext())}
                 </td>
               ))}

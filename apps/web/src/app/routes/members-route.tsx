@@ -1,3 +1,4 @@
+import type { ReactNode } from 'react';
 import { EmptyState } from '../../components/empty-state';
 import { ErrorMessage } from '../../components/error-message';
 import { PageHeader } from '../../components/page-header';
@@ -35,22 +36,32 @@ function MembersPage() {
         <Panel title="Invite a colleague" description="They get an e-mail with a link to join. The link expires after a few days.">
           <InviteForm orgId={orgId} />
         </Panel>
-        <Panel title="Pending invitations">
+        <Panel title="Pending invitations" flush>
           {invitations.isPending ? (
-            <LoadingBlock label="Loading invitations…" />
+            <Padded>
+              <LoadingBlock label="Loading invitations…" />
+            </Padded>
           ) : invitations.error ? (
-            <ErrorMessage error={invitations.error} title="The invitations could not be loaded" onRetry={() => void invitations.refetch()} />
+            <Padded>
+              <ErrorMessage error={invitations.error} title="The invitations could not be loaded" onRetry={() => void invitations.refetch()} />
+            </Padded>
           ) : invitations.data.length === 0 ? (
-            <EmptyState title="No invitations waiting">Invitations you send appear here until they are accepted.</EmptyState>
+            <Padded>
+              <EmptyState title="No invitations waiting">Invitations you send appear here until they are accepted.</EmptyState>
+            </Padded>
           ) : (
             <InvitationsTable orgId={orgId} invitations={invitations.data} />
           )}
         </Panel>
-        <Panel title="Members">
+        <Panel title="Members" flush>
           {members.isPending ? (
-            <LoadingBlock label="Loading members…" />
+            <Padded>
+              <LoadingBlock label="Loading members…" />
+            </Padded>
           ) : members.error ? (
-            <ErrorMessage error={members.error} title="The members could not be loaded" onRetry={() => void members.refetch()} />
+            <Padded>
+              <ErrorMessage error={members.error} title="The members could not be loaded" onRetry={() => void members.refetch()} />
+            </Padded>
           ) : (
             <MembersTable orgId={orgId} members={members.data} currentUserId={user.id} />
           )}
@@ -58,4 +69,9 @@ function MembersPage() {
       </div>
     </>
   );
+}
+
+/** States shown inside a flush panel still need the panel's padding. */
+function Padded({ children }: { children: ReactNode }) {
+  return <div className="p-5">{children}</div>;
 }

@@ -21,7 +21,7 @@ export function OrgHomeRoute() {
           </>
         }
       />
-      <div className="grid gap-6 lg:grid-cols-[minmax(0,2fr)_minmax(0,1fr)]">
+      <div className="grid items-start gap-6 lg:grid-cols-[minmax(0,2fr)_minmax(0,1fr)]">
         <Panel title="What your role covers">
           <ul className="divide-y divide-slate-100">
             {guide.tasks.map((task) => (

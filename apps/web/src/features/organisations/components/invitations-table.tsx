@@ -9,13 +9,14 @@ import { useRevokeInvitation } from '../api/revoke-invitation';
 
 const column = createColumnHelper<Invitation>();
 
+/** Pending invitations with a revoke button each. Sits flush in a Panel. */
 export function InvitationsTable({ orgId, invitations }: { orgId: string; invitations: readonly Invitation[] }) {
   const revoke = useRevokeInvitation(orgId);
   const [toRevoke, setToRevoke] = useState<Invitation | null>(null);
 
   const columns = useMemo(
     () => [
-      column.accessor('email', { header: 'E-mail', cell: (info) => <span className="break-all font-medium text-slate-900">{info.getValue()}</span> }),
+      column.accessor('email', { header: 'E-mail', cell: (info) => <span className="font-medium text-slate-900">{info.getValue()}</span> }),
       column.accessor('role', { header: 'Role', cell: (info) => ROLE_LABELS[info.getValue()] }),
       column.accessor('invitedBy', { header: 'Invited by' }),
       column.accessor('expiresAt', { header: 'Link expires', cell: (info) => formatDateTime(info.getValue()) }),
@@ -23,7 +24,7 @@ export function InvitationsTable({ orgId, invitations }: { orgId: string; invita
         id: 'actions',
         header: () => <span className="sr-only">Actions</span>,
         cell: (info) => (
-          <Button variant="ghost" size="sm" className="text-red-700" onClick={() => setToRevoke(info.row.original)}>
+          <Button variant="ghost-danger" size="sm" onClick={() => setToRevoke(info.row.original)}>
             Revoke<span className="sr-only"> the invitation for {info.row.original.email}</span>
           </Button>
         ),
@@ -36,7 +37,7 @@ export function InvitationsTable({ orgId, invitations }: { orgId: string; invita
 
   return (
     <>
-      <DataTable table={table} caption="Invitations waiting for an answer" />
+      <DataTable table={table} caption="Invitations waiting for an answer" framed={false} />
       <ConfirmDialog
         open={toRevoke !== null}
         title="Revoke this invitation?"

@@ -19,13 +19,13 @@ export function InviteForm({ orgId }: { orgId: string }) {
   const onSubmit = (event: FormEvent<HTMLFormElement>) => {
     event.preventDefault();
     const form = event.currentTarget;
+    setSentTo(null);
     const result = validate(InvitationCreateSchema, formValues(form));
     if (!result.ok) {
       setErrors(result.errors);
       return;
     }
     setErrors({});
-    setSentTo(null);
     create.mutate(result.data, {
       onSuccess: (invitation) => {
         setSentTo(invitation.email);

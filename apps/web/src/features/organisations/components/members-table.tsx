@@ -20,6 +20,7 @@ type MembersTableProps = {
 
 const column = createColumnHelper<Member>();
 
+/** The members, with a role picker and a remove button for everyone but oneself. Sits flush in a Panel. */
 export function MembersTable({ orgId, members, currentUserId }: MembersTableProps) {
   const updateRole = useUpdateMemberRole(orgId);
   const removeMember = useRemoveMember(orgId);
@@ -36,7 +37,7 @@ export function MembersTable({ orgId, members, currentUserId }: MembersTableProp
           </span>
         ),
       }),
-      column.accessor('email', { header: 'E-mail', cell: (info) => <span className="break-all">{info.getValue()}</span> }),
+      column.accessor('email', { header: 'E-mail', cell: (info) => info.getValue() }),
       column.accessor('role', {
         header: 'Role',
         cell: (info) => {
@@ -66,7 +67,7 @@ export function MembersTable({ orgId, members, currentUserId }: MembersTableProp
         header: () => <span className="sr-only">Actions</span>,
         cell: (info) =>
           info.row.original.userId === currentUserId ? null : (
-            <Button variant="ghost" size="sm" className="text-red-700" onClick={() => setToRemove(info.row.original)}>
+            <Button variant="ghost-danger" size="sm" onClick={() => setToRemove(info.row.original)}>
               Remove<span className="sr-only"> {info.row.original.name}</span>
             </Button>
           ),
@@ -78,9 +79,13 @@ export function MembersTable({ orgId, members, currentUserId }: MembersTableProp
   const table = useReactTable({ data: members as Member[], columns, getCoreRowModel: getCoreRowModel(), getRowId: (row) => row.userId });
 
   return (
-    <div className="flex flex-col gap-3">
-      {updateRole.error ? <ErrorMessage error={updateRole.error} title="The role was not changed" /> : null}
-      <DataTable table={table} caption="Members of this organisation" />
+    <div>
+      {updateRole.error ? (
+        <div className="px-5 pt-4">
+          <ErrorMessage error={updateRole.error} title="The role was not changed" />
+        </div>
+      ) : null}
+      <DataTable table={table} caption="Members of this organisation" framed={false} />
       <ConfirmDialog
         open={toRemove !== null}
         title={`Remove ${toRemove?.name ?? 'this member'}?`}

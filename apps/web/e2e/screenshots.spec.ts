@@ -1,0 +1,89 @@
+import { expect, test, type Page } from '@playwright/test';
+import { linkFromMail } from './support/mail';
+import { newPerson, signUp } from './support/people';
+
+// Writes a PNG of every page to apps/web/screenshots/ for a visual check by a person.
+// Only with SCREENSHOTS=1, so `npm test` does not spend time on it.
+test.skip(!process.env['SCREENSHOTS'], 'Set SCREENSHOTS=1 to write page screenshots.');
+
+const shot = (page: Page, name: string) => page.screenshot({ path: `screenshots/${name}.png`, fullPage: true });
+
+test('screenshots of every page', async ({ page, browser }) => {
+  test.setTimeout(90_000);
+  await page.setViewportSize({ width: 1280, height: 800 });
+  await page.goto('/sign-in');
+  await expect(page.getByRole('heading', { name: 'Sign in' })).toBeVisible();
+  await shot(page, 'sign-in');
+  await page.getByRole('button', { name: 'Sign in' }).click();
+  await shot(page, 'sign-in-errors');
+
+  await page.goto('/sign-up');
+  await page.getByRole('button', { name: 'Create account' }).click();
+  await shot(page, 'sign-up-errors');
+
+  await page.goto('/forgot-password');
+  await shot(page, 'forgot-password');
+  await page.goto('/reset-password?token=abc');
+  await shot(page, 'reset-password');
+  await page.goto('/invitations/not-a-real-token-123');
+  await expect(page.getByRole('alert')).toBeVisible();
+  await shot(page, 'invitation-invalid');
+  await page.goto('/no-such-page');
+  await shot(page, 'not-found');
+
+  const admin = newPerson('admin');
+  const orgId = await signUp(page, admin);
+  await shot(page, 'org-home-admin');
+  await page.getByRole('button', { name: admin.name }).click();
+  await shot(page, 'user-menu');
+  await page.keyboard.press('Escape');
+
+  await page.goto(`/orgs/${orgId}/members`);
+  const inviteForm = page.getByRole('form', { name: 'Invite a colleague' });
+  const invitee = newPerson('technician');
+  await inviteForm.getByLabel('E-mail address').fill(invitee.email);
+  await inviteForm.getByRole('button', { name: 'Send invitation' }).click();
+  await expect(page.getByText(`Invitation sent to ${invitee.email}`)).toBeVisible();
+  for (const role of ['designer', 'lab_manager']) {
+    await inviteForm.getByLabel('E-mail address').fill(newPerson(role).email);
+    await inviteForm.getByLabel('Role').selectOption(role);
+    await inviteForm.getByRole('button', { name: 'Send invitation' }).click();
+  }
+  await inviteForm.getByLabel('E-mail address').fill('broken');
+  await inviteForm.getByRole('button', { name: 'Send invitation' }).click();
+  await shot(page, 'members');
+  await page.getByRole('button', { name: /^Revoke the invitation/ }).first().click();
+  await shot(page, 'confirm-dialog');
+  await page.keyboard.press('Escape');
+
+  const link = await linkFromMail(invitee.email, '/invitations/');
+  const context = await browser.newContext({ viewport: { width: 1280, height: 800 } });
+  const other = await context.newPage();
+  await other.goto(link);
+  await expect(other.getByRole('heading', { name: /^Join/ })).toBeVisible();
+  await shot(other, 'invitation-accept');
+  await other.getByLabel('Your name').fill(invitee.name);
+  await other.getByLabel('Choose a password').fill(invitee.password);
+  await other.getByRole('button', { name: /^Join/ }).click();
+  await expect(other.getByRole('heading', { level: 1, name: admin.organisationName, exact: true })).toBeVisible();
+  await shot(other, 'org-home-technician');
+  await other.goto(`/orgs/${orgId}/members`);
+  await shot(other, 'not-allowed');
+  await context.close();
+
+  await page.goto(`/orgs/${orgId}/members`);
+  await expect(page.getByRole('cell', { name: invitee.email, exact: true })).toBeVisible();
+  await shot(page, 'members-after-accept');
+  await page.goto(`/orgs/${orgId}/activity`);
+  await expect(page.getByRole('heading', { level: 1, name: 'Activity' })).toBeVisible();
+  await shot(page, 'activity');
+  await page.goto(`/orgs/${orgId}/nothing-here`);
+  await shot(page, 'not-found-in-org');
+  await page.goto(`/orgs/00000000-0000-4000-8000-000000000000`);
+  await shot(page, 'other-organisation');
+
+  await page.setViewportSize({ width: 390, height: 800 });
+  await page.goto(`/orgs/${orgId}/members`);
+  await expect(page.getByRole('heading', { level: 1, name: 'Members' })).toBeVisible();
+  await shot(page, 'members-narrow');
+});
