@@ -1,6 +1,6 @@
 import { footingPressureKpa } from './footing-pressure.js';
 import type { Footing, StressMethod } from './footing.types.js';
-import { signedRectangleInfluence } from './stress-increase-rectangle.js';
+import { footingStressContributionKpa } from './footing-stress-contribution.js';
 
 /** A point in the ground and the footings that load it. */
 export interface StressIncreaseFromFootingsInput {
@@ -58,20 +58,8 @@ export function stressIncreaseFromFootings(input: StressIncreaseFromFootingsInpu
   for (const footing of footings) {
     const isOwn = footing.id === ownFootingId;
     if (!isOwn && !includeNeighbours) continue;
-    const pressureKpa = footingPressureKpa(footing);
-    const zM = depthBelowGroundM - footing.depthM;
-    if (zM <= 0) continue;
-    const dx = xM - footing.xM;
-    const dy = yM - footing.yM;
-    const halfWidthM = footing.widthM / 2;
-    const halfLengthM = footing.lengthM / 2;
-    let contributionKpa: number;
-    if (method === 'boussinesq') {
-      contributionKpa = pressureKpa * signedRectangleInfluence(halfWidthM - dx, halfWidthM + dx, halfLengthM - dy, halfLengthM + dy, zM);
-    } else {
-      const insideSpread = Math.abs(dx) <= (footing.widthM + zM) / 2 && Math.abs(dy) <= (footing.lengthM + zM) / 2;
-      contributionKpa = insideSpread ? (pressureKpa * footing.widthM * footing.lengthM) / ((footing.widthM + zM) * (footing.lengthM + zM)) : 0;
-    }
+    const prepared = { ...footing, pressureKpa: footingPressureKpa(footing) };
+    const contributionKpa = footingStressContributionKpa(prepared, xM - footing.xM, yM - footing.yM, depthBelowGroundM - footing.depthM, method);
     if (isOwn) ownKpa += contributionKpa;
     else neighboursKpa += contributionKpa;
   }

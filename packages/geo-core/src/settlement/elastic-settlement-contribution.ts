@@ -1,0 +1,57 @@
+import type { PreparedFooting } from '../stress/footing-stress-contribution.js';
+import type { PreparedElasticLayer } from './prepare-settlement-model.js';
+import { steinbrennerFactors } from './steinbrenner-factors.js';
+
+/**
+ * One footing's immediate settlement at a point offset (dx, dy) from its
+ * centre, over layered elastic ground: Steinbrenner's (1934) corner solution
+ * superposed over the four signed corner rectangles meeting at the point (as
+ * for stresses), and over the layers below the footing base by differences,
+ * S = Σ layers q·B′·(1 − ν²)/E·[Is(z_bottom) − Is(z_top)], Is = F1 + (1 − 2ν)/(1 − ν)·F2
+ * — the layered use of Steinbrenner's factors set out by Bowles, *Foundation
+ * Analysis and Design*, ch. 5. B′ is the shorter side of each corner rectangle.
+ *
+ * Assumptions: flexible footing, no depth (Fox) reduction, the last elastic
+ * layer's base taken as rigid.
+ *
+ * @param footing prepared footing (m, kPa)
+ * @param dxM offset along x, m
+ * @param dyM offset along y, m
+ * @param elasticLayers layers with E (kPa) and ν, top-down
+ * @returns settlement in m
+ * @example elasticSettlementContributionM(footing, 0, 0, layers) // the centre settlement of a flexible footing
+ */
+export function elasticSettlementContributionM(footing: PreparedFooting, dxM: number, dyM: number, elasticLayers: readonly PreparedElasticLayer[]): number {
+  const halfWidthM = footing.widthM / 2;
+  const halfLengthM = footing.lengthM / 2;
+  return (
+    footing.pressureKpa *
+    (signedCornerSettlement(halfWidthM - dxM, halfLengthM - dyM, footing.depthM, elasticLayers) +
+      signedCornerSettlement(halfWidthM - dxM, halfLengthM + dyM, footing.depthM, elasticLayers) +
+      signedCornerSettlement(halfWidthM + dxM, halfLengthM - dyM, footing.depthM, elasticLayers) +
+      signedCornerSettlement(halfWidthM + dxM, halfLengthM + dyM, footing.depthM, elasticLayers))
+  );
+}
+
+/** Settlement per unit pressure under the corner of an |a| × |b| rectangle, signed as in the stress superposition. */
+function signedCornerSettlement(a: number, b: number, baseDepthM: number, elasticLayers: readonly PreparedElasticLayer[]): number {
+  if (a === 0 || b === 0) return 0;
+  const shortM = Math.min(Math.abs(a), Math.abs(b));
+  const lengthRatio = Math.max(Math.abs(a), Math.abs(b)) / shortM;
+  let sum = 0;
+  let previousDepthM = 0;
+  let previous = { f1: 0, f2: 0 };
+  for (const layer of elasticLayers) {
+    if (layer.bottomDepthM <= baseDepthM) continue;
+    const topM = Math.max(0, layer.topDepthM - baseDepthM);
+    const bottomM = layer.bottomDepthM - baseDepthM;
+    const atTop = topM === previousDepthM ? previous : steinbrennerFactors(lengthRatio, topM / shortM);
+    const atBottom = steinbrennerFactors(lengthRatio, bottomM / shortM);
+    const nu = layer.poissonRatio;
+    const shapeFactorChange = atBottom.f1 - atTop.f1 + ((1 - 2 * nu) / (1 - nu)) * (atBottom.f2 - atTop.f2);
+    sum += (shortM * (1 - nu * nu) * shapeFactorChange) / layer.elasticModulusKpa;
+    previousDepthM = bottomM;
+    previous = atBottom;
+  }
+  return (a > 0) === (b > 0) ? sum : -sum;
+}

@@ -1,0 +1,148 @@
+import { WATER_UNIT_WEIGHT_KN_PER_M3 } from '../constants/water-unit-weight.js';
+import { splitIntoSublayers, type SublayerSpacing } from '../profile/split-into-sublayers.js';
+import type { SoilProfile, Sublayer } from '../profile/soil-profile.types.js';
+import { validateSoilProfile } from '../profile/validate-soil-profile.js';
+import { verticalStressAtDepth } from '../profile/vertical-stress-at-depth.js';
+import { timeFactorForDegree } from '../time-curves/time-factor-for-degree.js';
+import { drainagePathLengthM } from '../time-rate/drainage-path-length.js';
+import type { LayerParametersUsed } from './settlement-check.types.js';
+
+/** A sublayer with everything the settlement sum needs, fixed before any footing is looked at. */
+export interface PreparedSublayer extends Sublayer {
+  readonly initialEffectiveStressKpa: number;
+  readonly preconsolidationKpa: number;
+  readonly e0: number;
+  readonly cc: number;
+  readonly cs: number;
+  readonly cAlpha: number | null;
+  readonly endOfPrimaryYears: number | null;
+}
+
+/** A layer with a modulus, for immediate settlement. */
+export interface PreparedElasticLayer {
+  readonly layerIndex: number;
+  readonly topDepthM: number;
+  readonly bottomDepthM: number;
+  readonly elasticModulusKpa: number;
+  readonly poissonRatio: number;
+}
+
+/** The ground model as the settlement check uses it. */
+export interface SettlementModel {
+  readonly sublayers: readonly PreparedSublayer[];
+  /** The sublayers' mid-depths below ground, m, packed for the stress loop. */
+  readonly midDepthsM: Float64Array;
+  readonly elasticLayers: readonly PreparedElasticLayer[];
+  readonly layers: readonly LayerParametersUsed[];
+  readonly profileBottomM: number;
+  readonly warnings: readonly string[];
+}
+
+/**
+ * Turns a soil profile into the sublayers and elastic layers a settlement check
+ * integrates over: σ′0 and σ′p at each sublayer's mid-depth, the drainage path
+ * and end of primary consolidation of each clay layer, and a record of every
+ * parameter used. A careful designer's defaults, each stated in a warning:
+ * no σ′p or OCR → normally consolidated (the cautious choice); σ′p below the
+ * in-situ stress at some depth → that part normally consolidated.
+ *
+ * @param profile the ground model
+ * @param spacing sublayer count or maximum thickness
+ * @param endOfPrimaryShare share of primary consolidation taken as its end (fraction)
+ * @param caller public function name for messages
+ * @returns the prepared model
+ * @throws RangeError for an invalid profile, a missing cs on an overconsolidated layer, or a non-positive effective stress
+ * @example prepareSettlementModel(profile, { maxThicknessM: 0.5 }, 0.95, 'runSettlementCheck').sublayers.length // 8 for a 4 m clay
+ */
+export function prepareSettlementModel(profile: SoilProfile, spacing: SublayerSpacing, endOfPrimaryShare: number, caller: string): SettlementModel {
+  validateSoilProfile(profile, caller);
+  const warnings: string[] = [];
+  const timeFactorAtEnd = timeFactorForDegree(endOfPrimaryShare);
+  let topDepthM = 0;
+  const layers: LayerParametersUsed[] = profile.layers.map((layer, layerIndex) => {
+    const bottomDepthM = topDepthM + layer.thicknessM;
+    const compressible = layer.e0 !== undefined && layer.cc !== undefined;
+    const overconsolidated = (layer.ocr !== undefined && layer.ocr > 1) || layer.preconsolidationKpa !== undefined;
+    if (compressible && overconsolidated && layer.cs === undefined) {
+      throw new RangeError(`${caller} requires cs wherever ocr or preconsolidationKpa is given, in layer ${layerIndex + 1} (${layer.name})`);
+    }
+    const preconsolidationBasis = !compressible
+      ? null
+      : layer.preconsolidationKpa !== undefined
+        ? 'preconsolidation-stress'
+        : layer.ocr !== undefined
+          ? 'ocr'
+          : 'assumed-normally-consolidated';
+    if (preconsolidationBasis === 'assumed-normally-consolidated') {
+      warnings.push(`Layer ${layerIndex + 1} (${layer.name}) has neither σ′p nor OCR; it is treated as normally consolidated, the cautious choice. Give σ′p from the oedometer tests to refine it.`);
+    }
+    const drainagePathM =
+      compressible && layer.drainageTop !== undefined && layer.drainageBottom !== undefined
+        ? drainagePathLengthM({ thicknessM: layer.thicknessM, drainageTop: layer.drainageTop, drainageBottom: layer.drainageBottom })
+        : null;
+    const endOfPrimaryYears = drainagePathM !== null && layer.cvM2PerYr !== undefined ? (timeFactorAtEnd * drainagePathM * drainagePathM) / layer.cvM2PerYr : null;
+    if (compressible && layer.cvM2PerYr === undefined) {
+      warnings.push(`Layer ${layerIndex + 1} (${layer.name}) has no cv: its primary settlement is in the totals but not in the settlement–time curve, and its secondary compression cannot be dated. Give cv to include them.`);
+    } else if (compressible && drainagePathM === null) {
+      warnings.push(`Layer ${layerIndex + 1} (${layer.name}) is impermeable at both faces: it cannot consolidate by vertical drainage, so it adds nothing to the settlement–time curve. Check its drainage boundaries.`);
+    }
+    topDepthM = bottomDepthM;
+    return {
+      layerIndex,
+      name: layer.name,
+      topDepthM: bottomDepthM - layer.thicknessM,
+      bottomDepthM,
+      unitWeightKnPerM3: layer.unitWeightKnPerM3,
+      saturatedUnitWeightKnPerM3: layer.saturatedUnitWeightKnPerM3,
+      compressible,
+      e0: layer.e0 ?? null,
+      cc: layer.cc ?? null,
+      cs: layer.cs ?? null,
+      preconsolidationBasis,
+      preconsolidationKpa: layer.preconsolidationKpa ?? null,
+      ocr: layer.ocr ?? null,
+      cvM2PerYr: layer.cvM2PerYr ?? null,
+      cAlpha: layer.cAlpha ?? null,
+      elasticModulusKpa: layer.elasticModulusKpa ?? null,
+      poissonRatio: layer.poissonRatio ?? null,
+      drainageTop: layer.drainageTop ?? null,
+      drainageBottom: layer.drainageBottom ?? null,
+      drainagePathM,
+      endOfPrimaryYears,
+    };
+  });
+  const clampedLayers = new Set<number>();
+  const sublayers = splitIntoSublayers(profile, spacing).map((sublayer): PreparedSublayer => {
+    const layer = profile.layers[sublayer.layerIndex];
+    const used = layers[sublayer.layerIndex];
+    if (layer === undefined || used === undefined || layer.e0 === undefined || layer.cc === undefined) throw new RangeError(`${caller} requires a consistent profile`);
+    const initialEffectiveStressKpa = verticalStressAtDepth(profile, sublayer.midDepthM).effectiveStressKpa;
+    if (!(initialEffectiveStressKpa > 0)) {
+      throw new RangeError(`${caller} requires a positive effective stress in layer ${sublayer.layerIndex + 1} (${layer.name}); check that saturated unit weights exceed ${WATER_UNIT_WEIGHT_KN_PER_M3} kN/m³`);
+    }
+    const given = layer.preconsolidationKpa ?? (layer.ocr ?? 1) * initialEffectiveStressKpa;
+    if (given < initialEffectiveStressKpa) clampedLayers.add(sublayer.layerIndex);
+    return {
+      ...sublayer,
+      initialEffectiveStressKpa,
+      preconsolidationKpa: Math.max(given, initialEffectiveStressKpa),
+      e0: layer.e0,
+      cc: layer.cc,
+      cs: layer.cs ?? layer.cc,
+      cAlpha: layer.cAlpha ?? null,
+      endOfPrimaryYears: used.endOfPrimaryYears,
+    };
+  });
+  for (const layerIndex of clampedLayers) {
+    const layer = profile.layers[layerIndex];
+    warnings.push(`In layer ${layerIndex + 1} (${layer?.name ?? ''}) the given σ′p is below the in-situ effective stress at some depths; those sublayers are treated as normally consolidated. Check σ′p against the stress profile.`);
+  }
+  const elasticLayers: PreparedElasticLayer[] = layers.flatMap((used) =>
+    used.elasticModulusKpa !== null && used.poissonRatio !== null
+      ? [{ layerIndex: used.layerIndex, topDepthM: used.topDepthM, bottomDepthM: used.bottomDepthM, elasticModulusKpa: used.elasticModulusKpa, poissonRatio: used.poissonRatio }]
+      : [],
+  );
+  if (elasticLayers.length === 0) warnings.push('No layer has both an elastic modulus and a Poisson’s ratio, so immediate settlement is zero. Give E and ν where immediate settlement matters.');
+  const midDepthsM = Float64Array.from(sublayers, (sublayer) => sublayer.midDepthM);
+  return { sublayers, midDepthsM, elasticLayers, layers, profileBottomM: topDepthM, warnings };
+}

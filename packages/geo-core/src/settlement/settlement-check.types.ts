@@ -1,0 +1,148 @@
+import type { ConsolidationCase } from './primary-consolidation-settlement.js';
+import type { AngularDistortionVerdict } from './judge-angular-distortion.js';
+import type { DrainageBoundary, SoilProfile } from '../profile/soil-profile.types.js';
+import type { Footing, StressMethod } from '../stress/footing.types.js';
+
+/** Choices for a settlement check; every one has a stated default. */
+export interface SettlementCheckOptions {
+  /** Sublayers per compressible layer. Give this or sublayerMaxThicknessM; default: maximum 0.5 m. */
+  readonly sublayerCount?: number;
+  /** Largest sublayer thickness, m. */
+  readonly sublayerMaxThicknessM?: number;
+  /** Add the neighbours' stresses and elastic settlements. Default true. */
+  readonly includeNeighbours?: boolean;
+  /** Default 'boussinesq'. */
+  readonly stressMethod?: StressMethod;
+  /** Time for secondary compression, years after loading. Default 50. */
+  readonly designLifeYears?: number;
+  /** Times for the settlement–time curve, years; default 41 points from 0.01 to 100 years on log t. */
+  readonly timesYears?: readonly number[];
+  /** 'centre' or 'centre-and-corners'. Default 'centre-and-corners'. */
+  readonly evaluationPoints?: 'centre' | 'centre-and-corners';
+  /** Share of primary consolidation taken as its end, where secondary compression starts (fraction). Default 0.95. */
+  readonly endOfPrimaryShare?: number;
+  /** Angular distortion the design must keep within. Default 1/500 (both Bjerrum 1963 and Skempton & MacDonald 1956). */
+  readonly designAngularDistortion?: number;
+  /** Only judge pairs of footings closer than this, m (centre to centre). Default: every pair. */
+  readonly pairMaxDistanceM?: number;
+  /** Total settlement a footing may reach, m; omitted: totals are not judged. */
+  readonly totalSettlementLimitM?: number;
+}
+
+/** The whole check's input. */
+export interface SettlementCheckInput {
+  readonly profile: SoilProfile;
+  readonly footings: readonly Footing[];
+  readonly options?: SettlementCheckOptions;
+}
+
+/** The parameters a layer contributed, as used, so every number can be traced. */
+export interface LayerParametersUsed {
+  readonly layerIndex: number;
+  readonly name: string;
+  readonly topDepthM: number;
+  readonly bottomDepthM: number;
+  readonly unitWeightKnPerM3: number;
+  readonly saturatedUnitWeightKnPerM3: number;
+  readonly compressible: boolean;
+  readonly e0: number | null;
+  readonly cc: number | null;
+  readonly cs: number | null;
+  /** How σ′p was set: from σ′p, from OCR, or assumed normally consolidated. */
+  readonly preconsolidationBasis: 'preconsolidation-stress' | 'ocr' | 'assumed-normally-consolidated' | null;
+  readonly preconsolidationKpa: number | null;
+  readonly ocr: number | null;
+  readonly cvM2PerYr: number | null;
+  readonly cAlpha: number | null;
+  readonly elasticModulusKpa: number | null;
+  readonly poissonRatio: number | null;
+  readonly drainageTop: DrainageBoundary | null;
+  readonly drainageBottom: DrainageBoundary | null;
+  readonly drainagePathM: number | null;
+  /** Time at which primary consolidation is taken to end (endOfPrimaryShare), years. */
+  readonly endOfPrimaryYears: number | null;
+}
+
+/** One sublayer under a footing's centre. */
+export interface SublayerSettlementRow {
+  readonly layerIndex: number;
+  readonly layerName: string;
+  readonly topDepthM: number;
+  readonly bottomDepthM: number;
+  readonly midDepthM: number;
+  readonly thicknessM: number;
+  readonly initialEffectiveStressKpa: number;
+  readonly preconsolidationKpa: number;
+  readonly ownStressIncreaseKpa: number;
+  readonly neighboursStressIncreaseKpa: number;
+  readonly stressIncreaseKpa: number;
+  readonly consolidationCase: ConsolidationCase;
+  readonly primarySettlementM: number;
+  /** null where the layer has no cv, so the end of primary cannot be fixed. */
+  readonly secondarySettlementM: number | null;
+}
+
+/** Settlements at one point of a footing, m. */
+export interface PointSettlement {
+  readonly label: 'centre' | 'corner-x-y-' | 'corner-x+y-' | 'corner-x-y+' | 'corner-x+y+';
+  readonly xM: number;
+  readonly yM: number;
+  readonly immediateM: number;
+  readonly primaryM: number;
+  readonly secondaryM: number;
+  readonly totalM: number;
+}
+
+/** One footing's results; the headline numbers are at its centre. */
+export interface FootingSettlementResult {
+  readonly id: string;
+  readonly xM: number;
+  readonly yM: number;
+  readonly widthM: number;
+  readonly lengthM: number;
+  readonly depthM: number;
+  readonly pressureKpa: number;
+  readonly loadKn: number;
+  readonly immediateM: number;
+  readonly primaryM: number;
+  readonly secondaryM: number;
+  readonly totalM: number;
+  readonly points: readonly PointSettlement[];
+  readonly sublayers: readonly SublayerSettlementRow[];
+  readonly primaryByLayer: ReadonlyArray<{ readonly layerIndex: number; readonly primarySettlementM: number }>;
+  /** Immediate + primary reached at each time (centre). */
+  readonly timeCurve: ReadonlyArray<{ readonly timeYears: number; readonly settlementM: number }>;
+  /** Years to 50 % and 90 % of primary settlement at the centre; null where it cannot be had. */
+  readonly timeTo50PercentYears: number | null;
+  readonly timeTo90PercentYears: number | null;
+  /** Total against totalSettlementLimitM; null when no limit was given. */
+  readonly withinTotalLimit: boolean | null;
+}
+
+/** Differential settlement between two footing centres. */
+export interface FootingPairResult {
+  readonly footingIds: readonly [string, string];
+  readonly distanceM: number;
+  readonly differentialSettlementM: number;
+  readonly angularDistortion: number;
+  readonly withinDesignLimit: boolean;
+  readonly verdicts: readonly AngularDistortionVerdict[];
+}
+
+/** The whole check's output: plain data, safe to serialise. */
+export interface SettlementCheckResult {
+  readonly method: {
+    readonly stressMethod: StressMethod;
+    readonly includeNeighbours: boolean;
+    readonly sublayerSpacing: { readonly count: number } | { readonly maxThicknessM: number };
+    readonly designLifeYears: number;
+    readonly endOfPrimaryShare: number;
+    readonly designAngularDistortion: number;
+    readonly notes: readonly string[];
+  };
+  readonly layers: readonly LayerParametersUsed[];
+  readonly footings: readonly FootingSettlementResult[];
+  readonly pairs: readonly FootingPairResult[];
+  readonly warnings: readonly string[];
+  readonly caution: string;
+}
