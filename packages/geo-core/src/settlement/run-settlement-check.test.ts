@@ -1,0 +1,170 @@
+import fc from 'fast-check';
+import { describe, expect, it } from 'vitest';
+import type { SoilProfile } from '../profile/soil-profile.types.js';
+import type { Footing } from '../stress/footing.types.js';
+import { runSettlementCheck } from './run-settlement-check.js';
+
+// Hand-calculation profile (invented; no textbook example is recalled precisely enough
+// to cite, so the checks below are worked by hand in the comments): 4 m of sand over
+// 4 m of clay, water table 2 m below ground.
+const sandOverClay = (clay: Partial<SoilProfile['layers'][number]> = {}): SoilProfile => ({
+  groundLevelM: 10,
+  waterTableDepthM: 2,
+  layers: [
+    { name: 'sand', thicknessM: 4, unitWeightKnPerM3: 18, saturatedUnitWeightKnPerM3: 20 },
+    { name: 'clay', thicknessM: 4, unitWeightKnPerM3: 19, saturatedUnitWeightKnPerM3: 19, e0: 1, cc: 0.35, cs: 0.06, ...clay },
+  ],
+});
+const footing: Footing = { id: 'F1', xM: 0, yM: 0, widthM: 2, lengthM: 2, depthM: 1, loadKn: 800 };
+
+describe('runSettlementCheck({ profile, footings, options })', () => {
+  it('normally consolidated clay under a square footing reproduces the hand calculation', () => {
+    // Hand calculation, one sublayer at 6 m: σ′0 = 2×18 + 2×(20 − 9.81) + 2×(19 − 9.81) = 74.76 kPa.
+    // q = 800/4 = 200 kPa; z = 5 m below the base, m = n = 1/5 = 0.2, I = 0.0179 (Newmark/Fadum table)
+    // → Δσ = 4 × 0.0179 × 200 = 14.32 kPa. Sc = 0.35 × 4/2 × log10(89.08/74.76) = 0.0533 m.
+    // The table's four decimals on I (±0.00005) allow ±0.04 kPa on Δσ, ±0.00014 m on Sc.
+    const result = runSettlementCheck({ profile: sandOverClay(), footings: [footing], options: { sublayerCount: 1, evaluationPoints: 'centre' } });
+    const [row] = result.footings[0]?.sublayers ?? [];
+    expect(row?.initialEffectiveStressKpa).toBeCloseTo(74.76, 9);
+    expect(Math.abs((row?.stressIncreaseKpa ?? 0) - 14.32)).toBeLessThanOrEqual(0.04);
+    expect(row?.consolidationCase).toBe('normally-consolidated');
+    expect(Math.abs((result.footings[0]?.primaryM ?? 0) - 0.0533)).toBeLessThanOrEqual(0.00014);
+    expect(result.warnings.some((w) => /treated as normally consolidated/.test(w))).toBe(true);
+  });
+
+  it('overconsolidated clay passing σ′p reproduces the hand calculation', () => {
+    // Same loading with σ′p = 80 kPa: Sc = 0.06 × 2 × log10(80/74.76) + 0.35 × 2 × log10(89.08/80) = 0.0362 m (± 0.0001 from I's decimals).
+    const result = runSettlementCheck({ profile: sandOverClay({ preconsolidationKpa: 80 }), footings: [footing], options: { sublayerCount: 1, evaluationPoints: 'centre' } });
+    expect(result.footings[0]?.sublayers[0]?.consolidationCase).toBe('overconsolidated-crossing');
+    expect(Math.abs((result.footings[0]?.primaryM ?? 0) - 0.0362)).toBeLessThanOrEqual(0.0001);
+  });
+
+  it('overconsolidated clay staying below σ′p uses Cs alone', () => {
+    // OCR = 2 at every depth: σ′p = 149.5 kPa > 89.08 kPa → Sc = 0.06 × 2 × log10(89.08/74.76) = 0.00913 m.
+    const result = runSettlementCheck({ profile: sandOverClay({ ocr: 2 }), footings: [footing], options: { sublayerCount: 1, evaluationPoints: 'centre' } });
+    expect(result.footings[0]?.sublayers[0]?.consolidationCase).toBe('overconsolidated-below');
+    expect(Math.abs((result.footings[0]?.primaryM ?? 0) - 0.00913)).toBeLessThanOrEqual(0.00003);
+  });
+
+  it('finer sublayers converge: 40 and 80 slices agree within 0.5 %', () => {
+    const run = (count: number) => runSettlementCheck({ profile: sandOverClay(), footings: [footing], options: { sublayerCount: count, evaluationPoints: 'centre' } }).footings[0]?.primaryM ?? 0;
+    expect(Math.abs(run(40) - run(80)) / run(80)).toBeLessThan(0.005);
+  });
+
+  it('immediate settlement on a very deep elastic layer equals the half-space formula q·B·(1 − ν²)/E·1.122', () => {
+    // Published α = 1.122 for the centre of a flexible square (Das, Principles of Foundation Engineering, from memory);
+    // a 2 km layer under a 2 m footing differs from the half-space by F2 ≈ 1e-3 of F1 — tolerance 0.2 %.
+    const profile: SoilProfile = { groundLevelM: 0, waterTableDepthM: 0, layers: [{ name: 'stiff clay', thicknessM: 2000, unitWeightKnPerM3: 20, saturatedUnitWeightKnPerM3: 20, elasticModulusKpa: 20_000, poissonRatio: 0.3 }] };
+    const result = runSettlementCheck({ profile, footings: [{ ...footing, depthM: 0 }] });
+    const expected = ((200 * 2 * 0.91) / 20_000) * 1.122;
+    expect(Math.abs((result.footings[0]?.immediateM ?? 0) - expected) / expected).toBeLessThan(0.002);
+    const corner = result.footings[0]?.points.find((p) => p.label === 'corner-x+y+');
+    expect(Math.abs((corner?.immediateM ?? 0) / (result.footings[0]?.immediateM ?? 1) - 0.5)).toBeLessThan(0.002);
+  });
+
+  it('splitting an elastic layer into two identical layers leaves immediate settlement unchanged', () => {
+    const layer = { unitWeightKnPerM3: 19, saturatedUnitWeightKnPerM3: 19, elasticModulusKpa: 15_000, poissonRatio: 0.35 };
+    const one: SoilProfile = { groundLevelM: 0, waterTableDepthM: 5, layers: [{ name: 'a', thicknessM: 10, ...layer }] };
+    const two: SoilProfile = { groundLevelM: 0, waterTableDepthM: 5, layers: [{ name: 'a', thicknessM: 3.7, ...layer }, { name: 'b', thicknessM: 6.3, ...layer }] };
+    const settle = (profile: SoilProfile) => runSettlementCheck({ profile, footings: [footing] }).footings[0]?.immediateM ?? 0;
+    expect(settle(two)).toBeCloseTo(settle(one), 12);
+  });
+
+  it('neighbours add settlement and their stress is reported apart', () => {
+    const footings: Footing[] = [footing, { ...footing, id: 'F2', xM: 3 }];
+    const withNeighbours = runSettlementCheck({ profile: sandOverClay(), footings });
+    const alone = runSettlementCheck({ profile: sandOverClay(), footings, options: { includeNeighbours: false } });
+    expect(withNeighbours.footings[0]?.primaryM).toBeGreaterThan(alone.footings[0]?.primaryM ?? Infinity);
+    expect(withNeighbours.footings[0]?.sublayers[0]?.neighboursStressIncreaseKpa).toBeGreaterThan(0);
+    expect(alone.footings[0]?.sublayers[0]?.neighboursStressIncreaseKpa).toBe(0);
+  });
+
+  it('pairs: differential settlement, δ/L, and the published limit named', () => {
+    const footings: Footing[] = [footing, { ...footing, id: 'F2', xM: 5, loadKn: 1600 }];
+    const result = runSettlementCheck({ profile: sandOverClay(), footings, options: { includeNeighbours: false } });
+    const [a, b] = result.footings;
+    const [pair] = result.pairs;
+    expect(pair?.differentialSettlementM).toBeCloseTo(Math.abs((a?.totalM ?? 0) - (b?.totalM ?? 0)), 12);
+    expect(pair?.angularDistortion).toBeCloseTo((pair?.differentialSettlementM ?? 0) / 5, 12);
+    expect(pair?.withinDesignLimit).toBe((pair?.angularDistortion ?? 0) <= 1 / 500);
+    expect(pair?.verdicts.map((v) => v.source)).toEqual(['Bjerrum (1963)', 'Skempton & MacDonald (1956)']);
+  });
+
+  it('time rate: the layer’s t50 is 0.197·Hdr²/cv and the curve ends at immediate + primary', () => {
+    // Double drainage, Hdr = 2 m, cv = 2 m²/yr: t50 = 0.1967 × 4/2 = 0.393 yr (table Tv 0.197 → 0.394, three figures).
+    const profile = sandOverClay({ cvM2PerYr: 2, drainageTop: 'free', drainageBottom: 'free' });
+    const result = runSettlementCheck({ profile, footings: [footing], options: { timesYears: [0, 1000] } });
+    const f = result.footings[0];
+    expect(Math.abs((f?.timeTo50PercentYears ?? 0) - 0.394)).toBeLessThanOrEqual(0.001);
+    expect(f?.timeCurve[0]?.settlementM).toBe(f?.immediateM);
+    expect(f?.timeCurve[1]?.settlementM).toBeCloseTo((f?.immediateM ?? 0) + (f?.primaryM ?? 0), 12);
+    expect(result.layers[1]?.drainagePathM).toBe(2);
+  });
+
+  it('secondary compression over the design life from Cα, starting at 95 % of primary', () => {
+    // One sublayer: t1 = Tv(0.95)·Hdr²/cv = 1.1290 × 4/2 = 2.258 yr; ep = 1 − 2 × Sc/4; Ss = Cα/(1 + ep) × 4 × log10(50/t1).
+    const profile = sandOverClay({ cvM2PerYr: 2, cAlpha: 0.014, drainageTop: 'free', drainageBottom: 'free' });
+    const result = runSettlementCheck({ profile, footings: [footing], options: { sublayerCount: 1, evaluationPoints: 'centre' } });
+    const f = result.footings[0];
+    const ep = 1 - (2 * (f?.primaryM ?? 0)) / 4;
+    const t1 = result.layers[1]?.endOfPrimaryYears ?? 0;
+    expect(t1).toBeCloseTo(1.129 * 2, 2);
+    expect(f?.secondaryM).toBeCloseTo((0.014 / (1 + ep)) * 4 * Math.log10(50 / t1), 12);
+    expect(f?.totalM).toBeCloseTo((f?.immediateM ?? 0) + (f?.primaryM ?? 0) + (f?.secondaryM ?? 0), 12);
+  });
+
+  it('records every layer parameter used and serialises to JSON without loss or NaN', () => {
+    const result = runSettlementCheck({ profile: sandOverClay({ cvM2PerYr: 2, drainageTop: 'free', drainageBottom: 'impermeable' }), footings: [footing, { ...footing, id: 'F2', xM: 4 }] });
+    expect(result.layers[1]).toMatchObject({ name: 'clay', e0: 1, cc: 0.35, cs: 0.06, cvM2PerYr: 2, drainagePathM: 4, preconsolidationBasis: 'assumed-normally-consolidated' });
+    const text = JSON.stringify(result);
+    expect(JSON.parse(text)).toEqual(result);
+    expect(text).not.toMatch(/NaN|Infinity/);
+  });
+
+  it('property: settlement grows with load', () => {
+    fc.assert(
+      fc.property(fc.double({ min: 100, max: 3000, noNaN: true }), fc.double({ min: 1.05, max: 3, noNaN: true }), (loadKn, factor) => {
+        const settle = (load: number) => runSettlementCheck({ profile: sandOverClay({ ocr: 1.3 }), footings: [{ ...footing, loadKn: load }], options: { sublayerCount: 8, evaluationPoints: 'centre' } }).footings[0]?.totalM ?? 0;
+        expect(settle(loadKn * factor)).toBeGreaterThan(settle(loadKn));
+      }),
+      { numRuns: 40 },
+    );
+  });
+
+  it('property: for a fixed load, settlement falls as the footing widens', () => {
+    const profile: SoilProfile = { ...sandOverClay({ ocr: 1.3 }), layers: sandOverClay({ ocr: 1.3 }).layers.map((l) => ({ ...l, elasticModulusKpa: 20_000, poissonRatio: 0.3 })) };
+    fc.assert(
+      fc.property(fc.double({ min: 0.5, max: 5, noNaN: true }), fc.double({ min: 1.05, max: 2, noNaN: true }), (widthM, factor) => {
+        const settle = (b: number) => runSettlementCheck({ profile, footings: [{ ...footing, widthM: b, lengthM: b }], options: { sublayerCount: 8, evaluationPoints: 'centre' } }).footings[0]?.totalM ?? 0;
+        expect(settle(widthM * factor)).toBeLessThan(settle(widthM));
+      }),
+      { numRuns: 40 },
+    );
+  });
+
+  it('the 2:1 method runs and says its corners equal its centre for a lone footing', () => {
+    const result = runSettlementCheck({ profile: sandOverClay(), footings: [footing], options: { stressMethod: '2to1' } });
+    const f = result.footings[0];
+    expect(f?.points[1]?.primaryM).toBeCloseTo(f?.primaryM ?? 0, 12);
+    expect(result.method.notes.some((n) => /2V:1H/.test(n))).toBe(true);
+  });
+
+  it.each([
+    [{ sublayerCount: 4, sublayerMaxThicknessM: 1 }, [footing], 'runSettlementCheck requires either sublayerCount or sublayerMaxThicknessM, not both'],
+    [{ designLifeYears: 0 }, [footing], 'runSettlementCheck requires a finite designLifeYears > 0'],
+    [{}, [footing, footing], 'runSettlementCheck requires unique footing ids (F1 repeats)'],
+    [{}, [{ ...footing, depthM: 9 }], 'runSettlementCheck requires depthM >= 0 and above the bottom of the profile (footing F1)'],
+    [{}, [], 'runSettlementCheck requires at least one footing'],
+    [{ endOfPrimaryShare: 1 }, [footing], 'runSettlementCheck requires endOfPrimaryShare strictly between 0 and 1'],
+  ])('throws RangeError for bad input (%#)', (options, footings, message) => {
+    expect(() => runSettlementCheck({ profile: sandOverClay(), footings, options })).toThrow(new RangeError(message));
+  });
+
+  it('throws RangeError when an overconsolidated layer has no cs', () => {
+    const profile = sandOverClay({ ocr: 1.5 });
+    const { cs: _cs, ...clayWithoutCs } = profile.layers[1]!;
+    expect(() => runSettlementCheck({ profile: { ...profile, layers: [profile.layers[0]!, clayWithoutCs] }, footings: [footing] })).toThrow(
+      new RangeError('runSettlementCheck requires cs wherever ocr or preconsolidationKpa is given, in layer 2 (clay)'),
+    );
+  });
+});
