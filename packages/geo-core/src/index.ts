@@ -3,3 +3,84 @@
 // ── Laboratory: oedometer test reduction ─────────────────────────────────────
 
 // ── Design: stresses, settlement, time rate, sizing, statistics, units ──────
+export { DAYS_PER_YEAR } from './constants/days-per-year.js';
+export { WATER_UNIT_WEIGHT_KN_PER_M3 } from './constants/water-unit-weight.js';
+
+export { splitIntoSublayers } from './profile/split-into-sublayers.js';
+export type { SublayerSpacing } from './profile/split-into-sublayers.js';
+export type { DrainageBoundary, SoilLayer, SoilProfile, Sublayer, VerticalStressState } from './profile/soil-profile.types.js';
+export { validateSoilProfile } from './profile/validate-soil-profile.js';
+export { verticalStressAtDepth } from './profile/vertical-stress-at-depth.js';
+
+export { cornerInfluenceFactor } from './stress/corner-influence-factor.js';
+export { footingPressureKpa } from './stress/footing-pressure.js';
+export type { Footing, FootingLoad, StressMethod } from './stress/footing.types.js';
+export { stressIncrease2to1 } from './stress/stress-increase-2to1.js';
+export type { StressIncrease2to1Input } from './stress/stress-increase-2to1.js';
+export { stressIncrease2to1Strip } from './stress/stress-increase-2to1-strip.js';
+export type { StressIncrease2to1StripInput } from './stress/stress-increase-2to1-strip.js';
+export { stressIncreaseCircle } from './stress/stress-increase-circle.js';
+export type { StressIncreaseCircleInput } from './stress/stress-increase-circle.js';
+export { stressIncreaseFromFootings } from './stress/stress-increase-from-footings.js';
+export type { StressIncreaseFromFootingsInput, StressIncreaseFromFootingsResult } from './stress/stress-increase-from-footings.js';
+export { stressIncreaseRectangle } from './stress/stress-increase-rectangle.js';
+export type { StressIncreaseRectangleInput } from './stress/stress-increase-rectangle.js';
+export { stressIncreaseStrip } from './stress/stress-increase-strip.js';
+export type { StressIncreaseStripInput } from './stress/stress-increase-strip.js';
+
+export { ANGULAR_DISTORTION_LIMITS } from './settlement/angular-distortion-limits.js';
+export type { AngularDistortionLimit } from './settlement/angular-distortion-limits.js';
+export { elasticInfluenceFactor } from './settlement/elastic-influence-factor.js';
+export type { ElasticSettlementPosition } from './settlement/elastic-influence-factor.js';
+export { footingPairResults } from './settlement/footing-pair-results.js';
+export { immediateSettlement } from './settlement/immediate-settlement.js';
+export type { ImmediateSettlementInput, ImmediateSettlementResult } from './settlement/immediate-settlement.js';
+export { immediateSettlementFiniteLayer } from './settlement/immediate-settlement-finite-layer.js';
+export type { ImmediateSettlementFiniteLayerInput, ImmediateSettlementFiniteLayerResult } from './settlement/immediate-settlement-finite-layer.js';
+export { judgeAngularDistortion } from './settlement/judge-angular-distortion.js';
+export type { AngularDistortionVerdict } from './settlement/judge-angular-distortion.js';
+export { primaryConsolidationSettlement } from './settlement/primary-consolidation-settlement.js';
+export type { ConsolidationCase, PrimaryConsolidationSettlementInput, PrimaryConsolidationSettlementResult } from './settlement/primary-consolidation-settlement.js';
+export { runSettlementCheck } from './settlement/run-settlement-check.js';
+export { secondaryCompressionSettlement } from './settlement/secondary-compression-settlement.js';
+export type { SecondaryCompressionSettlementInput } from './settlement/secondary-compression-settlement.js';
+export type {
+  FootingPairResult,
+  FootingSettlementResult,
+  LayerParametersUsed,
+  PointSettlement,
+  SettlementCheckInput,
+  SettlementCheckOptions,
+  SettlementCheckResult,
+  SublayerSettlementRow,
+} from './settlement/settlement-check.types.js';
+export { steinbrennerFactors } from './settlement/steinbrenner-factors.js';
+export type { SteinbrennerFactors } from './settlement/steinbrenner-factors.js';
+
+export type { ConsolidatingLayer } from './time-rate/consolidating-layer.types.js';
+export { drainagePathLengthM } from './time-rate/drainage-path-length.js';
+export type { DrainagePathLengthInput } from './time-rate/drainage-path-length.js';
+export { settlementAtTime } from './time-rate/settlement-at-time.js';
+export type { SettlementAtTimeResult } from './time-rate/settlement-at-time.js';
+export { settlementTimeCurve } from './time-rate/settlement-time-curve.js';
+export type { SettlementTimePoint } from './time-rate/settlement-time-curve.js';
+export { timeForPrimaryShare } from './time-rate/time-for-primary-share.js';
+export type { TimeForPrimaryShareResult } from './time-rate/time-for-primary-share.js';
+
+export { findWidthByBisection } from './sizing/find-width-by-bisection.js';
+export type { BisectionOutcome } from './sizing/find-width-by-bisection.js';
+export type { FootingToSize } from './sizing/footing-settlement-for-width.js';
+export { sizeFootingForSettlement } from './sizing/size-footing-for-settlement.js';
+export type { SizeFootingForSettlementInput, SizeFootingResult } from './sizing/size-footing-for-settlement.js';
+export { sizeFootingToMatchSettlement } from './sizing/size-footing-to-match-settlement.js';
+export type { SizeFootingToMatchSettlementInput } from './sizing/size-footing-to-match-settlement.js';
+
+export { characteristicValues } from './statistics/characteristic-values.js';
+export type { CharacteristicValuesInput, CharacteristicValuesResult } from './statistics/characteristic-values.js';
+export { SETTLEMENT_UNFAVOURABLE_SIDE } from './statistics/settlement-unfavourable-side.js';
+export type { UnfavourableSide } from './statistics/settlement-unfavourable-side.js';
+export { studentTQuantile } from './statistics/student-t-quantile.js';
+
+export { convertUnit } from './units/convert-unit.js';
+export { UNIT_CONVERSION_TABLE } from './units/unit-conversion-table.js';
+export type { UnitDefinition, UnitName, UnitQuantity } from './units/unit-conversion-table.js';
