@@ -1,6 +1,55 @@
 // The public surface of @porestack/geo-core: every export is listed by name.
 
 // ── Laboratory: oedometer test reduction ─────────────────────────────────────
+export { GEO_CORE_VERSION } from './constants/geo-core-version.js';
+export { analyzeConsolidationTest } from './lab/analyze-consolidation-test.js';
+export type {
+  ComplianceCalibrationPoint,
+  ConsolidationIncrementInput,
+  ConsolidationPicks,
+  ConsolidationSpecimenInput,
+  ConsolidationTestInput,
+  Drainage,
+  IncrementPicks,
+} from './lab/consolidation-test-input.js';
+export type {
+  AppliedPick,
+  CasagrandeIncrementResult,
+  CompressionIndexFit,
+  ConsolidationIncrementResult,
+  ConsolidationTestResult,
+  RecompressionIndexFit,
+  TaylorIncrementResult,
+} from './lab/consolidation-test-result.js';
+export type { ConsolidationWarning, ConsolidationWarningCode } from './lab/consolidation-warning.js';
+export type { CompressionLine, StressVoidRatioLine, StressVoidRatioPoint } from './lab/compression-curve-types.js';
+export { heightOfSolidsMm } from './lab/height-of-solids.js';
+export { voidRatioFromHeight } from './lab/void-ratio-from-height.js';
+export { apparatusDeflectionAtStress } from './lab/apparatus-deflection-at-stress.js';
+export { loadingKinds } from './lab/loading-kinds.js';
+export type { LoadingKind } from './lab/loading-kinds.js';
+export { fitCompressionLine } from './lab/fit-compression-line.js';
+export { selectVirginLine } from './lab/select-virgin-line.js';
+export { casagrandePreconsolidation, CASAGRANDE_CURVATURE_CONVENTION } from './lab/casagrande-preconsolidation.js';
+export type { CasagrandePreconsolidationConstruction, CasagrandePreconsolidationResult } from './lab/casagrande-preconsolidation.js';
+export { pachecoSilvaPreconsolidation } from './lab/pacheco-silva-preconsolidation.js';
+export type { PachecoSilvaPreconsolidationConstruction, PachecoSilvaPreconsolidationResult } from './lab/pacheco-silva-preconsolidation.js';
+export { sampleQualityLunne } from './lab/sample-quality-lunne.js';
+export type { SampleQualityAssessment, SampleQualityCategory } from './lab/sample-quality-lunne.js';
+export { degreeOfConsolidation } from './time-curves/degree-of-consolidation.js';
+export { timeFactorForDegree } from './time-curves/time-factor-for-degree.js';
+export { coefficientOfConsolidationM2PerYr } from './time-curves/coefficient-of-consolidation.js';
+export { TIME_FACTOR_AT_FIFTY_PERCENT } from './time-curves/time-factor-at-fifty-percent.js';
+export { TIME_FACTOR_AT_NINETY_PERCENT } from './time-curves/time-factor-at-ninety-percent.js';
+export { taylorSquareRootTime } from './time-curves/taylor-square-root-time.js';
+export type { TaylorConstruction, TaylorPicks, TaylorSquareRootTimeResult } from './time-curves/taylor-square-root-time.js';
+export { casagrandeLogTime } from './time-curves/casagrande-log-time.js';
+export type { CasagrandeConstruction, CasagrandeLogTimeResult, CasagrandePicks } from './time-curves/casagrande-log-time.js';
+export type { TimeCurveLine, TimeCurvePoint, TimeCurveWarning, TimeDeformationReading, ValueSource } from './time-curves/time-curve-types.js';
+export { readingsFromCsv, READINGS_CSV_HEADER } from './readings/readings-from-csv.js';
+export type { ReadingsCsvError, ReadingsCsvResult } from './readings/readings-from-csv.js';
+export { dialReadingsToDeformation } from './readings/dial-readings-to-deformation.js';
+export type { DialGauge, DialReading } from './readings/dial-readings-to-deformation.js';
 
 // ── Design: stresses, settlement, time rate, sizing, statistics, units ──────
 export { DAYS_PER_YEAR } from './constants/days-per-year.js';

@@ -1,0 +1,252 @@
+import { abscissaAtDeformation } from './abscissa-at-deformation.js';
+import { deformationAtAbscissa } from './deformation-at-abscissa.js';
+import { leastSquaresLine } from './least-squares-line.js';
+import { reduceTimeCurve } from './reduce-time-curve.js';
+import type { TimeCurveLine, TimeCurveWarning, TimeDeformationReading, ValueSource } from './time-curve-types.js';
+
+/** Half-width of the window in which the local slope of d–log t is fitted (a factor of 2 in time across). */
+const SLOPE_HALF_WINDOW_DECADES = 0.15;
+/**
+ * The secondary tail starts 8 times the steepest point's time later: the
+ * steepest point of Terzaghi's d–log t curve lies near Tv ≈ 0.3–0.4, and
+ * 8 × that (Tv ≈ 2.5–3) is past 99.9 % of primary.
+ */
+const TAIL_START_FACTOR_DECADES = Math.log10(8);
+/** A tail at least half as steep as the tangent is not a secondary line but primary still going. */
+const MAXIMUM_TAIL_TO_TANGENT_SLOPE = 0.5;
+/** d0 pairs are used while the later reading of the pair is within the parabolic part (U ≤ 50 %). */
+const PARABOLIC_UPPER_DEGREE = 0.5;
+
+export interface CasagrandePicks {
+  /** Time to 50 % consolidation read by the reviewer, min. */
+  readonly t50Min?: number | undefined;
+  /** Corrected zero, mm (same datum as the readings). */
+  readonly d0Mm?: number | undefined;
+  /** End of primary consolidation, mm (same datum as the readings). */
+  readonly d100Mm?: number | undefined;
+}
+
+export interface CasagrandeConstruction {
+  readonly d0Mm: number;
+  readonly d0Source: ValueSource;
+  /** The first pair of times t1, 4·t1 used for d0 = 2·d(t1) − d(4·t1). */
+  readonly d0TimePairMin: { readonly firstMin: number; readonly secondMin: number };
+  /** How many (binned) t1, 4·t1 pairs inside the parabolic part were averaged for d0. */
+  readonly d0PairCount: number;
+  /** End of primary (tangent meets secondary line), or null when primary was not reached and no pick was made. */
+  readonly d100Mm: number | null;
+  readonly d100Source: ValueSource;
+  readonly t100Min: number | null;
+  readonly d50Mm: number;
+  readonly t50Min: number;
+  readonly t50Source: ValueSource;
+  /** Time of the steepest part of the d–log t curve, min. */
+  readonly inflectionTimeMin: number;
+  /** Tangent at the steepest part, or null when it could not be drawn. */
+  readonly tangentLine: TimeCurveLine | null;
+  /** Line through the secondary tail, or null when there is no tail. */
+  readonly secondaryLine: TimeCurveLine | null;
+  /** Slope of the secondary line, mm per log10 cycle of time (positive in compression), or null. */
+  readonly secondarySlopeMmPerLogCycle: number | null;
+}
+
+export interface CasagrandeLogTimeResult {
+  readonly construction: CasagrandeConstruction | null;
+  readonly warnings: readonly TimeCurveWarning[];
+}
+
+/**
+ * Casagrande & Fadum's (1940) logarithm-of-time method for one load increment.
+ *
+ * On deformation against log10 t: the tangent at the steepest part (least
+ * squares over ±0.15 decade, at least one neighbour each side) meets the line
+ * fitted through the secondary tail (times ≥ 8 × the steepest point's) at
+ * d100. d0 = 2·d(t1) − d(4·t1), the parabola of the early curve, averaged over
+ * every pair whose later time is still below 50 % primary. d50 = (d0 + d100)/2;
+ * t50 is read off the curve. cv = 0.197·Hdr²/t50 follows with
+ * coefficientOfConsolidationM2PerYr; the tail slope gives Cα.
+ *
+ * Assumptions: Terzaghi's theory for primary, secondary compression linear in
+ * log t after primary. Sources: Casagrande, A. & Fadum, R. E. (1940) Notes on
+ * soil testing for engineering purposes, Harvard Soil Mechanics Series 8;
+ * ASTM D2435/D2435M §12.3.1; Holtz & Kovacs, *An Introduction to Geotechnical
+ * Engineering*, §9.5.
+ *
+ * @param readings one increment's readings, time non-decreasing.
+ * @param picks optional reviewer t50, d0, d100; a t50 outside the readings is not applied (warning).
+ * @returns the construction, or null with warnings saying why.
+ * @throws RangeError when times are negative, not finite or out of order, or a pick is not finite (t50 also positive).
+ * @example casagrandeLogTime(readings).construction?.t50Min
+ */
+export function casagrandeLogTime(readings: readonly TimeDeformationReading[], picks: CasagrandePicks = {}): CasagrandeLogTimeResult {
+  if (picks.t50Min !== undefined && !(picks.t50Min > 0 && Number.isFinite(picks.t50Min))) {
+    throw new RangeError('casagrandeLogTime requires a picked t50 to be a positive finite number of minutes');
+  }
+  if ((picks.d0Mm !== undefined && !Number.isFinite(picks.d0Mm)) || (picks.d100Mm !== undefined && !Number.isFinite(picks.d100Mm))) {
+    throw new RangeError('casagrandeLogTime requires picked d0 and d100 to be finite numbers of millimetres');
+  }
+  const warnings: TimeCurveWarning[] = [];
+  const curve = reduceTimeCurve(readings);
+  const count = curve.length;
+  const logs = curve.logTimes;
+  const deformations = curve.deformationsMm;
+  if (count < 4) {
+    return { construction: null, warnings: [{ code: 'insufficient-readings', message: 'Casagrande\'s log-time method needs at least four readings after the load was applied.' }] };
+  }
+
+  // Prefix sums make every local slope O(1), so a logger record costs one pass.
+  const sumX = new Float64Array(count + 1);
+  const sumY = new Float64Array(count + 1);
+  const sumXX = new Float64Array(count + 1);
+  const sumXY = new Float64Array(count + 1);
+  for (let index = 0; index < count; index += 1) {
+    const x = logs[index] as number;
+    const y = deformations[index] as number;
+    sumX[index + 1] = (sumX[index] as number) + x;
+    sumY[index + 1] = (sumY[index] as number) + y;
+    sumXX[index + 1] = (sumXX[index] as number) + x * x;
+    sumXY[index + 1] = (sumXY[index] as number) + x * y;
+  }
+  let steepestSlope = -Infinity;
+  let steepestIndex = -1;
+  let tangentCentroidX = 0;
+  let tangentCentroidY = 0;
+  let low = 0;
+  let high = 0;
+  for (let centre = 1; centre < count - 1; centre += 1) {
+    const x = logs[centre] as number;
+    while ((logs[low] as number) < x - SLOPE_HALF_WINDOW_DECADES) low += 1;
+    while (high + 1 < count && (logs[high + 1] as number) <= x + SLOPE_HALF_WINDOW_DECADES) high += 1;
+    const from = Math.min(low, centre - 1);
+    const to = Math.max(high, centre + 1);
+    const n = to - from + 1;
+    const sx = (sumX[to + 1] as number) - (sumX[from] as number);
+    const sy = (sumY[to + 1] as number) - (sumY[from] as number);
+    const sxx = (sumXX[to + 1] as number) - (sumXX[from] as number);
+    const sxy = (sumXY[to + 1] as number) - (sumXY[from] as number);
+    const denominator = n * sxx - sx * sx;
+    if (!(denominator > 0)) continue;
+    const slope = (n * sxy - sx * sy) / denominator;
+    if (slope > steepestSlope) {
+      steepestSlope = slope;
+      steepestIndex = centre;
+      tangentCentroidX = sx / n;
+      tangentCentroidY = sy / n;
+    }
+  }
+  if (steepestIndex < 0 || !(steepestSlope > 0)) {
+    return { construction: null, warnings: [{ code: 'insufficient-readings', message: 'The log-time curve never steepens in compression, so Casagrande\'s tangent cannot be drawn.' }] };
+  }
+  const inflectionLog = logs[steepestIndex] as number;
+
+  let tail: { slope: number; centroidX: number; centroidY: number } | null = null;
+  let tailStart = steepestIndex + 1;
+  while (tailStart < count && (logs[tailStart] as number) < inflectionLog + TAIL_START_FACTOR_DECADES) tailStart += 1;
+  let primaryNote: TimeCurveWarning | null = null;
+  if (count - tailStart < 2) {
+    primaryNote = { code: 'primary-not-reached', message: 'The readings stop too soon after the steepest part of the log-time curve to show a secondary-compression line, so primary consolidation was not reached (or not shown) in this increment; hold the load longer or pick d100.' };
+  } else {
+    const line = leastSquaresLine(logs, deformations, tailStart, count - 1);
+    if (line === null || line.slope >= MAXIMUM_TAIL_TO_TANGENT_SLOPE * steepestSlope) {
+      primaryNote = { code: 'primary-not-reached', message: 'The last readings are still falling steeply on the log-time plot, so primary consolidation was not reached in this increment; hold the load longer or pick d100.' };
+    } else {
+      tail = line;
+    }
+  }
+
+  let d100: number | null = null;
+  let log100: number | null = null;
+  if (tail !== null) {
+    log100 = (tail.centroidY - tangentCentroidY + steepestSlope * tangentCentroidX - tail.slope * tail.centroidX) / (steepestSlope - tail.slope);
+    d100 = tangentCentroidY + steepestSlope * (log100 - tangentCentroidX);
+  }
+  let d100Source: ValueSource = 'automatic';
+  if (picks.d100Mm !== undefined) {
+    d100 = picks.d100Mm;
+    d100Source = 'pick';
+    const pickedLog = abscissaAtDeformation(logs, deformations, d100);
+    log100 = pickedLog;
+    if (pickedLog === null) warnings.push({ code: 'pick-outside-data', message: `The picked d100 of ${picks.d100Mm} mm is not reached by the readings of this increment.` });
+  }
+
+  // d0 from the parabola: first pair always, then every pair still in the parabolic part.
+  const firstLog = logs[0] as number;
+  const lastLog = logs[count - 1] as number;
+  const fourLog = Math.log10(4);
+  const pairValue = (index: number): number | null => {
+    const later = deformationAtAbscissa(logs, deformations, (logs[index] as number) + fourLog);
+    return later === null ? null : 2 * (deformations[index] as number) - later;
+  };
+  const firstPair = pairValue(0);
+  if (firstPair === null) {
+    return { construction: null, warnings: [{ code: 'insufficient-readings', message: 'The readings do not span a factor of four in time after the first one, so the corrected zero d0 of the log-time method cannot be found.' }] };
+  }
+  let d0 = firstPair;
+  let pairCount = 1;
+  if (d100 !== null && d100 > firstPair) {
+    let sum = firstPair;
+    for (let index = 1; index < count && (logs[index] as number) + fourLog <= lastLog; index += 1) {
+      const later = deformationAtAbscissa(logs, deformations, (logs[index] as number) + fourLog) as number;
+      if ((later - firstPair) / (d100 - firstPair) > PARABOLIC_UPPER_DEGREE) break;
+      sum += 2 * (deformations[index] as number) - later;
+      pairCount += 1;
+    }
+    d0 = sum / pairCount;
+  }
+  const d0Source: ValueSource = picks.d0Mm === undefined ? 'automatic' : 'pick';
+  if (picks.d0Mm !== undefined) d0 = picks.d0Mm;
+
+  let d50: number;
+  let log50: number | null;
+  let t50Source: ValueSource = 'automatic';
+  const pickedT50Log = picks.t50Min === undefined ? null : Math.log10(picks.t50Min);
+  const pickedT50Deformation = pickedT50Log === null ? null : deformationAtAbscissa(logs, deformations, pickedT50Log);
+  if (picks.t50Min !== undefined && pickedT50Deformation === null) {
+    warnings.push({ code: 'pick-outside-data', message: `The picked t50 of ${picks.t50Min} min lies outside the readings of this increment, so it was not applied.` });
+  }
+  if (pickedT50Log !== null && pickedT50Deformation !== null) {
+    d50 = pickedT50Deformation;
+    log50 = pickedT50Log;
+    t50Source = 'pick';
+  } else {
+    if (d100 === null) return { construction: null, warnings: [...warnings, primaryNote ?? { code: 'primary-not-reached', message: 'The end of primary consolidation could not be found; pick d100 or t50.' }] };
+    d50 = (d0 + d100) / 2;
+    log50 = abscissaAtDeformation(logs, deformations, d50);
+    if (log50 === null) {
+      return { construction: null, warnings: [...warnings, { code: 'insufficient-readings', message: 'The first reading is already past 50 % consolidation, so t50 cannot be read; take earlier readings or pick t50.' }] };
+    }
+  }
+  if (primaryNote !== null && d100Source === 'automatic') warnings.push(primaryNote);
+
+  const point = (logTime: number, deformationMm: number) => ({ timeMin: 10 ** logTime, deformationMm });
+  const tangentEndLog = log100 ?? lastLog;
+  const tangentStartLog = Math.max(firstLog, tangentCentroidX - 0.5);
+  return {
+    construction: {
+      d0Mm: d0,
+      d0Source,
+      d0TimePairMin: { firstMin: curve.timesMin[0] as number, secondMin: 4 * (curve.timesMin[0] as number) },
+      d0PairCount: pairCount,
+      d100Mm: d100,
+      d100Source,
+      t100Min: log100 === null ? null : 10 ** log100,
+      d50Mm: d50,
+      t50Min: 10 ** log50,
+      t50Source,
+      inflectionTimeMin: curve.timesMin[steepestIndex] as number,
+      tangentLine: {
+        start: point(tangentStartLog, tangentCentroidY + steepestSlope * (tangentStartLog - tangentCentroidX)),
+        end: point(tangentEndLog, tangentCentroidY + steepestSlope * (tangentEndLog - tangentCentroidX)),
+      },
+      secondaryLine:
+        tail === null
+          ? null
+          : {
+              start: point(log100 ?? tail.centroidX, tail.centroidY + tail.slope * ((log100 ?? tail.centroidX) - tail.centroidX)),
+              end: point(lastLog, tail.centroidY + tail.slope * (lastLog - tail.centroidX)),
+            },
+      secondarySlopeMmPerLogCycle: tail === null ? null : tail.slope,
+    },
+    warnings,
+  };
+}
