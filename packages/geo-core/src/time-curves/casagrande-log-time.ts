@@ -141,7 +141,8 @@ export function casagrandeLogTime(readings: readonly TimeDeformationReading[], p
 
   let tail: { slope: number; centroidX: number; centroidY: number } | null = null;
   let tailStart = steepestIndex + 1;
-  while (tailStart < count && (logs[tailStart] as number) < inflectionLog + TAIL_START_FACTOR_DECADES) tailStart += 1;
+  // The 1e-9 decade keeps a reading exactly 8× later (8 → 64, 15 → 120 min) in the tail however the times are scaled.
+  while (tailStart < count && (logs[tailStart] as number) < inflectionLog + TAIL_START_FACTOR_DECADES - 1e-9) tailStart += 1;
   let primaryNote: TimeCurveWarning | null = null;
   if (count - tailStart < 2) {
     primaryNote = { code: 'primary-not-reached', message: 'The readings stop too soon after the steepest part of the log-time curve to show a secondary-compression line, so primary consolidation was not reached (or not shown) in this increment; hold the load longer or pick d100.' };
