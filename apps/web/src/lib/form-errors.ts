@@ -47,3 +47,12 @@ export function validate<T>(
   const result = schema.safeParse(values);
   return result.success ? { ok: true, data: result.data } : { ok: false, errors: fieldErrorsFromValidation(result.error) };
 }
+
+/** Moves the cursor to the first field with a message, so a keyboard user lands on what to fix. */
+export function focusFirstInvalid(form: HTMLFormElement, errors: FieldErrors): void {
+  const first = Array.from(form.elements).find(
+    (element): element is HTMLInputElement | HTMLSelectElement =>
+      (element instanceof HTMLInputElement || element instanceof HTMLSelectElement) && errors[element.name] !== undefined,
+  );
+  first?.focus();
+}

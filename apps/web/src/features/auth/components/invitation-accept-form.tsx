@@ -3,7 +3,7 @@ import { useState, type FormEvent } from 'react';
 import { Button } from '../../../components/button';
 import { ErrorMessage } from '../../../components/error-message';
 import { TextField } from '../../../components/text-field';
-import { fieldErrorsFromApi, formValues, validate, type FieldErrors } from '../../../lib/form-errors';
+import { fieldErrorsFromApi, focusFirstInvalid, formValues, validate, type FieldErrors } from '../../../lib/form-errors';
 import { useAcceptInvitation } from '../api/accept-invitation';
 
 type InvitationAcceptFormProps = {
@@ -27,7 +27,9 @@ export function InvitationAcceptForm({ token, invitation, onAccepted }: Invitati
     if (isNewAccount && (values['password'] ?? '').length < 10) clientErrors['password'] = 'Use a password of at least 10 characters.';
     const result = validate(InvitationAcceptSchema, isNewAccount ? values : { password: values['password'] });
     if (!result.ok || Object.keys(clientErrors).length > 0) {
-      setErrors({ ...(result.ok ? {} : result.errors), ...clientErrors });
+      const allErrors = { ...(result.ok ? {} : result.errors), ...clientErrors };
+      setErrors(allErrors);
+      focusFirstInvalid(event.currentTarget, allErrors);
       return;
     }
     setErrors({});

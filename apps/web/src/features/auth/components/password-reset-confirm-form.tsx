@@ -4,7 +4,7 @@ import { Alert } from '../../../components/alert';
 import { Button } from '../../../components/button';
 import { ErrorMessage } from '../../../components/error-message';
 import { TextField } from '../../../components/text-field';
-import { fieldErrorsFromApi, formValues, validate, type FieldErrors } from '../../../lib/form-errors';
+import { fieldErrorsFromApi, focusFirstInvalid, formValues, validate, type FieldErrors } from '../../../lib/form-errors';
 import { useConfirmPasswordReset } from '../api/confirm-password-reset';
 
 type PasswordResetConfirmFormProps = {
@@ -21,12 +21,15 @@ export function PasswordResetConfirmForm({ token, onReset }: PasswordResetConfir
     event.preventDefault();
     const values = formValues(event.currentTarget);
     if (values['password'] !== values['passwordAgain']) {
-      setErrors({ passwordAgain: 'The two passwords differ. Type the same password in both fields.' });
+      const mismatch = { passwordAgain: 'The two passwords differ. Type the same password in both fields.' };
+      setErrors(mismatch);
+      focusFirstInvalid(event.currentTarget, mismatch);
       return;
     }
     const result = validate(PasswordResetConfirmSchema, { token, password: values['password'] });
     if (!result.ok) {
       setErrors(result.errors);
+      focusFirstInvalid(event.currentTarget, result.errors);
       return;
     }
     setErrors({});

@@ -4,7 +4,7 @@ import { Alert } from '../../../components/alert';
 import { Button } from '../../../components/button';
 import { ErrorMessage } from '../../../components/error-message';
 import { TextField } from '../../../components/text-field';
-import { fieldErrorsFromApi, formValues, validate, type FieldErrors } from '../../../lib/form-errors';
+import { fieldErrorsFromApi, focusFirstInvalid, formValues, validate, type FieldErrors } from '../../../lib/form-errors';
 import { useRequestPasswordReset } from '../api/request-password-reset';
 
 export function PasswordResetRequestForm() {
@@ -18,6 +18,7 @@ export function PasswordResetRequestForm() {
     const result = validate(PasswordResetRequestSchema, formValues(event.currentTarget));
     if (!result.ok) {
       setErrors(result.errors);
+      focusFirstInvalid(event.currentTarget, result.errors);
       return;
     }
     setErrors({});

@@ -5,7 +5,7 @@ import { Button } from '../../../components/button';
 import { ErrorMessage } from '../../../components/error-message';
 import { TextField } from '../../../components/text-field';
 import { paths } from '../../../config/paths';
-import { fieldErrorsFromApi, formValues, validate, type FieldErrors } from '../../../lib/form-errors';
+import { fieldErrorsFromApi, focusFirstInvalid, formValues, validate, type FieldErrors } from '../../../lib/form-errors';
 import { useSignIn } from '../api/sign-in';
 
 type SignInFormProps = {
@@ -24,6 +24,7 @@ export function SignInForm({ onSignedIn, defaultEmail }: SignInFormProps) {
     const result = validate(SignInSchema, formValues(event.currentTarget));
     if (!result.ok) {
       setErrors(result.errors);
+      focusFirstInvalid(event.currentTarget, result.errors);
       return;
     }
     setErrors({});

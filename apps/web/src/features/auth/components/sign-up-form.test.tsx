@@ -47,3 +47,13 @@ describe('<SignUpForm />', () => {
     expect(await screen.findByRole('button', { name: 'Creating your account…' })).toBeDisabled();
   });
 });
+
+describe('<SignUpForm /> and the keyboard', () => {
+  it('moves the cursor to the first field that needs fixing', async () => {
+    const user = userEvent.setup();
+    renderWithProviders(<SignUpForm onSignedUp={() => undefined} />);
+    await user.type(screen.getByLabelText('Your name'), 'Ada Fenwright');
+    await user.click(screen.getByRole('button', { name: 'Create account' }));
+    expect(screen.getByLabelText('E-mail address')).toHaveFocus();
+  });
+});

@@ -3,7 +3,7 @@ import { useState, type FormEvent } from 'react';
 import { Button } from '../../../components/button';
 import { ErrorMessage } from '../../../components/error-message';
 import { TextField } from '../../../components/text-field';
-import { fieldErrorsFromApi, formValues, validate, type FieldErrors } from '../../../lib/form-errors';
+import { fieldErrorsFromApi, focusFirstInvalid, formValues, validate, type FieldErrors } from '../../../lib/form-errors';
 import { useSignUp } from '../api/sign-up';
 
 const FIELDS = ['name', 'email', 'password', 'organisationName'];
@@ -18,6 +18,7 @@ export function SignUpForm({ onSignedUp }: { onSignedUp: (session: Session) => v
     const result = validate(SignUpSchema, formValues(event.currentTarget));
     if (!result.ok) {
       setErrors(result.errors);
+      focusFirstInvalid(event.currentTarget, result.errors);
       return;
     }
     setErrors({});

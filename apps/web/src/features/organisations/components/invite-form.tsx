@@ -5,7 +5,7 @@ import { Button } from '../../../components/button';
 import { ErrorMessage } from '../../../components/error-message';
 import { Select } from '../../../components/select';
 import { TextField } from '../../../components/text-field';
-import { fieldErrorsFromApi, formValues, validate, type FieldErrors } from '../../../lib/form-errors';
+import { fieldErrorsFromApi, focusFirstInvalid, formValues, validate, type FieldErrors } from '../../../lib/form-errors';
 import { useCreateInvitation } from '../api/create-invitation';
 import { ROLE_OPTIONS } from './role-options';
 
@@ -23,6 +23,7 @@ export function InviteForm({ orgId }: { orgId: string }) {
     const result = validate(InvitationCreateSchema, formValues(form));
     if (!result.ok) {
       setErrors(result.errors);
+      focusFirstInvalid(event.currentTarget, result.errors);
       return;
     }
     setErrors({});
