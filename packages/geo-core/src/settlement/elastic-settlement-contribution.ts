@@ -40,18 +40,24 @@ function signedCornerSettlement(a: number, b: number, baseDepthM: number, elasti
   const lengthRatio = Math.max(Math.abs(a), Math.abs(b)) / shortM;
   let sum = 0;
   let previousDepthM = 0;
-  let previous = { f1: 0, f2: 0 };
+  let previousF1 = 0;
+  let previousF2 = 0;
   for (const layer of elasticLayers) {
     if (layer.bottomDepthM <= baseDepthM) continue;
     const topM = Math.max(0, layer.topDepthM - baseDepthM);
     const bottomM = layer.bottomDepthM - baseDepthM;
-    const atTop = topM === previousDepthM ? previous : steinbrennerFactors(lengthRatio, topM / shortM);
+    if (topM !== previousDepthM) {
+      const atTop = steinbrennerFactors(lengthRatio, topM / shortM);
+      previousF1 = atTop.f1;
+      previousF2 = atTop.f2;
+    }
     const atBottom = steinbrennerFactors(lengthRatio, bottomM / shortM);
     const nu = layer.poissonRatio;
-    const shapeFactorChange = atBottom.f1 - atTop.f1 + ((1 - 2 * nu) / (1 - nu)) * (atBottom.f2 - atTop.f2);
+    const shapeFactorChange = atBottom.f1 - previousF1 + ((1 - 2 * nu) / (1 - nu)) * (atBottom.f2 - previousF2);
     sum += (shortM * (1 - nu * nu) * shapeFactorChange) / layer.elasticModulusKpa;
     previousDepthM = bottomM;
-    previous = atBottom;
+    previousF1 = atBottom.f1;
+    previousF2 = atBottom.f2;
   }
   return (a > 0) === (b > 0) ? sum : -sum;
 }

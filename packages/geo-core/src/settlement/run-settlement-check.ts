@@ -1,13 +1,10 @@
 import { footingPressureKpa } from '../stress/footing-pressure.js';
 import type { PreparedFooting } from '../stress/footing-stress-contribution.js';
 import type { Footing } from '../stress/footing.types.js';
-import type { ConsolidatingLayer } from '../time-rate/consolidating-layer.types.js';
-import { settlementTimeCurve } from '../time-rate/settlement-time-curve.js';
-import { timeForPrimaryShare } from '../time-rate/time-for-primary-share.js';
 import { footingPairResults } from './footing-pair-results.js';
+import { footingSettlementResult } from './footing-settlement-result.js';
 import { prepareSettlementModel, type SettlementModel } from './prepare-settlement-model.js';
-import { settlementAtPoint } from './settlement-at-point.js';
-import type { FootingSettlementResult, PointSettlement, SettlementCheckInput, SettlementCheckResult } from './settlement-check.types.js';
+import type { SettlementCheckInput, SettlementCheckResult } from './settlement-check.types.js';
 
 const DEFAULT_SUBLAYER_MAX_THICKNESS_M = 0.5;
 const DEFAULT_DESIGN_LIFE_YEARS = 50;
@@ -60,7 +57,7 @@ export function runSettlementCheck(input: SettlementCheckInput): SettlementCheck
   const prepared = prepareFootings(input.footings, model, caller);
   const notes = methodNotes(stressMethod, includeNeighbours);
   const footings = prepared.map((footing, ownIndex) =>
-    footingResult({ model, prepared, ownIndex, source: input.footings[ownIndex], stressMethod, includeNeighbours, designLifeYears, options }),
+    footingSettlementResult({ model, prepared, ownIndex, stressMethod, includeNeighbours, designLifeYears, options }),
   );
   const pairs = footingPairResults(footings, designAngularDistortion, options.pairMaxDistanceM);
   return {
@@ -87,79 +84,6 @@ function prepareFootings(footings: readonly Footing[], model: SettlementModel, c
     if (!(pressureKpa >= 0)) throw new RangeError(`${caller} requires a load or pressure >= 0 (footing ${footing.id}); uplift is outside this check`);
     return { id: footing.id, xM: footing.xM, yM: footing.yM, widthM: footing.widthM, lengthM: footing.lengthM, depthM: footing.depthM, pressureKpa };
   });
-}
-
-interface FootingResultInput {
-  readonly model: SettlementModel;
-  readonly prepared: readonly PreparedFooting[];
-  readonly ownIndex: number;
-  readonly source: Footing | undefined;
-  readonly stressMethod: 'boussinesq' | '2to1';
-  readonly includeNeighbours: boolean;
-  readonly designLifeYears: number;
-  readonly options: NonNullable<SettlementCheckInput['options']>;
-}
-
-function footingResult(input: FootingResultInput): FootingSettlementResult {
-  const { model, prepared, ownIndex, stressMethod, includeNeighbours, designLifeYears, options } = input;
-  const footing = prepared[ownIndex];
-  if (footing === undefined) throw new RangeError('runSettlementCheck requires a consistent footing list');
-  const at = (xM: number, yM: number, withSublayers: boolean) =>
-    settlementAtPoint({ model, footings: prepared, ownIndex, xM, yM, method: stressMethod, includeNeighbours, designLifeYears, withSublayers });
-  const centre = at(footing.xM, footing.yM, true);
-  const halfWidthM = footing.widthM / 2;
-  const halfLengthM = footing.lengthM / 2;
-  const corners: Array<[PointSettlement['label'], number, number]> =
-    options.evaluationPoints === 'centre'
-      ? []
-      : [
-          ['corner-x-y-', -halfWidthM, -halfLengthM],
-          ['corner-x+y-', halfWidthM, -halfLengthM],
-          ['corner-x-y+', -halfWidthM, halfLengthM],
-          ['corner-x+y+', halfWidthM, halfLengthM],
-        ];
-  const points: PointSettlement[] = [
-    { label: 'centre', xM: footing.xM, yM: footing.yM, immediateM: centre.immediateM, primaryM: centre.primaryM, secondaryM: centre.secondaryM, totalM: centre.totalM },
-    ...corners.map(([label, dx, dy]) => {
-      const point = at(footing.xM + dx, footing.yM + dy, false);
-      return { label, xM: footing.xM + dx, yM: footing.yM + dy, immediateM: point.immediateM, primaryM: point.primaryM, secondaryM: point.secondaryM, totalM: point.totalM };
-    }),
-  ];
-  const consolidating: ConsolidatingLayer[] = [];
-  for (const [layerIndex, primarySettlementM] of centre.primaryByLayer) {
-    const layer = model.layers[layerIndex];
-    if (layer === undefined || layer.cvM2PerYr === null || layer.drainageTop === null || layer.drainageBottom === null || !(primarySettlementM > 0)) continue;
-    consolidating.push({
-      primarySettlementM,
-      thicknessM: layer.bottomDepthM - layer.topDepthM,
-      cvM2PerYr: layer.cvM2PerYr,
-      drainageTop: layer.drainageTop,
-      drainageBottom: layer.drainageBottom,
-    });
-  }
-  const timeCurve = settlementTimeCurve(consolidating, centre.immediateM, options.timesYears).map((point) => ({ timeYears: point.timeYears, settlementM: point.settlementM }));
-  const shareTime = (share: number) => (consolidating.length === 0 ? null : timeForPrimaryShare(consolidating, share).timeYears);
-  return {
-    id: footing.id,
-    xM: footing.xM,
-    yM: footing.yM,
-    widthM: footing.widthM,
-    lengthM: footing.lengthM,
-    depthM: footing.depthM,
-    pressureKpa: footing.pressureKpa,
-    loadKn: footing.pressureKpa * footing.widthM * footing.lengthM,
-    immediateM: centre.immediateM,
-    primaryM: centre.primaryM,
-    secondaryM: centre.secondaryM,
-    totalM: centre.totalM,
-    points,
-    sublayers: centre.sublayers,
-    primaryByLayer: [...centre.primaryByLayer].map(([layerIndex, primarySettlementM]) => ({ layerIndex, primarySettlementM })),
-    timeCurve,
-    timeTo50PercentYears: shareTime(0.5),
-    timeTo90PercentYears: shareTime(0.9),
-    withinTotalLimit: options.totalSettlementLimitM === undefined ? null : centre.totalM <= options.totalSettlementLimitM,
-  };
 }
 
 function methodNotes(stressMethod: 'boussinesq' | '2to1', includeNeighbours: boolean): string[] {

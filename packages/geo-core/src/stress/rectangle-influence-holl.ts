@@ -1,4 +1,4 @@
-import { signedRectangleInfluence } from './stress-increase-rectangle.js';
+import { signedRectangleInfluence } from './signed-rectangle-influence.js';
 
 // Below this depth, relative to the footing's size, the combined arctangents
 // could overflow (t ~ ab/(z·R) grows without bound); the corner-by-corner

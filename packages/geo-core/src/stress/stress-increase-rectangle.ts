@@ -1,4 +1,4 @@
-import { cornerInfluenceFactor } from './corner-influence-factor.js';
+import { signedRectangleInfluence } from './signed-rectangle-influence.js';
 
 /** A uniformly loaded rectangle and a point below it, both in metres. */
 export interface StressIncreaseRectangleInput {
@@ -45,21 +45,4 @@ export function stressIncreaseRectangle(input: StressIncreaseRectangleInput): nu
   }
   if (!(depthM > 0) || !Number.isFinite(depthM)) throw new RangeError('stressIncreaseRectangle requires finite depthM > 0');
   return pressureKpa * signedRectangleInfluence(widthM / 2 - xM, widthM / 2 + xM, lengthM / 2 - yM, lengthM / 2 + yM, depthM);
-}
-
-/**
- * Σ sign(a)·sign(b)·I(|a|/z, |b|/z) over the four edge distances; shared with
- * the multi-footing sum, which calls it millions of times and has validated its
- * inputs once.
- */
-export function signedRectangleInfluence(a1: number, a2: number, b1: number, b2: number, depthM: number): number {
-  return (
-    signedCorner(a1, b1, depthM) + signedCorner(a1, b2, depthM) + signedCorner(a2, b1, depthM) + signedCorner(a2, b2, depthM)
-  );
-}
-
-function signedCorner(a: number, b: number, depthM: number): number {
-  if (a === 0 || b === 0) return 0;
-  const value = cornerInfluenceFactor(Math.abs(a) / depthM, Math.abs(b) / depthM);
-  return (a > 0) === (b > 0) ? value : -value;
 }
