@@ -19,8 +19,13 @@ import { membersRouter } from './modules/organisations/members.router.js';
 
 const DEFAULT_WEB_DIST = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '../../web/dist');
 
+export interface AppOptions {
+  /** Serve this built web app; by default apps/web/dist, in production only, when it was built. */
+  webDist?: string;
+}
+
 /** The whole HTTP application, without listening; the data source must be initialised. */
-export function createApp(): Express {
+export function createApp(options: AppOptions = {}): Express {
   const config = env();
   const app = express();
   app.disable('x-powered-by');
@@ -61,13 +66,14 @@ export function createApp(): Express {
   app.use(auditRouter());
   app.use('/api', apiNotFound);
 
-  const webDist = config.WEB_DIST ?? DEFAULT_WEB_DIST;
-  if (config.NODE_ENV === 'production' && existsSync(path.join(webDist, 'index.html'))) {
+  const webDist = options.webDist ?? (config.NODE_ENV === 'production' ? (config.WEB_DIST ?? DEFAULT_WEB_DIST) : undefined);
+  if (webDist && existsSync(path.join(webDist, 'index.html'))) {
     app.use(express.static(webDist, { index: false, maxAge: '1h' }));
-    // Client-side routes (/members, /reset-password?token=…) all load the app shell.
+    // Client-side routes (/, /members, /reset-password?token=…) all load the app shell;
+    // `{*splat}` (optional) so that `/` matches too.
     app.use(
       defineRoutes('', [
-        { method: 'get', path: '/*splat', access: 'public', handler: (_req, res) => res.sendFile(path.join(webDist, 'index.html')) },
+        { method: 'get', path: '/{*splat}', access: 'public', handler: (_req, res) => res.sendFile(path.join(webDist, 'index.html')) },
       ]),
     );
   }

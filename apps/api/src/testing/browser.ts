@@ -64,12 +64,15 @@ export async function signUpAdmin(app: Express, label = 'admin'): Promise<Signed
   return { browser, session, orgId, email };
 }
 
+/** One bcrypt hash of TEST_PASSWORD for every user the tests insert directly. */
+let testPasswordHash: Promise<string> | undefined;
+
 /** A user added straight to the database with a role in `orgId` (faster than an invitation). */
 export async function createMember(orgId: string, role: Role, label: string = role): Promise<{ userId: string; email: string }> {
   const email = uniqueEmail(label);
   const user = await dataSource
     .getRepository(UserEntity)
-    .save({ email, name: `Test ${label}`, passwordHash: await hashPassword(TEST_PASSWORD) });
+    .save({ email, name: `Test ${label}`, passwordHash: await (testPasswordHash ??= hashPassword(TEST_PASSWORD)) });
   await dataSource.getRepository(MembershipEntity).insert({ organisationId: orgId, userId: user.id, role });
   return { userId: user.id, email };
 }
