@@ -142,6 +142,14 @@ describe('runSettlementCheck({ profile, footings, options })', () => {
     );
   });
 
+  it('judges each footing’s total against the limit given, and not at all without one', () => {
+    const judged = (limit?: number) =>
+      runSettlementCheck({ profile: sandOverClay(), footings: [footing], options: limit === undefined ? {} : { totalSettlementLimitM: limit } }).footings[0]?.withinTotalLimit;
+    expect(judged()).toBeNull();
+    expect(judged(0.065)).toBe(true);
+    expect(judged(0.01)).toBe(false);
+  });
+
   it('the 2:1 method runs and says its corners equal its centre for a lone footing', () => {
     const result = runSettlementCheck({ profile: sandOverClay(), footings: [footing], options: { stressMethod: '2to1' } });
     const f = result.footings[0];

@@ -45,6 +45,9 @@ describe('stressIncreaseFromFootings({ footings, xM, yM, depthBelowGroundM, meth
     expect(() => stressIncreaseFromFootings({ footings: [a], xM: 0, yM: 0, depthBelowGroundM: 0, method: 'boussinesq' })).toThrow(
       new RangeError('stressIncreaseFromFootings requires finite depthBelowGroundM > 0'),
     );
+    expect(() => stressIncreaseFromFootings({ footings: [a], xM: Number.NaN, yM: 0, depthBelowGroundM: 2, method: 'boussinesq' })).toThrow(
+      new RangeError('stressIncreaseFromFootings requires finite xM and yM'),
+    );
   });
 });
 
