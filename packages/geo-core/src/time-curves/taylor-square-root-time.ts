@@ -142,7 +142,8 @@ export function taylorSquareRootTime(readings: readonly TimeDeformationReading[]
   }
   const d50 = (d0 + d100) / 2;
   const rootT50 = abscissaAtDeformation(roots, deformations, d50);
-  const t90Min = rootT90 * rootT90;
+  // A picked t90 is returned exactly as entered, not squared back from its root.
+  const t90Min = t90Source === 'pick' && picks.t90Min !== undefined ? picks.t90Min : rootT90 * rootT90;
   return {
     construction: {
       d0Mm: d0,
