@@ -10,12 +10,14 @@ const EnvSchema = z.object({
   /** Loopback by default: a reverse proxy or a person on this machine reaches it. */
   HOST: z.string().default('127.0.0.1'),
   DATABASE_URL: z.url({ message: 'set DATABASE_URL to a postgres:// URL' }),
-  JWT_SECRET: z.string().min(32, { message: 'set JWT_SECRET to at least 32 random characters' }),
+  JWT_SECRET: z
+    .string({ error: 'set JWT_SECRET to at least 32 random characters' })
+    .min(32, { message: 'set JWT_SECRET to at least 32 random characters' }),
   PUBLIC_URL: z.url({ message: 'set PUBLIC_URL to the address people open, like http://127.0.0.1:3000' }),
   S3_ENDPOINT: z.url({ message: 'set S3_ENDPOINT to the S3 server, like http://127.0.0.1:4569' }),
-  S3_ACCESS_KEY: z.string().min(1),
-  S3_SECRET_KEY: z.string().min(1),
-  S3_BUCKET: z.string().min(3),
+  S3_ACCESS_KEY: z.string({ error: 'set S3_ACCESS_KEY (S3RVER for the local S3 fake)' }).min(1),
+  S3_SECRET_KEY: z.string({ error: 'set S3_SECRET_KEY (S3RVER for the local S3 fake)' }).min(1),
+  S3_BUCKET: z.string({ error: 'set S3_BUCKET to the bucket name, like porestack' }).min(3),
   S3_REGION: z.string().default('us-east-1'),
   SMTP_URL: z.url({ message: 'set SMTP_URL to the mail server, like smtp://127.0.0.1:1025' }),
   MAIL_FROM: z.string().default('Porestack <no-reply@porestack.test>'),
