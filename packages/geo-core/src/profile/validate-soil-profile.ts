@@ -32,7 +32,7 @@ function validateLayer(layer: SoilLayer, where: string, fail: (condition: string
     if (value !== undefined && !(value >= 0 && Number.isFinite(value))) fail(`${field} >= 0 in ${where}`);
   };
   if (!(layer.thicknessM > 0) || !Number.isFinite(layer.thicknessM)) fail(`thicknessM > 0 in ${where}`);
-  if (!(layer.unitWeightKnPerM3 > 0) || !(layer.saturatedUnitWeightKnPerM3 > 0)) {
+  if (!(layer.unitWeightKnPerM3 > 0 && Number.isFinite(layer.unitWeightKnPerM3)) || !(layer.saturatedUnitWeightKnPerM3 > 0 && Number.isFinite(layer.saturatedUnitWeightKnPerM3))) {
     fail(`unitWeightKnPerM3 > 0 and saturatedUnitWeightKnPerM3 > 0 in ${where}`);
   }
   positive(layer.e0, 'e0');
