@@ -1,4 +1,4 @@
-import { rectangleInfluenceHoll } from './rectangle-influence-holl.js';
+import { signedRectangleInfluence } from './signed-rectangle-influence.js';
 
 /**
  * Adds q·I(z) of one rectangle at a fixed plan offset to a column of depths:
@@ -7,7 +7,8 @@ import { rectangleInfluenceHoll } from './rectangle-influence-holl.js';
  * signs) is worked out once per column instead of once per depth — the
  * settlement check's inner loop, where it saves a third of the time.
  *
- * The formula is rectangleInfluenceHoll's; depths at or above the base add nothing.
+ * The formula is rectangleInfluenceHoll's (Holl's form, arctangents paired);
+ * depths at or above the base add nothing.
  *
  * @param halfWidthM B/2, m
  * @param halfLengthM L/2, m
@@ -51,7 +52,8 @@ export function addRectangleInfluenceOverDepths(
     const zM = (depthsM[k] ?? 0) - baseDepthM;
     if (zM <= 0) continue;
     if (zM < shallowLimitM) {
-      out[k] = (out[k] ?? 0) + pressureKpa * rectangleInfluenceHoll(halfWidthM, halfLengthM, dxM, dyM, zM);
+      // Just below the base the paired arctangents could overflow; sum the corners one by one there.
+      out[k] = (out[k] ?? 0) + pressureKpa * signedRectangleInfluence(a1, a2, b1, b2, zM);
       continue;
     }
     const z2 = zM * zM;
