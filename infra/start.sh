@@ -46,7 +46,7 @@ log "Building the web app"
 pnpm --filter @porestack/web run build >/dev/null || die "The web build failed: run 'pnpm --filter @porestack/web run build' to see why."
 
 log "Running migrations"
-pnpm --filter @porestack/api run --silent migrate || die "Migrations failed."
+pnpm --filter @porestack/api run --silent migrate >.run/migrate.log 2>&1 || die "Migrations failed: see .run/migrate.log"
 log "Seeding the demo organisation (kept if already there)"
 pnpm --filter @porestack/api run --silent seed >.run/seed.txt || die "Seeding failed."
 
