@@ -7,7 +7,19 @@ import { InvitationEntity } from './modules/invitations/invitation.entity.js';
 import { MembershipEntity } from './modules/organisations/membership.entity.js';
 import { OrganisationEntity } from './modules/organisations/organisation.entity.js';
 import { UserEntity } from './modules/users/user.entity.js';
+import { AnalysisEntity } from './modules/analyses/analysis.entity.js';
+import { BoreholeEntity } from './modules/boreholes/borehole.entity.js';
+import { ConsolidationTestEntity } from './modules/consolidation-tests/consolidation-test.entity.js';
+import { JobRunEntity } from './modules/job-runs/job-run.entity.js';
+import { ProjectMemberEntity } from './modules/projects/project-member.entity.js';
+import { ProjectEntity } from './modules/projects/project.entity.js';
+import { ReviewEventEntity } from './modules/reviews/review-event.entity.js';
+import { SampleEntity } from './modules/samples/sample.entity.js';
+import { SoilRecordSupersessionEntity } from './modules/soil-records/soil-record-supersession.entity.js';
+import { SoilRecordVersionEntity } from './modules/soil-records/soil-record-version.entity.js';
+import { SoilRecordEntity } from './modules/soil-records/soil-record.entity.js';
 import { Init1796179339734 } from './migrations/1796179339734-init.js';
+import { LabRecords1796180920952 } from './migrations/1796180920952-lab-records.js';
 
 /**
  * The one DataSource (the TypeORM CLI requires exactly one export here). Entities and
@@ -17,8 +29,10 @@ import { Init1796179339734 } from './migrations/1796179339734-init.js';
 export const dataSource = new DataSource({
   type: 'postgres',
   url: databaseUrl(),
-  entities: [UserEntity, OrganisationEntity, MembershipEntity, InvitationEntity, PasswordResetTokenEntity, AuditEntryEntity],
-  migrations: [Init1796179339734],
+  entities: [UserEntity, OrganisationEntity, MembershipEntity, InvitationEntity, PasswordResetTokenEntity, AuditEntryEntity,
+    ProjectEntity, ProjectMemberEntity, BoreholeEntity, SampleEntity, ConsolidationTestEntity, AnalysisEntity, ReviewEventEntity,
+    SoilRecordEntity, SoilRecordVersionEntity, SoilRecordSupersessionEntity, JobRunEntity],
+  migrations: [Init1796179339734, LabRecords1796180920952],
   // gen_random_uuid() is built into PostgreSQL 13+, so no extension is needed on a managed server.
   uuidExtension: 'pgcrypto',
   synchronize: false,

@@ -16,6 +16,8 @@ export const API_ERROR_CODES = [
   'email_taken',
   'already_member',
   'last_admin',
+  'invalid_transition',
+  'own_test',
   'rate_limited',
   'token_invalid',
   'token_used',

@@ -16,6 +16,8 @@ const STATUS_BY_CODE: Record<ErrorCode, number> = {
   email_taken: 409,
   already_member: 409,
   last_admin: 409,
+  invalid_transition: 409,
+  own_test: 403,
   rate_limited: 429,
   token_invalid: 400,
   token_used: 410,

@@ -1,0 +1,19 @@
+import type { Router } from 'express';
+import { uuidParam } from '../../http/params.js';
+import { currentTenant } from '../../http/request-context.js';
+import { defineRoutes } from '../../http/routes.js';
+import { LAB_READERS } from '../projects/lab-roles.js';
+import { jobRuns } from './job-runs.service.js';
+
+export function jobRunsRouter(): Router {
+  return defineRoutes('/api/orgs/:orgId/jobs', [
+    {
+      method: 'get',
+      path: '/:jobId',
+      access: LAB_READERS,
+      handler: async (req, res) => {
+        res.json(await jobRuns.find(currentTenant(req).orgId, uuidParam(req, 'jobId', 'job')));
+      },
+    },
+  ]);
+}
