@@ -18,8 +18,12 @@ import { SampleEntity } from './modules/samples/sample.entity.js';
 import { SoilRecordSupersessionEntity } from './modules/soil-records/soil-record-supersession.entity.js';
 import { SoilRecordVersionEntity } from './modules/soil-records/soil-record-version.entity.js';
 import { SoilRecordEntity } from './modules/soil-records/soil-record.entity.js';
+import { ImportProfileEntity } from './modules/import-profiles/import-profile.entity.js';
+import { ReadingEntity } from './modules/readings/reading.entity.js';
+import { UploadEntity } from './modules/uploads/upload.entity.js';
 import { Init1796179339734 } from './migrations/1796179339734-init.js';
 import { LabRecords1796180920952 } from './migrations/1796180920952-lab-records.js';
+import { ReadingsImport1796181181337 } from './migrations/1796181181337-readings-import.js';
 
 /**
  * The one DataSource (the TypeORM CLI requires exactly one export here). Entities and
@@ -31,8 +35,9 @@ export const dataSource = new DataSource({
   url: databaseUrl(),
   entities: [UserEntity, OrganisationEntity, MembershipEntity, InvitationEntity, PasswordResetTokenEntity, AuditEntryEntity,
     ProjectEntity, ProjectMemberEntity, BoreholeEntity, SampleEntity, ConsolidationTestEntity, AnalysisEntity, ReviewEventEntity,
-    SoilRecordEntity, SoilRecordVersionEntity, SoilRecordSupersessionEntity, JobRunEntity],
-  migrations: [Init1796179339734, LabRecords1796180920952],
+    SoilRecordEntity, SoilRecordVersionEntity, SoilRecordSupersessionEntity, JobRunEntity,
+    UploadEntity, ReadingEntity, ImportProfileEntity],
+  migrations: [Init1796179339734, LabRecords1796180920952, ReadingsImport1796181181337],
   // gen_random_uuid() is built into PostgreSQL 13+, so no extension is needed on a managed server.
   uuidExtension: 'pgcrypto',
   synchronize: false,

@@ -1,0 +1,45 @@
+import { Column, Entity, Index, JoinColumn, ManyToOne, PrimaryColumn, type Relation } from 'typeorm';
+import { ConsolidationTestEntity } from '../consolidation-tests/consolidation-test.entity.js';
+import { UploadEntity } from '../uploads/upload.entity.js';
+
+/**
+ * One reading of a test, in kPa, minutes and mm (compression positive), as imported.
+ * A test holds the readings of one upload at a time; the key (test, row number) needs no
+ * generated id, which keeps COPY of 200,000 rows fast. Written only by the bulk import.
+ */
+@Entity({ name: 'readings' })
+@Index('readings_organisation_id_idx', ['organisationId'])
+export class ReadingEntity {
+  @PrimaryColumn('uuid', { name: 'test_id', primaryKeyConstraintName: 'readings_pkey' })
+  testId!: string;
+
+  /** The row of the file it came from, as a spreadsheet numbers it (header = row 1). */
+  @PrimaryColumn('integer', { name: 'row_number', primaryKeyConstraintName: 'readings_pkey' })
+  rowNumber!: number;
+
+  @ManyToOne(() => ConsolidationTestEntity, { onDelete: 'CASCADE' })
+  @JoinColumn({ name: 'test_id', foreignKeyConstraintName: 'readings_test_id_fkey' })
+  test!: Relation<ConsolidationTestEntity>;
+
+  @Column('uuid', { name: 'organisation_id' })
+  organisationId!: string;
+
+  @Column('uuid', { name: 'upload_id' })
+  uploadId!: string;
+
+  @ManyToOne(() => UploadEntity, { onDelete: 'CASCADE' })
+  @JoinColumn({ name: 'upload_id', foreignKeyConstraintName: 'readings_upload_id_fkey' })
+  upload!: Relation<UploadEntity>;
+
+  @Column('integer', { name: 'increment_index' })
+  incrementIndex!: number;
+
+  @Column('double precision', { name: 'stress_kpa' })
+  stressKpa!: number;
+
+  @Column('double precision', { name: 'elapsed_min' })
+  elapsedMin!: number;
+
+  @Column('double precision', { name: 'deformation_mm' })
+  deformationMm!: number;
+}
