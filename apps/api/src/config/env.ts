@@ -28,6 +28,10 @@ const EnvSchema = z.object({
   SIGN_IN_RATE_WINDOW_MINUTES: z.coerce.number().int().positive().default(15),
   SESSION_DAYS: z.coerce.number().int().positive().default(7),
   LOG_LEVEL: z.enum(['fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent']).optional(),
+  /** Largest readings file one upload may be, in MB (the upload is refused with 413 above it). */
+  IMPORT_MAX_FILE_MB: z.coerce.number().positive().default(40),
+  /** Most rows of readings one file may hold. */
+  IMPORT_MAX_ROWS: z.coerce.number().int().positive().default(500_000),
   /** Folder of the built web app served in production. */
   WEB_DIST: z.string().optional(),
 });
