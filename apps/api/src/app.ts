@@ -16,6 +16,11 @@ import { authRouter } from './modules/auth/auth.router.js';
 import { healthRouter } from './modules/health/health.router.js';
 import { invitationsRouter, orgInvitationsRouter } from './modules/invitations/invitations.router.js';
 import { membersRouter } from './modules/organisations/members.router.js';
+import { consolidationTestsRouter } from './modules/consolidation-tests/consolidation-tests.router.js';
+import { jobRunsRouter } from './modules/job-runs/job-runs.router.js';
+import { projectsRouter } from './modules/projects/projects.router.js';
+import { reviewsRouter } from './modules/reviews/reviews.router.js';
+import { soilRecordsRouter } from './modules/soil-records/soil-records.router.js';
 
 const DEFAULT_WEB_DIST = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '../../web/dist');
 
@@ -64,6 +69,11 @@ export function createApp(options: AppOptions = {}): Express {
   app.use(orgInvitationsRouter());
   app.use(membersRouter());
   app.use(auditRouter());
+  app.use(projectsRouter());
+  app.use(consolidationTestsRouter());
+  app.use(reviewsRouter());
+  app.use(soilRecordsRouter());
+  app.use(jobRunsRouter());
   app.use('/api', apiNotFound);
 
   const webDist = options.webDist ?? (config.NODE_ENV === 'production' ? (config.WEB_DIST ?? DEFAULT_WEB_DIST) : undefined);

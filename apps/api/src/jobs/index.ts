@@ -1,5 +1,6 @@
+import { analyseTestJob } from './analyse-test.job.js';
 import { deleteExpiredTokensJob } from './delete-expired-tokens.job.js';
 import type { JobDefinition } from './job-definition.js';
 
 /** Every job the worker runs. */
-export const JOBS: JobDefinition[] = [deleteExpiredTokensJob];
+export const JOBS: JobDefinition[] = [deleteExpiredTokensJob, analyseTestJob];

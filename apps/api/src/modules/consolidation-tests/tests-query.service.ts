@@ -1,0 +1,105 @@
+import type { TestDetail, TestListQuery, TestSummary } from '@porestack/types';
+import { dataSource } from '../../data-source.js';
+import { NotFoundError } from '../../errors/domain-error.js';
+import { ANALYSE_TEST_QUEUE } from '../../jobs/analyse-test-queue.js';
+import { AnalysisEntity } from '../analyses/analysis.entity.js';
+import { toAnalysisSummary } from '../analyses/analyses.service.js';
+import { jobRuns } from '../job-runs/job-runs.service.js';
+import { inSituStress } from '../samples/in-situ-stress.js';
+import { ConsolidationTestEntity } from './consolidation-test.entity.js';
+
+const SUMMARY_SQL = `
+  SELECT t.id, t.reference, t.status, p.id AS project_id, p.name AS project_name, b.id AS borehole_id, b.name AS borehole_name,
+         b.water_table_depth_m, s.id AS sample_id, s.reference AS sample_reference, s.top_depth_m, s.bottom_depth_m,
+         s.bulk_unit_weight_kn_per_m3, s.in_situ_stress_kpa, u.id AS technician_id, u.name AS technician_name, t.submitted_at, t.updated_at
+    FROM consolidation_tests t
+    JOIN samples s ON s.id = t.sample_id
+    JOIN boreholes b ON b.id = s.borehole_id
+    JOIN projects p ON p.id = b.project_id
+    JOIN users u ON u.id = t.technician_id
+   WHERE t.organisation_id = $1`;
+
+type Row = Record<string, unknown>;
+
+function toSummary(row: Row): TestSummary {
+  return {
+    id: row['id'] as string,
+    reference: row['reference'] as string,
+    status: row['status'] as TestSummary['status'],
+    projectId: row['project_id'] as string,
+    projectName: row['project_name'] as string,
+    boreholeId: row['borehole_id'] as string,
+    boreholeName: row['borehole_name'] as string,
+    sampleId: row['sample_id'] as string,
+    sampleReference: row['sample_reference'] as string,
+    topDepthM: row['top_depth_m'] as number,
+    technicianId: row['technician_id'] as string,
+    technicianName: row['technician_name'] as string,
+    submittedAt: row['submitted_at'] ? (row['submitted_at'] as Date).toISOString() : null,
+    updatedAt: (row['updated_at'] as Date).toISOString(),
+  };
+}
+
+export async function listTests(orgId: string, filter: TestListQuery): Promise<TestSummary[]> {
+  const values: unknown[] = [orgId];
+  const clauses: string[] = [];
+  const add = (column: string, value: string | undefined) => {
+    if (value === undefined) return;
+    values.push(value);
+    clauses.push(`${column} = $${values.length}`);
+  };
+  add('p.id', filter.projectId);
+  add('b.id', filter.boreholeId);
+  add('s.id', filter.sampleId);
+  add('t.status', filter.status);
+  add('t.technician_id', filter.technicianId);
+  const sql = `${SUMMARY_SQL}${clauses.map((c) => ` AND ${c}`).join('')} ORDER BY p.name, b.name, s.top_depth_m, t.reference`;
+  return ((await dataSource.query(sql, values)) as Row[]).map(toSummary);
+}
+
+export async function getTestDetail(orgId: string, testId: string): Promise<TestDetail> {
+  const [row] = (await dataSource.query(`${SUMMARY_SQL} AND t.id = $2`, [orgId, testId])) as Row[];
+  const test = await dataSource.getRepository(ConsolidationTestEntity).findOneBy({ organisationId: orgId, id: testId });
+  if (!row || !test) throw new NotFoundError('test');
+  const analysis = test.latestAnalysisId ? await dataSource.getRepository(AnalysisEntity).findOneBy({ organisationId: orgId, id: test.latestAnalysisId }) : null;
+  const pending = await jobRuns.pendingFor(orgId, testId, ANALYSE_TEST_QUEUE);
+  const [lastChangeRequest] = test.status === 'changes_requested'
+    ? ((await dataSource.query(
+        `SELECT comment FROM review_events WHERE organisation_id = $1 AND test_id = $2 AND decision = 'changes_requested' ORDER BY at DESC LIMIT 1`,
+        [orgId, testId],
+      )) as Array<{ comment: string | null }>)
+    : [];
+  const stress = inSituStress(
+    {
+      topDepthM: row['top_depth_m'] as number,
+      bottomDepthM: row['bottom_depth_m'] as number,
+      bulkUnitWeightKnPerM3: row['bulk_unit_weight_kn_per_m3'] as number | null,
+      inSituStressKpa: row['in_situ_stress_kpa'] as number | null,
+    },
+    row['water_table_depth_m'] as number | null,
+  );
+  return {
+    ...toSummary(row),
+    specimen: {
+      initialHeightMm: test.initialHeightMm,
+      diameterMm: test.diameterMm,
+      specificGravity: test.specificGravity,
+      dryMassG: test.dryMassG,
+      initialWaterContent: test.initialWaterContent,
+      wetMassG: test.wetMassG,
+      finalWaterContent: test.finalWaterContent,
+      drainage: test.drainage,
+    },
+    apparatusName: test.apparatusName,
+    compliance: test.compliance,
+    startedOn: test.startedOn,
+    finishedOn: test.finishedOn,
+    inSituStressKpa: stress.kpa,
+    latestUploadId: test.latestUploadId,
+    picks: test.picks,
+    latestAnalysis: analysis ? toAnalysisSummary(analysis) : null,
+    pendingJobId: pending?.id ?? null,
+    changesRequestedComment: lastChangeRequest?.comment ?? null,
+    createdAt: test.createdAt.toISOString(),
+  };
+}

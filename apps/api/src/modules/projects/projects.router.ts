@@ -1,0 +1,70 @@
+import { BoreholeCreateSchema, ProjectCreateSchema, ProjectUpdateSchema, SampleCreateSchema } from '@porestack/types';
+import type { Router } from 'express';
+import { uuidParam } from '../../http/params.js';
+import { parse } from '../../http/parse.js';
+import { currentTenant, currentUser } from '../../http/request-context.js';
+import { defineRoutes } from '../../http/routes.js';
+import { createBorehole, listBoreholes } from '../boreholes/boreholes.service.js';
+import { createSample, listSamples } from '../samples/samples.service.js';
+import { LAB_READERS, LAB_WORKERS, PROJECT_EDITORS } from './lab-roles.js';
+import { createProject, getProject, listProjects, updateProject } from './projects.service.js';
+
+/** Projects, their boreholes and the boreholes' samples. */
+export function projectsRouter(): Router {
+  return defineRoutes('/api/orgs/:orgId', [
+    { method: 'get', path: '/projects', access: LAB_READERS, handler: async (req, res) => res.json(await listProjects(currentTenant(req).orgId)) },
+    {
+      method: 'post',
+      path: '/projects',
+      access: PROJECT_EDITORS,
+      handler: async (req, res) => {
+        res.status(201).json(await createProject(currentTenant(req).orgId, parse(ProjectCreateSchema, req.body), currentUser(req)));
+      },
+    },
+    {
+      method: 'get',
+      path: '/projects/:projectId',
+      access: LAB_READERS,
+      handler: async (req, res) => res.json(await getProject(currentTenant(req).orgId, uuidParam(req, 'projectId', 'project'))),
+    },
+    {
+      method: 'patch',
+      path: '/projects/:projectId',
+      access: PROJECT_EDITORS,
+      handler: async (req, res) => {
+        const projectId = uuidParam(req, 'projectId', 'project');
+        res.json(await updateProject(currentTenant(req).orgId, projectId, parse(ProjectUpdateSchema, req.body), currentUser(req)));
+      },
+    },
+    {
+      method: 'get',
+      path: '/projects/:projectId/boreholes',
+      access: LAB_READERS,
+      handler: async (req, res) => res.json(await listBoreholes(currentTenant(req).orgId, uuidParam(req, 'projectId', 'project'))),
+    },
+    {
+      method: 'post',
+      path: '/projects/:projectId/boreholes',
+      access: LAB_WORKERS,
+      handler: async (req, res) => {
+        const projectId = uuidParam(req, 'projectId', 'project');
+        res.status(201).json(await createBorehole(currentTenant(req).orgId, projectId, parse(BoreholeCreateSchema, req.body), currentUser(req)));
+      },
+    },
+    {
+      method: 'get',
+      path: '/boreholes/:boreholeId/samples',
+      access: LAB_READERS,
+      handler: async (req, res) => res.json(await listSamples(currentTenant(req).orgId, uuidParam(req, 'boreholeId', 'borehole'))),
+    },
+    {
+      method: 'post',
+      path: '/boreholes/:boreholeId/samples',
+      access: LAB_WORKERS,
+      handler: async (req, res) => {
+        const boreholeId = uuidParam(req, 'boreholeId', 'borehole');
+        res.status(201).json(await createSample(currentTenant(req).orgId, boreholeId, parse(SampleCreateSchema, req.body), currentUser(req)));
+      },
+    },
+  ]);
+}
