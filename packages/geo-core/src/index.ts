@@ -82,6 +82,7 @@ export type { AngularDistortionLimit } from './settlement/angular-distortion-lim
 export { elasticInfluenceFactor } from './settlement/elastic-influence-factor.js';
 export type { ElasticSettlementPosition } from './settlement/elastic-influence-factor.js';
 export { footingPairResults } from './settlement/footing-pair-results.js';
+export { foxDepthFactor } from './settlement/fox-depth-factor.js';
 export { immediateSettlement } from './settlement/immediate-settlement.js';
 export type { ImmediateSettlementInput, ImmediateSettlementResult } from './settlement/immediate-settlement.js';
 export { immediateSettlementFiniteLayer } from './settlement/immediate-settlement-finite-layer.js';
@@ -90,6 +91,8 @@ export { judgeAngularDistortion } from './settlement/judge-angular-distortion.js
 export type { AngularDistortionVerdict } from './settlement/judge-angular-distortion.js';
 export { primaryConsolidationSettlement } from './settlement/primary-consolidation-settlement.js';
 export type { ConsolidationCase, PrimaryConsolidationSettlementInput, PrimaryConsolidationSettlementResult } from './settlement/primary-consolidation-settlement.js';
+export { primaryConsolidationSettlementMv } from './settlement/primary-consolidation-settlement-mv.js';
+export type { PrimaryConsolidationSettlementMvInput } from './settlement/primary-consolidation-settlement-mv.js';
 export { runSettlementCheck } from './settlement/run-settlement-check.js';
 export { secondaryCompressionSettlement } from './settlement/secondary-compression-settlement.js';
 export type { SecondaryCompressionSettlementInput } from './settlement/secondary-compression-settlement.js';
@@ -98,9 +101,11 @@ export type {
   FootingSettlementResult,
   LayerParametersUsed,
   PointSettlement,
+  PrimaryMethod,
   SettlementCheckInput,
   SettlementCheckOptions,
   SettlementCheckResult,
+  SublayerConsolidationCase,
   SublayerSettlementRow,
 } from './settlement/settlement-check.types.js';
 export { steinbrennerFactors } from './settlement/steinbrenner-factors.js';

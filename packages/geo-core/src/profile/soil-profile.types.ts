@@ -4,8 +4,10 @@ export type DrainageBoundary = 'free' | 'impermeable';
 /**
  * One layer of the ground model, top-down. Unit weights are required for every
  * layer; the compressibility fields only where the layer is meant to settle.
- * A layer with e0 and cc is compressible (primary and secondary settlement);
- * a layer with elasticModulusKpa and poissonRatio adds immediate settlement.
+ * A layer with e0 and cc is compressible (primary and secondary settlement
+ * from e–log σ′); a layer with mvM2PerKn but no cc is compressible too, its
+ * primary settlement mv·Δσ′·H; a layer with elasticModulusKpa and
+ * poissonRatio adds immediate settlement.
  */
 export interface SoilLayer {
   readonly name: string;
@@ -25,6 +27,12 @@ export interface SoilLayer {
   readonly preconsolidationKpa?: number;
   /** Overconsolidation ratio σ′p/σ′v0, applied at every depth of the layer. Give this or preconsolidationKpa. */
   readonly ocr?: number;
+  /**
+   * Coefficient of volume compressibility mv over the stress range the layer
+   * will see, m²/kN (1 m²/MN = 0.001 m²/kN). Used only where cc is not given:
+   * e–log σ′ follows the stress level, a single mv does not.
+   */
+  readonly mvM2PerKn?: number;
   /** Coefficient of consolidation, m²/yr. */
   readonly cvM2PerYr?: number;
   /** Secondary compression index Cα = Δe/Δlog10 t, dimensionless. */

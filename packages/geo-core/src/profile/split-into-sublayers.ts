@@ -4,7 +4,7 @@ import type { SoilProfile, Sublayer } from './soil-profile.types.js';
 export type SublayerSpacing = { readonly count: number; readonly maxThicknessM?: never } | { readonly maxThicknessM: number; readonly count?: never };
 
 /**
- * Splits every compressible layer (one with e0 and cc) into equal sublayers, so
+ * Splits every compressible layer (one with e0 and cc, or with mvM2PerKn) into equal sublayers, so
  * that settlement is integrated with stresses taken at each slice's mid-depth
  * rather than once at the middle of a thick layer, which underestimates the
  * stress increase near the footing and misreads the log of stress.
@@ -30,7 +30,7 @@ export function splitIntoSublayers(profile: SoilProfile, spacing: SublayerSpacin
   const sublayers: Sublayer[] = [];
   let layerTopM = 0;
   profile.layers.forEach((layer, layerIndex) => {
-    if (layer.e0 !== undefined && layer.cc !== undefined) {
+    if ((layer.e0 !== undefined && layer.cc !== undefined) || layer.mvM2PerKn !== undefined) {
       // The 1e-9 keeps 4.0000000001 m / 2 m from becoming three slices through rounding.
       const count = spacing.count ?? Math.max(1, Math.ceil(layer.thicknessM / (spacing.maxThicknessM ?? layer.thicknessM) - 1e-9));
       const thicknessM = layer.thicknessM / count;

@@ -6,7 +6,7 @@ import type { SoilLayer, SoilProfile } from './soil-profile.types.js';
  *
  * Rules: finite ground level; water table depth ≥ 0; at least one layer; each
  * layer with thickness > 0 and unit weights > 0; where given, e0 > 0, cc ≥ 0,
- * cs ≥ 0, σ′p > 0, OCR ≥ 1 (not both σ′p and OCR), cv > 0, Cα ≥ 0, E > 0,
+ * cs ≥ 0, mv > 0, σ′p > 0, OCR ≥ 1 (not both σ′p and OCR), cv > 0, Cα ≥ 0, E > 0,
  * 0 ≤ ν ≤ 0.5; a layer with cv needs drainage at its top and bottom.
  *
  * @param profile the ground model (m, kN/m³, kPa, m²/yr)
@@ -38,6 +38,7 @@ function validateLayer(layer: SoilLayer, where: string, fail: (condition: string
   positive(layer.e0, 'e0');
   nonNegative(layer.cc, 'cc');
   nonNegative(layer.cs, 'cs');
+  positive(layer.mvM2PerKn, 'mvM2PerKn');
   positive(layer.preconsolidationKpa, 'preconsolidationKpa');
   if (layer.ocr !== undefined && !(layer.ocr >= 1 && Number.isFinite(layer.ocr))) fail(`ocr >= 1 in ${where}`);
   if (layer.ocr !== undefined && layer.preconsolidationKpa !== undefined) fail(`either ocr or preconsolidationKpa, not both, in ${where}`);

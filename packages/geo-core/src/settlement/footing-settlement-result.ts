@@ -78,6 +78,7 @@ export function footingSettlementResult(input: FootingSettlementResultInput): Fo
     depthM: footing.depthM,
     pressureKpa: footing.pressureKpa,
     loadKn: footing.pressureKpa * footing.widthM * footing.lengthM,
+    immediateDepthFactor: footing.immediateDepthFactor ?? 1,
     immediateM: centre.immediateM,
     primaryM: centre.primaryM,
     secondaryM: centre.secondaryM,

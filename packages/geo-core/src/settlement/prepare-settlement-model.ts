@@ -5,15 +5,21 @@ import { validateSoilProfile } from '../profile/validate-soil-profile.js';
 import { verticalStressAtDepth } from '../profile/vertical-stress-at-depth.js';
 import { timeFactorForDegree } from '../time-curves/time-factor-for-degree.js';
 import { drainagePathLengthM } from '../time-rate/drainage-path-length.js';
-import type { LayerParametersUsed } from './settlement-check.types.js';
+import type { LayerParametersUsed, PrimaryMethod } from './settlement-check.types.js';
 
 /** A sublayer with everything the settlement sum needs, fixed before any footing is looked at. */
 export interface PreparedSublayer extends Sublayer {
   readonly initialEffectiveStressKpa: number;
   readonly preconsolidationKpa: number;
-  readonly e0: number;
+  /** How primary settlement is worked out: e–log σ′ (Cc, Cs, σ′p) or mv·Δσ′·H. */
+  readonly primaryMethod: PrimaryMethod;
+  /** null only on an mv layer given without e0. */
+  readonly e0: number | null;
+  /** 0 on an mv layer. */
   readonly cc: number;
   readonly cs: number;
+  /** m²/kN; null on an e–log σ′ layer. */
+  readonly mvM2PerKn: number | null;
   readonly cAlpha: number | null;
   readonly endOfPrimaryYears: number | null;
 }
@@ -44,7 +50,8 @@ export interface SettlementModel {
  * and end of primary consolidation of each clay layer, and a record of every
  * parameter used. A careful designer's defaults, each stated in a warning:
  * no σ′p or OCR → normally consolidated (the cautious choice); σ′p below the
- * in-situ stress at some depth → that part normally consolidated.
+ * in-situ stress at some depth → that part normally consolidated. A layer
+ * with mv and no Cc settles by mv·Δσ′·H; with both, Cc is used and said so.
  *
  * @param profile the ground model
  * @param spacing sublayer count or maximum thickness
@@ -61,9 +68,11 @@ export function prepareSettlementModel(profile: SoilProfile, spacing: SublayerSp
   let topDepthM = 0;
   const layers: LayerParametersUsed[] = profile.layers.map((layer, layerIndex) => {
     const bottomDepthM = topDepthM + layer.thicknessM;
-    const compressible = layer.e0 !== undefined && layer.cc !== undefined;
+    const primaryMethod: PrimaryMethod | null =
+      layer.e0 !== undefined && layer.cc !== undefined ? 'e-log-stress' : layer.mvM2PerKn !== undefined ? 'mv' : null;
+    const compressible = primaryMethod !== null;
     const overconsolidated = (layer.ocr !== undefined && layer.ocr > 1) || layer.preconsolidationKpa !== undefined;
-    if (compressible && overconsolidated && layer.cs === undefined) {
+    if (primaryMethod === 'e-log-stress' && overconsolidated && layer.cs === undefined) {
       throw new RangeError(`${caller} requires cs wherever ocr or preconsolidationKpa is given, in layer ${layerIndex + 1} (${layer.name})`);
     }
     const preconsolidationBasis = !compressible
@@ -72,7 +81,15 @@ export function prepareSettlementModel(profile: SoilProfile, spacing: SublayerSp
         ? 'preconsolidation-stress'
         : layer.ocr !== undefined
           ? 'ocr'
-          : 'assumed-normally-consolidated';
+          : primaryMethod === 'mv'
+            ? null
+            : 'assumed-normally-consolidated';
+    if (primaryMethod === 'e-log-stress' && layer.mvM2PerKn !== undefined) {
+      warnings.push(`Layer ${layerIndex + 1} (${layer.name}) has both Cc and mv; its primary settlement uses Cc, e0 and σ′p, which follow the stress level, and mv is not used. Remove one if that is not what you mean.`);
+    }
+    if (primaryMethod === 'mv' && layer.cAlpha !== undefined && layer.e0 === undefined) {
+      warnings.push(`Layer ${layerIndex + 1} (${layer.name}) has mv and Cα but no e0, so Cα/(1 + ep) cannot be had and its secondary compression is left out. Give e0 to include it.`);
+    }
     if (preconsolidationBasis === 'assumed-normally-consolidated') {
       warnings.push(`Layer ${layerIndex + 1} (${layer.name}) has neither σ′p nor OCR; it is treated as normally consolidated, the cautious choice. Give σ′p from the oedometer tests to refine it.`);
     }
@@ -98,6 +115,8 @@ export function prepareSettlementModel(profile: SoilProfile, spacing: SublayerSp
       e0: layer.e0 ?? null,
       cc: layer.cc ?? null,
       cs: layer.cs ?? null,
+      mvM2PerKn: layer.mvM2PerKn ?? null,
+      primaryMethod,
       preconsolidationBasis,
       preconsolidationKpa: layer.preconsolidationKpa ?? null,
       ocr: layer.ocr ?? null,
@@ -115,20 +134,23 @@ export function prepareSettlementModel(profile: SoilProfile, spacing: SublayerSp
   const sublayers = splitIntoSublayers(profile, spacing).map((sublayer): PreparedSublayer => {
     const layer = profile.layers[sublayer.layerIndex];
     const used = layers[sublayer.layerIndex];
-    if (layer === undefined || used === undefined || layer.e0 === undefined || layer.cc === undefined) throw new RangeError(`${caller} requires a consistent profile`);
+    if (layer === undefined || used === undefined || used.primaryMethod === null) throw new RangeError(`${caller} requires a consistent profile`);
     const initialEffectiveStressKpa = verticalStressAtDepth(profile, sublayer.midDepthM).effectiveStressKpa;
     if (!(initialEffectiveStressKpa > 0)) {
       throw new RangeError(`${caller} requires a positive effective stress in layer ${sublayer.layerIndex + 1} (${layer.name}); check that saturated unit weights exceed ${WATER_UNIT_WEIGHT_KN_PER_M3} kN/m³`);
     }
     const given = layer.preconsolidationKpa ?? (layer.ocr ?? 1) * initialEffectiveStressKpa;
-    if (given < initialEffectiveStressKpa) clampedLayers.add(sublayer.layerIndex);
+    if (given < initialEffectiveStressKpa && used.primaryMethod === 'e-log-stress') clampedLayers.add(sublayer.layerIndex);
+    const cc = used.primaryMethod === 'e-log-stress' ? (layer.cc ?? 0) : 0;
     return {
       ...sublayer,
       initialEffectiveStressKpa,
       preconsolidationKpa: Math.max(given, initialEffectiveStressKpa),
-      e0: layer.e0,
-      cc: layer.cc,
-      cs: layer.cs ?? layer.cc,
+      primaryMethod: used.primaryMethod,
+      e0: layer.e0 ?? null,
+      cc,
+      cs: used.primaryMethod === 'e-log-stress' ? (layer.cs ?? cc) : 0,
+      mvM2PerKn: used.primaryMethod === 'mv' ? (layer.mvM2PerKn ?? null) : null,
       cAlpha: layer.cAlpha ?? null,
       endOfPrimaryYears: used.endOfPrimaryYears,
     };

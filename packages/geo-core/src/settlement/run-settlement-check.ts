@@ -2,6 +2,7 @@ import { footingPressureKpa } from '../stress/footing-pressure.js';
 import type { PreparedFooting } from '../stress/footing-stress-contribution.js';
 import type { Footing } from '../stress/footing.types.js';
 import { footingPairResults } from './footing-pair-results.js';
+import { foxDepthFactor } from './fox-depth-factor.js';
 import { footingSettlementResult } from './footing-settlement-result.js';
 import { prepareSettlementModel, type SettlementModel } from './prepare-settlement-model.js';
 import type { SettlementCheckInput, SettlementCheckResult } from './settlement-check.types.js';
@@ -16,7 +17,8 @@ const CAUTION =
 
 /**
  * The settlement check of a group of shallow footings on a layered profile:
- * for each footing, immediate settlement (layered Steinbrenner), primary
+ * for each footing, immediate settlement (layered Steinbrenner, optionally
+ * reduced by Fox's depth factor), primary
  * consolidation per sublayer (Terzaghi's e–log σ′, all three cases) under the
  * stress of the footing and — unless switched off — its neighbours (Boussinesq
  * superposition or 2V:1H), secondary compression over the design life from Cα,
@@ -46,6 +48,7 @@ export function runSettlementCheck(input: SettlementCheckInput): SettlementCheck
   const designAngularDistortion = options.designAngularDistortion ?? DEFAULT_DESIGN_ANGULAR_DISTORTION;
   const includeNeighbours = options.includeNeighbours ?? true;
   const stressMethod = options.stressMethod ?? 'boussinesq';
+  const applyFoxDepthFactor = options.applyFoxDepthFactor ?? false;
   if (!(designLifeYears > 0) || !Number.isFinite(designLifeYears)) throw new RangeError(`${caller} requires a finite designLifeYears > 0`);
   if (!(endOfPrimaryShare > 0 && endOfPrimaryShare < 1)) throw new RangeError(`${caller} requires endOfPrimaryShare strictly between 0 and 1`);
   if (!(designAngularDistortion > 0)) throw new RangeError(`${caller} requires designAngularDistortion > 0`);
@@ -54,14 +57,14 @@ export function runSettlementCheck(input: SettlementCheckInput): SettlementCheck
   if (stressMethod !== 'boussinesq' && stressMethod !== '2to1') throw new RangeError(`${caller} requires stressMethod 'boussinesq' or '2to1'`);
 
   const model = prepareSettlementModel(input.profile, spacing, endOfPrimaryShare, caller);
-  const prepared = prepareFootings(input.footings, model, caller);
-  const notes = methodNotes(stressMethod, includeNeighbours);
+  const prepared = prepareFootings(input.footings, model, caller, applyFoxDepthFactor);
+  const notes = methodNotes(stressMethod, includeNeighbours, applyFoxDepthFactor);
   const footings = prepared.map((footing, ownIndex) =>
     footingSettlementResult({ model, prepared, ownIndex, stressMethod, includeNeighbours, designLifeYears, options }),
   );
   const pairs = footingPairResults(footings, designAngularDistortion, options.pairMaxDistanceM);
   return {
-    method: { stressMethod, includeNeighbours, sublayerSpacing: spacing, designLifeYears, endOfPrimaryShare, designAngularDistortion, notes },
+    method: { stressMethod, includeNeighbours, sublayerSpacing: spacing, designLifeYears, endOfPrimaryShare, designAngularDistortion, applyFoxDepthFactor, notes },
     layers: model.layers,
     footings,
     pairs,
@@ -70,7 +73,7 @@ export function runSettlementCheck(input: SettlementCheckInput): SettlementCheck
   };
 }
 
-function prepareFootings(footings: readonly Footing[], model: SettlementModel, caller: string): PreparedFooting[] {
+function prepareFootings(footings: readonly Footing[], model: SettlementModel, caller: string, applyFoxDepthFactor: boolean): PreparedFooting[] {
   if (footings.length === 0) throw new RangeError(`${caller} requires at least one footing`);
   const ids = new Set<string>();
   return footings.map((footing) => {
@@ -82,15 +85,26 @@ function prepareFootings(footings: readonly Footing[], model: SettlementModel, c
     }
     const pressureKpa = footingPressureKpa(footing);
     if (!(pressureKpa >= 0)) throw new RangeError(`${caller} requires a load or pressure >= 0 (footing ${footing.id}); uplift is outside this check`);
-    return { id: footing.id, xM: footing.xM, yM: footing.yM, widthM: footing.widthM, lengthM: footing.lengthM, depthM: footing.depthM, pressureKpa };
+    const prepared = { id: footing.id, xM: footing.xM, yM: footing.yM, widthM: footing.widthM, lengthM: footing.lengthM, depthM: footing.depthM, pressureKpa };
+    return applyFoxDepthFactor ? { ...prepared, immediateDepthFactor: footingFoxDepthFactor(prepared, model) } : prepared;
   });
 }
 
-function methodNotes(stressMethod: 'boussinesq' | '2to1', includeNeighbours: boolean): string[] {
+/** Fox's If for a footing, with ν of the elastic layer just below its base; 1 at the surface or with no elastic layer below. */
+function footingFoxDepthFactor(footing: PreparedFooting, model: SettlementModel): number {
+  const below = model.elasticLayers.find((layer) => layer.bottomDepthM > footing.depthM);
+  if (below === undefined) return 1;
+  const shortM = Math.min(footing.widthM, footing.lengthM);
+  return foxDepthFactor(Math.max(footing.widthM, footing.lengthM) / shortM, footing.depthM / shortM, below.poissonRatio);
+}
+
+function methodNotes(stressMethod: 'boussinesq' | '2to1', includeNeighbours: boolean, applyFoxDepthFactor: boolean): string[] {
   const notes = [
     'Stresses below each footing base; footings are flexible and loaded by the given net pressure.',
-    'Primary settlement per sublayer from Cc, Cs, e0 and σ′p at mid-depth (Terzaghi, e–log σ′).',
-    'Immediate settlement from Steinbrenner’s factors over the layers with E and ν, without a depth (Fox) reduction.',
+    'Primary settlement per sublayer from Cc, Cs, e0 and σ′p at mid-depth (Terzaghi, e–log σ′), or from mv·Δσ′·H on a layer given mv and no Cc.',
+    applyFoxDepthFactor
+      ? 'Immediate settlement from Steinbrenner’s factors over the layers with E and ν; each footing’s own share reduced by Fox’s (1948) depth factor (ν of the layer below its base), its neighbours’ shares not.'
+      : 'Immediate settlement from Steinbrenner’s factors over the layers with E and ν, without a depth (Fox) reduction.',
     'Secondary compression from Cα over the design life, starting at the end of primary consolidation; Cα·Cs/Cc where a sublayer stays overconsolidated (Mesri & Godlewski 1977).',
   ];
   if (stressMethod === '2to1') notes.push('The 2V:1H method spreads the load uniformly, so corner and centre values of a footing alone do not differ; use Boussinesq for differential settlement within a footing.');

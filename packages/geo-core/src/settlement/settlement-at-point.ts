@@ -5,8 +5,9 @@ import type { StressMethod } from '../stress/footing.types.js';
 import { elasticSettlementContributionM } from './elastic-settlement-contribution.js';
 import type { SettlementModel } from './prepare-settlement-model.js';
 import { primaryConsolidationSettlement } from './primary-consolidation-settlement.js';
+import { primaryConsolidationSettlementMv } from './primary-consolidation-settlement-mv.js';
 import { secondaryCompressionSettlement } from './secondary-compression-settlement.js';
-import type { SublayerSettlementRow } from './settlement-check.types.js';
+import type { SublayerConsolidationCase, SublayerSettlementRow } from './settlement-check.types.js';
 
 /** How one point is evaluated. */
 export interface SettlementAtPointInput {
@@ -39,7 +40,11 @@ export interface SettlementAtPointResult {
  * below the footing's base with Δσ at each mid-depth from every footing, and
  * secondary compression of the same sublayers over the design life.
  *
- * Secondary compression uses Cα on sublayers that reach the virgin line and
+ * Primary settlement per sublayer is Terzaghi's e–log σ′ (three cases) or,
+ * on a layer given mv and no Cc, mv·Δσ′·H.
+ *
+ * Secondary compression uses Cα on sublayers that reach the virgin line (and
+ * on mv layers, whose branch is not known) and
  * Cα·Cs/Cc on those that stay overconsolidated, after Mesri & Godlewski's
  * (1977) constant Cα/Cc ratio (the recompression branch creeps in proportion to
  * its own index); ep = e0 − (1 + e0)·Sc/H.
@@ -56,7 +61,8 @@ export function settlementAtPoint(input: SettlementAtPointInput): SettlementAtPo
   for (let index = 0; index < footings.length; index += 1) {
     const footing = footings[index];
     if (footing === undefined || (!includeNeighbours && index !== ownIndex)) continue;
-    immediateM += elasticSettlementContributionM(footing, xM - footing.xM, yM - footing.yM, model.elasticLayers);
+    const depthFactor = index === ownIndex ? (footing.immediateDepthFactor ?? 1) : 1;
+    immediateM += depthFactor * elasticSettlementContributionM(footing, xM - footing.xM, yM - footing.yM, model.elasticLayers);
   }
   let primaryM = 0;
   let secondaryM = 0;
@@ -85,15 +91,7 @@ export function settlementAtPoint(input: SettlementAtPointInput): SettlementAtPo
     const neighboursKpa = neighboursStressKpa[k] ?? 0;
     // Superposed Boussinesq terms can round to −1e-17 far from every footing.
     const stressIncreaseKpa = Math.max(0, ownKpa + neighboursKpa);
-    const primary = primaryConsolidationSettlement({
-      thicknessM: sublayer.thicknessM,
-      e0: sublayer.e0,
-      cc: sublayer.cc,
-      cs: sublayer.cs,
-      initialEffectiveStressKpa: sublayer.initialEffectiveStressKpa,
-      stressIncreaseKpa,
-      preconsolidationKpa: sublayer.preconsolidationKpa,
-    });
+    const primary = primaryForSublayer(sublayer, stressIncreaseKpa);
     const secondary = secondaryForSublayer(sublayer, primary.settlementM, primary.consolidationCase === 'overconsolidated-below', designLifeYears);
     primaryM += primary.settlementM;
     secondaryM += secondary ?? 0;
@@ -120,6 +118,25 @@ export function settlementAtPoint(input: SettlementAtPointInput): SettlementAtPo
   return { immediateM, primaryM, secondaryM, totalM: immediateM + primaryM + secondaryM, primaryByLayer, sublayers: rows };
 }
 
+function primaryForSublayer(
+  sublayer: SettlementModel['sublayers'][number],
+  stressIncreaseKpa: number,
+): { readonly settlementM: number; readonly consolidationCase: SublayerConsolidationCase } {
+  if (sublayer.primaryMethod === 'mv' || sublayer.e0 === null) {
+    const settlementM = primaryConsolidationSettlementMv({ thicknessM: sublayer.thicknessM, mvM2PerKn: sublayer.mvM2PerKn ?? 0, stressIncreaseKpa });
+    return { settlementM, consolidationCase: 'volume-compressibility' };
+  }
+  return primaryConsolidationSettlement({
+    thicknessM: sublayer.thicknessM,
+    e0: sublayer.e0,
+    cc: sublayer.cc,
+    cs: sublayer.cs,
+    initialEffectiveStressKpa: sublayer.initialEffectiveStressKpa,
+    stressIncreaseKpa,
+    preconsolidationKpa: sublayer.preconsolidationKpa,
+  });
+}
+
 function secondaryForSublayer(
   sublayer: SettlementModel['sublayers'][number],
   primarySettlementM: number,
@@ -127,7 +144,7 @@ function secondaryForSublayer(
   designLifeYears: number,
 ): number | null {
   if (sublayer.cAlpha === null || sublayer.cAlpha === 0) return 0;
-  if (sublayer.endOfPrimaryYears === null) return null;
+  if (sublayer.endOfPrimaryYears === null || sublayer.e0 === null) return null;
   const cAlpha = staysOverconsolidated && sublayer.cc > 0 ? (sublayer.cAlpha * sublayer.cs) / sublayer.cc : sublayer.cAlpha;
   const voidRatioAtEndOfPrimary = sublayer.e0 - ((1 + sublayer.e0) * primarySettlementM) / sublayer.thicknessM;
   if (!(voidRatioAtEndOfPrimary > 0)) return null;

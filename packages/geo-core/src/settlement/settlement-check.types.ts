@@ -25,6 +25,15 @@ export interface SettlementCheckOptions {
   readonly designAngularDistortion?: number;
   /** Only judge pairs of footings closer than this, m (centre to centre). Default: every pair. */
   readonly pairMaxDistanceM?: number;
+  /**
+   * Reduce each footing's immediate settlement under itself by Fox's (1948)
+   * depth factor If(L/B, Df/B, ν of the layer below the base). Neighbours'
+   * contributions are not reduced (Fox's factor is for the loaded area's own
+   * mean settlement; leaving them whole errs on the side of more settlement).
+   * Default false: Fox assumes the soil above the base is in place and
+   * bonded to the footing, which an excavated and backfilled pit is not.
+   */
+  readonly applyFoxDepthFactor?: boolean;
   /** Total settlement a footing may reach, m; omitted: totals are not judged. */
   readonly totalSettlementLimitM?: number;
 }
@@ -35,6 +44,12 @@ export interface SettlementCheckInput {
   readonly footings: readonly Footing[];
   readonly options?: SettlementCheckOptions;
 }
+
+/** How a layer's primary consolidation settlement is worked out. */
+export type PrimaryMethod = 'e-log-stress' | 'mv';
+
+/** The branch a sublayer's primary settlement used: an e–log σ′ case, or 'volume-compressibility' (mv·Δσ′·H). */
+export type SublayerConsolidationCase = ConsolidationCase | 'volume-compressibility';
 
 /** The parameters a layer contributed, as used, so every number can be traced. */
 export interface LayerParametersUsed {
@@ -48,6 +63,10 @@ export interface LayerParametersUsed {
   readonly e0: number | null;
   readonly cc: number | null;
   readonly cs: number | null;
+  /** Coefficient of volume compressibility as given, m²/kN. */
+  readonly mvM2PerKn: number | null;
+  /** 'e-log-stress' where e0 and cc are given, 'mv' where only mv is; null for a layer that does not consolidate. */
+  readonly primaryMethod: PrimaryMethod | null;
   /** How σ′p was set: from σ′p, from OCR, or assumed normally consolidated. */
   readonly preconsolidationBasis: 'preconsolidation-stress' | 'ocr' | 'assumed-normally-consolidated' | null;
   readonly preconsolidationKpa: number | null;
@@ -76,9 +95,9 @@ export interface SublayerSettlementRow {
   readonly ownStressIncreaseKpa: number;
   readonly neighboursStressIncreaseKpa: number;
   readonly stressIncreaseKpa: number;
-  readonly consolidationCase: ConsolidationCase;
+  readonly consolidationCase: SublayerConsolidationCase;
   readonly primarySettlementM: number;
-  /** null where the layer has no cv, so the end of primary cannot be fixed. */
+  /** null where the layer has no cv, so the end of primary cannot be fixed, or (mv layers) no e0. */
   readonly secondarySettlementM: number | null;
 }
 
@@ -103,6 +122,8 @@ export interface FootingSettlementResult {
   readonly depthM: number;
   readonly pressureKpa: number;
   readonly loadKn: number;
+  /** Fox's depth factor applied to the footing's own immediate settlement (1 when the option is off). */
+  readonly immediateDepthFactor: number;
   readonly immediateM: number;
   readonly primaryM: number;
   readonly secondaryM: number;
@@ -138,6 +159,7 @@ export interface SettlementCheckResult {
     readonly designLifeYears: number;
     readonly endOfPrimaryShare: number;
     readonly designAngularDistortion: number;
+    readonly applyFoxDepthFactor: boolean;
     readonly notes: readonly string[];
   };
   readonly layers: readonly LayerParametersUsed[];

@@ -10,6 +10,8 @@ export interface PreparedFooting {
   readonly lengthM: number;
   readonly depthM: number;
   readonly pressureKpa: number;
+  /** Fox's depth factor on this footing's immediate settlement under itself (the settlement check's option); absent: 1. */
+  readonly immediateDepthFactor?: number;
 }
 
 /**
