@@ -36,6 +36,13 @@ export { pachecoSilvaPreconsolidation } from './lab/pacheco-silva-preconsolidati
 export type { PachecoSilvaPreconsolidationConstruction, PachecoSilvaPreconsolidationResult } from './lab/pacheco-silva-preconsolidation.js';
 export { sampleQualityLunne } from './lab/sample-quality-lunne.js';
 export type { SampleQualityAssessment, SampleQualityCategory } from './lab/sample-quality-lunne.js';
+export { generateSyntheticConsolidationTest } from './lab/synthetic/generate-synthetic-consolidation-test.js';
+export type { SyntheticConsolidationTest, SyntheticIncrementTruth } from './lab/synthetic/generate-synthetic-consolidation-test.js';
+export { DEFAULT_SYNTHETIC_CONSOLIDATION_PARAMETERS } from './lab/synthetic/synthetic-consolidation-parameters.js';
+export type { SyntheticConsolidationParameters } from './lab/synthetic/synthetic-consolidation-parameters.js';
+export { firstLoadingVoidRatio } from './lab/synthetic/first-loading-void-ratio.js';
+export type { FirstLoadingCurve } from './lab/synthetic/first-loading-void-ratio.js';
+export { logSpacedReadingTimesMin, STANDARD_READING_TIMES_MIN } from './lab/synthetic/log-spaced-reading-times.js';
 export { degreeOfConsolidation } from './time-curves/degree-of-consolidation.js';
 export { timeFactorForDegree } from './time-curves/time-factor-for-degree.js';
 export { coefficientOfConsolidationM2PerYr } from './time-curves/coefficient-of-consolidation.js';

@@ -1,5 +1,5 @@
 import type { CompressionLine, StressVoidRatioLine, StressVoidRatioPoint } from './compression-curve-types.js';
-import { naturalCubicSpline } from './natural-cubic-spline.js';
+import { compressionCurveInterpolant } from './compression-curve-interpolant.js';
 
 export interface PachecoSilvaPreconsolidationConstruction {
   readonly preconsolidationStressKpa: number;
@@ -26,8 +26,8 @@ export interface PachecoSilvaPreconsolidationResult {
  * Extend the virgin line up to the horizontal through e0 (point A); drop
  * vertically to the compression curve (B); go horizontally back to the
  * virgin line (C); σ′p is C's stress. No curvature is needed, so it is robust
- * for automation. The curve between points is the same natural cubic spline
- * in log σ′ used for Casagrande's construction, so the web draws one curve;
+ * for automation. The curve between points is the same natural quintic spline
+ * in log σ′ used for Casagrande's construction (compressionCurveInterpolant), so the web draws one curve;
  * below the first applied stress the curve is taken as e0 (the specimen's
  * state before loading), and then σ′p equals A's stress.
  *
@@ -57,7 +57,7 @@ export function pachecoSilvaPreconsolidation(
   if (loadingPoints.length < 2) return { construction: null, warnings: ['Pacheco Silva\'s construction needs at least two first-loading points.'] };
   const slope = virginLine.voidRatioPerLogCycle;
   if (!(slope < 0)) return { construction: null, warnings: ['The virgin line does not fall with stress, so Pacheco Silva\'s construction cannot be drawn.'] };
-  const spline = naturalCubicSpline(xs, loadingPoints.map((point) => point.voidRatio));
+  const spline = compressionCurveInterpolant(loadingPoints);
   const xFirst = xs[0] as number;
   const xLast = xs[xs.length - 1] as number;
   const xA = (initialVoidRatio - virginLine.voidRatioAtOneKpa) / slope;
