@@ -21,6 +21,10 @@ import { jobRunsRouter } from './modules/job-runs/job-runs.router.js';
 import { projectsRouter } from './modules/projects/projects.router.js';
 import { reviewsRouter } from './modules/reviews/reviews.router.js';
 import { soilRecordsRouter } from './modules/soil-records/soil-records.router.js';
+import { importProfilesRouter } from './modules/import-profiles/import-profiles.router.js';
+import { readingsRouter } from './modules/readings/readings.router.js';
+import { templatesRouter } from './modules/readings-import/templates.router.js';
+import { uploadsRouter } from './modules/uploads/uploads.router.js';
 
 const DEFAULT_WEB_DIST = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '../../web/dist');
 
@@ -74,6 +78,10 @@ export function createApp(options: AppOptions = {}): Express {
   app.use(reviewsRouter());
   app.use(soilRecordsRouter());
   app.use(jobRunsRouter());
+  app.use(uploadsRouter());
+  app.use(importProfilesRouter());
+  app.use(readingsRouter());
+  app.use(templatesRouter());
   app.use('/api', apiNotFound);
 
   const webDist = options.webDist ?? (config.NODE_ENV === 'production' ? (config.WEB_DIST ?? DEFAULT_WEB_DIST) : undefined);

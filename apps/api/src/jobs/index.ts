@@ -1,6 +1,7 @@
 import { analyseTestJob } from './analyse-test.job.js';
 import { deleteExpiredTokensJob } from './delete-expired-tokens.job.js';
+import { importReadingsJob } from './import-readings.job.js';
 import type { JobDefinition } from './job-definition.js';
 
 /** Every job the worker runs. */
-export const JOBS: JobDefinition[] = [deleteExpiredTokensJob, analyseTestJob];
+export const JOBS: JobDefinition[] = [deleteExpiredTokensJob, analyseTestJob, importReadingsJob];

@@ -1,0 +1,29 @@
+import { ImportProfileCreateSchema } from '@porestack/types';
+import type { Router } from 'express';
+import { parse } from '../../http/parse.js';
+import { currentTenant, currentUser } from '../../http/request-context.js';
+import { defineRoutes } from '../../http/routes.js';
+import { PROFILE_EDITORS, UPLOAD_READERS } from '../uploads/upload-roles.js';
+import { importProfiles } from './import-profiles.service.js';
+
+export function importProfilesRouter(): Router {
+  return defineRoutes('/api/orgs/:orgId/import-profiles', [
+    {
+      method: 'get',
+      path: '/',
+      access: UPLOAD_READERS,
+      handler: async (req, res) => {
+        res.json(await importProfiles.list(currentTenant(req).orgId));
+      },
+    },
+    {
+      method: 'post',
+      path: '/',
+      access: PROFILE_EDITORS,
+      handler: async (req, res) => {
+        const input = parse(ImportProfileCreateSchema, req.body);
+        res.status(201).json(await importProfiles.create(currentTenant(req).orgId, currentUser(req).id, input));
+      },
+    },
+  ]);
+}

@@ -1,0 +1,29 @@
+import { DomainError } from '../../errors/domain-error.js';
+import { ImportProblem } from '../readings-import/import-problem.js';
+
+export const fileTooLarge = (maxMb: number) =>
+  new DomainError(
+    'payload_too_large',
+    `The file is larger than ${maxMb} MB, the most one upload may be, so it was not stored. Split the readings into smaller files (or thin out the logger's fastest readings) and upload again.`,
+  );
+
+export const fileMissing = () =>
+  new DomainError('validation_failed', 'No file arrived. Choose a CSV or XLSX file of readings (form field "file") and upload again.', [
+    { path: 'file', message: 'Choose a file.' },
+  ]);
+
+/** A file refused by its content: not CSV or XLSX at all (415), or one whose rows cannot be read (422). */
+export function fileRefused(problem: ImportProblem, unreadableType: boolean): DomainError {
+  return new DomainError(unreadableType ? 'unsupported_file' : 'invalid_file', problem.message, problem.issues.map((issue) => ({ path: issue.column ? `row ${issue.row}, ${issue.column}` : `row ${issue.row}`, message: issue.message })));
+}
+
+export const readingsLocked = (status: string) =>
+  new DomainError(
+    'invalid_transition',
+    `This test is ${status === 'approved' ? 'approved' : 'with the lab manager for review'}, so its readings cannot be replaced now. ${status === 'approved' ? 'Re-run the analysis to prepare a new version; new readings need a new test.' : 'Wait for the review.'}`,
+  );
+
+export const profileNameTaken = (name: string) =>
+  new DomainError('profile_name_taken', `An import profile named “${name}” already exists in this organisation. Choose another name, or use the saved profile.`, [
+    { path: 'name', message: 'Already in use.' },
+  ]);
