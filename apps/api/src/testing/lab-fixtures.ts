@@ -1,0 +1,84 @@
+import { dataSource } from '../data-source.js';
+import { runAnalysis } from '../modules/analyses/analyses.service.js';
+import { createBorehole } from '../modules/boreholes/boreholes.service.js';
+import { createTest, markReadingsUploaded } from '../modules/consolidation-tests/consolidation-tests.service.js';
+import { createProject } from '../modules/projects/projects.service.js';
+import { submitTest } from '../modules/reviews/reviews.service.js';
+import { createSample } from '../modules/samples/samples.service.js';
+import { storeReadings } from '../seed/lab-readings-store.js';
+import { syntheticIncrements, type SyntheticSoil } from '../seed/lab-synthetic-readings.js';
+
+/** A soft clay with known parameters: what the analysis should give back. */
+export const KNOWN_SOIL: SyntheticSoil = {
+  initialHeightMm: 20,
+  diameterMm: 75,
+  specificGravity: 2.68,
+  initialVoidRatio: 1.05,
+  compressionIndex: 0.42,
+  recompressionIndex: 0.05,
+  swellIndex: 0.07,
+  preconsolidationStressKpa: 120,
+  cvM2PerYr: 2,
+  secondaryRatio: 0.04,
+  seatingStressKpa: 5,
+  stressesKpa: [12.5, 25, 50, 100, 200, 400, 800, 1600, 400, 100, 25],
+};
+
+let counter = 0;
+
+export interface LabFixture {
+  projectId: string;
+  boreholeId: string;
+  sampleId: string;
+  testId: string;
+  dryMassG: number;
+}
+
+/** Project → borehole → sample → draft test, through the services (as the routes would). */
+export async function draftTest(orgId: string, technicianId: string, options: { designerIds?: string[] } = {}): Promise<LabFixture> {
+  counter += 1;
+  const tag = `${Date.now().toString(36)}-${counter}`;
+  const actor = { id: technicianId };
+  const { dryMassG } = syntheticIncrements(KNOWN_SOIL);
+  const project = await createProject(orgId, { name: `Fixture project ${tag}`, reference: `FX-${tag}`, clientName: 'Fixture client', siteName: '', designerIds: options.designerIds ?? [] }, actor);
+  const borehole = await createBorehole(orgId, project.id, { name: 'BH1', groundLevelMOd: 4.2, waterTableDepthM: 1.5 }, actor);
+  const sample = await createSample(orgId, borehole.id, { reference: 'U1', topDepthM: 6, bottomDepthM: 6.45, description: 'Soft grey clay', bulkUnitWeightKnPerM3: 17.5, inSituStressKpa: null }, actor);
+  const testId = await createTest(
+    orgId,
+    sample.id,
+    {
+      reference: `T-${tag}`,
+      specimen: { initialHeightMm: KNOWN_SOIL.initialHeightMm, diameterMm: KNOWN_SOIL.diameterMm, specificGravity: KNOWN_SOIL.specificGravity, dryMassG, drainage: 'double' },
+      apparatusName: 'Frame 2',
+      compliance: [],
+      startedOn: '2026-03-02',
+      finishedOn: null,
+    },
+    actor,
+  );
+  return { projectId: project.id, boreholeId: borehole.id, sampleId: sample.id, testId, dryMassG };
+}
+
+/** Stores the known soil's readings as an imported upload and calls markReadingsUploaded. */
+export async function uploadKnownReadings(orgId: string, testId: string, uploaderId: string): Promise<{ uploadId: string; analysisJobId: string }> {
+  const { increments } = syntheticIncrements(KNOWN_SOIL);
+  return dataSource.transaction(async (manager) => {
+    const uploadId = await storeReadings(manager, { orgId, testId, uploadedById: uploaderId, fileName: 'readings.csv' }, increments);
+    const { analysisJobId } = await markReadingsUploaded(orgId, testId, { id: uploaderId }, { uploadId, manager });
+    return { uploadId, analysisJobId };
+  });
+}
+
+/** A test analysed directly (no worker): readings stored, analysis run by the service. */
+export async function analysedTest(orgId: string, technicianId: string, options: { designerIds?: string[] } = {}): Promise<LabFixture> {
+  const fixture = await draftTest(orgId, technicianId, options);
+  await uploadKnownReadings(orgId, fixture.testId, technicianId);
+  await runAnalysis(orgId, fixture.testId, technicianId);
+  return fixture;
+}
+
+export async function submittedTest(orgId: string, technicianId: string): Promise<LabFixture> {
+  const fixture = await analysedTest(orgId, technicianId);
+  await submitTest(orgId, fixture.testId, { id: technicianId });
+  return fixture;
+}
