@@ -55,7 +55,7 @@ describe('analyzeConsolidationTest(input) — ASTM D2435 quantities', () => {
 });
 
 describe('analyzeConsolidationTest(input) — recovery of a synthetic test built from Terzaghi\'s theory', () => {
-  // Generator: Cc 0.45, Cr 0.05, Cs 0.07, σ′p 150 kPa (rounded knee 0.1 decade), cv 1.5 m²/yr,
+  // Generator: Cc 0.45, Cr 0.05, Cs 0.07, σ′p 150 kPa (transition rounded over ±0.2 decade), cv 1.5 m²/yr,
   // Cα/Cc 0.03, seating 0.02 mm, immediate 3 %, noise σ = 0.001 mm. Bounds are set just above
   // the largest error measured over seeds 1–10.
   const seeds = [1, 2, 3, 4, 5, 6, 7, 8, 9, 10];
@@ -93,15 +93,40 @@ describe('analyzeConsolidationTest(input) — recovery of a synthetic test built
     });
   }
 
-  it('finds Casagrande\'s σ′p within 35 % of the asymptotes\' 150 kPa (measured +34 %: on doubling stresses the spline\'s sharpest bend falls on the 200 kPa point)', () => {
-    const result = analyzeConsolidationTest(syntheticConsolidationTest().input);
-    expect(relativeError(result.preconsolidation.casagrandeKpa, 150)).toBeLessThan(0.35);
+  // σ′p on doubling loads, seeds 1–10. The truth is where the generator's recompression and virgin
+  // asymptotes meet; the transition between them is rounded over ±0.2 decade (firstLoadingVoidRatio).
+  // Casagrande's construction drawn on the exact curve itself reads +9 % (the method's own reading of a
+  // rounded knee, measured on 100 stresses a decade of the noise-free curve), so most of the error below
+  // belongs to the method, not to the automation. Bounds are just above the largest error measured.
+  it('finds σ′p = 150 kPa by Casagrande within 17.5 % (measured +16.0 to +16.9 %) and by Pacheco Silva within 5 % (measured −4.6 to −4.4 %)', () => {
+    for (const seed of seeds) {
+      const result = analyzeConsolidationTest(syntheticConsolidationTest({ seed }).input);
+      expect(relativeError(result.preconsolidation.casagrandeKpa, 150)).toBeLessThan(0.175);
+      expect(relativeError(result.preconsolidation.pachecoSilvaKpa, 150)).toBeLessThan(0.05);
+    }
   });
 
-  it('finds Casagrande\'s σ′p within 12 % of 150 kPa when stresses are closely spaced (10 a decade; measured +10 %)', () => {
+  it.each([110, 130, 170, 190, 250])('finds σ′p = %s kPa (another place between two doubling loads) by Casagrande within 14 % (measured +5.3 to +13.3 % over all five) and by Pacheco Silva within 10 % (measured −9.4 to −5.0 %)', (preconsolidationStressKpa) => {
+    for (const seed of seeds) {
+      const result = analyzeConsolidationTest(syntheticConsolidationTest({ seed, preconsolidationStressKpa }).input);
+      expect(relativeError(result.preconsolidation.casagrandeKpa, preconsolidationStressKpa)).toBeLessThan(0.14);
+      expect(relativeError(result.preconsolidation.pachecoSilvaKpa, preconsolidationStressKpa)).toBeLessThan(0.1);
+    }
+  });
+
+  it('finds Casagrande\'s σ′p within 18.5 % of 150 kPa on the idealised sharp kink (measured +17.0 to +17.8 %; the cubic spline used before gave +33 %)', () => {
+    for (const seed of seeds) {
+      const result = analyzeConsolidationTest(syntheticConsolidationTest({ seed, transitionHalfWidthDecades: 0 }).input);
+      expect(relativeError(result.preconsolidation.casagrandeKpa, 150)).toBeLessThan(0.185);
+    }
+  });
+
+  it('finds Casagrande\'s σ′p within 12 % of 150 kPa when stresses are closely spaced (10 a decade; measured +6.0 to +11.3 %)', () => {
     const stressesKpa = Array.from({ length: 25 }, (_, step) => 10 * 10 ** (step / 10));
-    const result = analyzeConsolidationTest(syntheticConsolidationTest({ stressesKpa }).input);
-    expect(relativeError(result.preconsolidation.casagrandeKpa, 150)).toBeLessThan(0.12);
+    for (const seed of seeds) {
+      const result = analyzeConsolidationTest(syntheticConsolidationTest({ seed, stressesKpa }).input);
+      expect(relativeError(result.preconsolidation.casagrandeKpa, 150)).toBeLessThan(0.12);
+    }
   });
 
   it('reports OCR = σ′p/σ′v0 and a Lunne category when the in-situ stress is given', () => {
@@ -262,6 +287,30 @@ describe('analyzeConsolidationTest(input) — warnings and picks', () => {
     expect(result.increments[4]?.taylor?.t90Source).toBe('pick');
     expect(result.compressionFit?.source).toBe('pick');
     expect(result.compressionFit?.incrementIndices).toEqual([6, 7, 12]);
+  });
+
+  it('warns when a stress lies outside the apparatus calibration and subtracts the nearest calibrated deflection', () => {
+    const test = syntheticConsolidationTest();
+    const compliance = [{ stressKpa: 10, deflectionMm: 0.01 }, { stressKpa: 800, deflectionMm: 0.09 }];
+    const result = analyzeConsolidationTest({ ...test.input, compliance });
+    const outside = result.warnings.filter((warning) => warning.code === 'compliance-outside-calibration').map((warning) => warning.incrementIndex);
+    // Only increment 12 (1600 kPa) lies outside 10–800 kPa.
+    expect(outside).toEqual([12]);
+    expect(result.increments[11]?.apparatusDeflectionMm).toBe(0.09);
+    // Inside: 400 kPa is (400 − 10)/(800 − 10) of the way, 0.01 + 0.08 × 390/790 = 0.049494 mm (hand calculation).
+    expect(result.increments[5]?.apparatusDeflectionMm).toBeCloseTo(0.049494, 6);
+  });
+
+  it('warns when the dry mass given and wet mass/(1 + w0) disagree by more than 1 %, and uses the dry mass given', () => {
+    const test = syntheticConsolidationTest();
+    const dryMassG = test.input.specimen.dryMassG as number;
+    const agreeing = analyzeConsolidationTest({ ...test.input, specimen: { ...test.input.specimen, wetMassG: dryMassG * 1.4 * 1.005, initialWaterContent: 0.4 } });
+    expect(codes(agreeing)).not.toContain('mass-inconsistent');
+    const result = analyzeConsolidationTest({ ...test.input, specimen: { ...test.input.specimen, wetMassG: dryMassG * 1.4 * 1.03, initialWaterContent: 0.4 } });
+    const warning = result.warnings.find((item) => item.code === 'mass-inconsistent');
+    expect(warning?.message).toContain('3.0 %');
+    expect(result.specimen.dryMassG).toBe(dryMassG);
+    expect(result.specimen.dryMassSource).toBe('given');
   });
 
   it.each([

@@ -46,6 +46,32 @@ describe('casagrandePreconsolidation(loadingPoints, virginLine, virginStartStres
     expect(construction?.preconsolidationStressKpa).toBeGreaterThan(10);
   });
 
+  it('finds the sharpest bend between the points on a kink midway between two loads, and σ′p at the kink within 12.5 % (measured +11.4 %, the sharpest bend at 104 kPa)', () => {
+    // Recompression e = 1 − 0.03·log10(σ′/10) to 113 kPa (log 2.053, midway between 80 and 160), virgin slope −0.4 beyond.
+    const kinkKpa = 10 ** ((Math.log10(80) + Math.log10(160)) / 2);
+    const e = (stressKpa: number): number => 1 - 0.03 * Math.log10(stressKpa / 10) - (stressKpa > kinkKpa ? 0.37 * Math.log10(stressKpa / kinkKpa) : 0);
+    const kinked = [10, 20, 40, 80, 160, 320, 640].map((stressKpa) => ({ stressKpa, voidRatio: e(stressKpa) }));
+    const line = { voidRatioPerLogCycle: -0.4, voidRatioAtOneKpa: e(640) + 0.4 * Math.log10(640) };
+    const found = casagrandePreconsolidation(kinked, line, 160).construction;
+    expect(found?.maximumCurvaturePoint.stressKpa).toBeGreaterThan(82);
+    expect(found?.maximumCurvaturePoint.stressKpa).toBeLessThan(158);
+    expect(Math.abs((found?.preconsolidationStressKpa ?? 0) / kinkKpa - 1)).toBeLessThan(0.125);
+  });
+
+  it('falls back to the sharpest bend off the virgin line when the sharpest bend lies on the line, and says so', () => {
+    // A stiff clay with a sharp kink on the 80 kPa point: Cr = 0.0075, Cc = 0.1 (hand-made curve).
+    const stiff = [10, 20, 40, 80, 160, 320, 640].map((stressKpa) => ({
+      stressKpa,
+      voidRatio: 1 - 0.0075 * Math.log10(Math.min(stressKpa, 80) / 10) - 0.1 * Math.log10(Math.max(stressKpa, 80) / 80),
+    }));
+    const line = { voidRatioPerLogCycle: -0.1, voidRatioAtOneKpa: 1 - 0.0075 * Math.log10(8) + 0.1 * Math.log10(80) };
+    const result = casagrandePreconsolidation(stiff, line, 80);
+    expect(result.construction?.maximumCurvatureSearch).toBe('off-virgin-line');
+    expect(result.warnings[0]).toMatch(/lies on the virgin line itself/);
+    // Measured 78.7 kPa, −1.6 % from the kink.
+    expect(Math.abs((result.construction?.preconsolidationStressKpa ?? 0) / 80 - 1)).toBeLessThan(0.03);
+  });
+
   it('returns null with a reason for fewer than three points', () => {
     expect(casagrandePreconsolidation(points.slice(2), virginLine, 1000).construction).toBeNull();
   });
