@@ -5,6 +5,9 @@ import { dataSource } from '../../data-source.js';
 import { InvitationEntity } from '../../modules/invitations/invitation.entity.js';
 import { openBrowser, signedInBrowser, signUpAdmin, createMember, uniqueEmail, type Browser } from '../../testing/browser.js';
 import { listRoutes, type Access } from '../routes.js';
+import { LAB_READERS, LAB_WORKERS, PROJECT_EDITORS, RECORD_READERS, REVIEWERS } from '../../modules/projects/lab-roles.js';
+import { approveTest } from '../../modules/reviews/reviews.service.js';
+import { analysedTest, draftTest, submittedTest, uploadKnownReadings, type LabFixture } from '../../testing/lab-fixtures.js';
 
 const app = createApp();
 
@@ -21,6 +24,15 @@ interface Context {
   adminId: string;
   newMemberId: () => Promise<string>;
   newInvitationId: () => Promise<string>;
+  lab: {
+    technicianId: string;
+    draft: LabFixture;
+    analysed: LabFixture;
+    jobId: string;
+    recordId: string;
+    newAnalysedTestId: () => Promise<string>;
+    newSubmittedTestId: () => Promise<string>;
+  };
 }
 const ADMIN: readonly Role[] = ['admin'];
 const SPEC: Record<string, { access: Access; sample: (ctx: Context) => Promise<Sample> | Sample; signsOut?: true }> = {
@@ -62,6 +74,69 @@ const SPEC: Record<string, { access: Access; sample: (ctx: Context) => Promise<S
     sample: async (c) => ({ path: `/api/orgs/${c.orgId}/members/${await c.newMemberId()}` }),
   },
   'GET /api/orgs/:orgId/audit': { access: ADMIN, sample: (c) => ({ path: `/api/orgs/${c.orgId}/audit` }) },
+  'GET /api/orgs/:orgId/projects': { access: LAB_READERS, sample: (c) => ({ path: `/api/orgs/${c.orgId}/projects` }) },
+  'POST /api/orgs/:orgId/projects': {
+    access: PROJECT_EDITORS,
+    sample: (c) => ({ path: `/api/orgs/${c.orgId}/projects`, body: { name: 'Policy project', reference: `PP-${Math.random()}`, clientName: 'Policy client' } }),
+  },
+  'GET /api/orgs/:orgId/projects/:projectId': { access: LAB_READERS, sample: (c) => ({ path: `/api/orgs/${c.orgId}/projects/${c.lab.draft.projectId}` }) },
+  'PATCH /api/orgs/:orgId/projects/:projectId': {
+    access: PROJECT_EDITORS,
+    sample: (c) => ({ path: `/api/orgs/${c.orgId}/projects/${c.lab.draft.projectId}`, body: { siteName: 'Renamed site' } }),
+  },
+  'GET /api/orgs/:orgId/projects/:projectId/boreholes': {
+    access: LAB_READERS,
+    sample: (c) => ({ path: `/api/orgs/${c.orgId}/projects/${c.lab.draft.projectId}/boreholes` }),
+  },
+  'POST /api/orgs/:orgId/projects/:projectId/boreholes': {
+    access: LAB_WORKERS,
+    sample: (c) => ({ path: `/api/orgs/${c.orgId}/projects/${c.lab.draft.projectId}/boreholes`, body: { name: `BH-${Math.random()}` } }),
+  },
+  'GET /api/orgs/:orgId/boreholes/:boreholeId/samples': {
+    access: LAB_READERS,
+    sample: (c) => ({ path: `/api/orgs/${c.orgId}/boreholes/${c.lab.draft.boreholeId}/samples` }),
+  },
+  'POST /api/orgs/:orgId/boreholes/:boreholeId/samples': {
+    access: LAB_WORKERS,
+    sample: (c) => ({ path: `/api/orgs/${c.orgId}/boreholes/${c.lab.draft.boreholeId}/samples`, body: { reference: `S-${Math.random()}`, topDepthM: 2, bottomDepthM: 2.4 } }),
+  },
+  'POST /api/orgs/:orgId/samples/:sampleId/tests': {
+    access: LAB_WORKERS,
+    sample: (c) => ({ path: `/api/orgs/${c.orgId}/samples/${c.lab.draft.sampleId}/tests`, body: { reference: `T-${Math.random()}`, technicianId: c.lab.technicianId } }),
+  },
+  'GET /api/orgs/:orgId/tests': { access: LAB_READERS, sample: (c) => ({ path: `/api/orgs/${c.orgId}/tests?status=draft` }) },
+  'GET /api/orgs/:orgId/tests/:testId': { access: LAB_READERS, sample: (c) => ({ path: `/api/orgs/${c.orgId}/tests/${c.lab.draft.testId}` }) },
+  'PATCH /api/orgs/:orgId/tests/:testId': {
+    access: LAB_WORKERS,
+    sample: (c) => ({ path: `/api/orgs/${c.orgId}/tests/${c.lab.draft.testId}`, body: { apparatusName: 'Frame 3' } }),
+  },
+  'GET /api/orgs/:orgId/tests/:testId/analysis': { access: LAB_READERS, sample: (c) => ({ path: `/api/orgs/${c.orgId}/tests/${c.lab.analysed.testId}/analysis` }) },
+  'POST /api/orgs/:orgId/tests/:testId/analysis': { access: LAB_WORKERS, sample: (c) => ({ path: `/api/orgs/${c.orgId}/tests/${c.lab.analysed.testId}/analysis` }) },
+  'PUT /api/orgs/:orgId/tests/:testId/picks': {
+    access: LAB_WORKERS,
+    sample: (c) => ({ path: `/api/orgs/${c.orgId}/tests/${c.lab.analysed.testId}/picks`, body: { picks: { preconsolidationStressKpa: 125 }, reason: 'policy check' } }),
+  },
+  'POST /api/orgs/:orgId/tests/:testId/submit': {
+    access: LAB_WORKERS,
+    sample: async (c) => ({ path: `/api/orgs/${c.orgId}/tests/${await c.lab.newAnalysedTestId()}/submit` }),
+  },
+  'GET /api/orgs/:orgId/review-queue': { access: REVIEWERS, sample: (c) => ({ path: `/api/orgs/${c.orgId}/review-queue` }) },
+  'POST /api/orgs/:orgId/tests/:testId/approve': {
+    access: REVIEWERS,
+    sample: async (c) => ({ path: `/api/orgs/${c.orgId}/tests/${await c.lab.newSubmittedTestId()}/approve`, body: {} }),
+  },
+  'POST /api/orgs/:orgId/tests/:testId/request-changes': {
+    access: REVIEWERS,
+    sample: async (c) => ({ path: `/api/orgs/${c.orgId}/tests/${await c.lab.newSubmittedTestId()}/request-changes`, body: { comment: 'Please check.' } }),
+  },
+  'GET /api/orgs/:orgId/tests/:testId/reviews': { access: LAB_READERS, sample: (c) => ({ path: `/api/orgs/${c.orgId}/tests/${c.lab.analysed.testId}/reviews` }) },
+  'GET /api/orgs/:orgId/soil-records': { access: RECORD_READERS, sample: (c) => ({ path: `/api/orgs/${c.orgId}/soil-records` }) },
+  'GET /api/orgs/:orgId/soil-records/:recordId': { access: RECORD_READERS, sample: (c) => ({ path: `/api/orgs/${c.orgId}/soil-records/${c.lab.recordId}` }) },
+  'GET /api/orgs/:orgId/soil-records/:recordId/versions/:version': {
+    access: RECORD_READERS,
+    sample: (c) => ({ path: `/api/orgs/${c.orgId}/soil-records/${c.lab.recordId}/versions/1` }),
+  },
+  'GET /api/orgs/:orgId/jobs/:jobId': { access: LAB_READERS, sample: (c) => ({ path: `/api/orgs/${c.orgId}/jobs/${c.lab.jobId}` }) },
 };
 
 describe('route policies', () => {
@@ -84,6 +159,33 @@ describe('route policies', () => {
 });
 
 type Persona = Role | 'outsider' | 'anonymous';
+
+async function userIdOf(email: string): Promise<string> {
+  const [row] = (await dataSource.query('SELECT id FROM users WHERE email = $1', [email])) as Array<{ id: string }>;
+  if (!row) throw new Error(`no user ${email}`);
+  return row.id;
+}
+
+/** Lab records for the lab routes: a draft test, an analysed one, an approved record, and fresh tests on demand. */
+async function labContext(orgId: string, emails: Record<Persona, string>): Promise<Context['lab']> {
+  const technicianId = await userIdOf(emails.technician);
+  const managerId = await userIdOf(emails.lab_manager);
+  const draft = await draftTest(orgId, technicianId);
+  const analysed = await analysedTest(orgId, technicianId);
+  const withJob = await draftTest(orgId, technicianId);
+  const { analysisJobId } = await uploadKnownReadings(orgId, withJob.testId, technicianId);
+  const approved = await submittedTest(orgId, technicianId);
+  const { recordId } = await approveTest(orgId, approved.testId, { id: managerId, name: 'Policy manager' }, null);
+  return {
+    technicianId,
+    draft,
+    analysed,
+    jobId: analysisJobId,
+    recordId,
+    newAnalysedTestId: async () => (await analysedTest(orgId, technicianId)).testId,
+    newSubmittedTestId: async () => (await submittedTest(orgId, technicianId)).testId,
+  };
+}
 const PERSONAS: Persona[] = [...ROLES, 'outsider', 'anonymous'];
 
 /** What the guard must answer for this persona under this access, or 'allowed'. */
@@ -127,6 +229,7 @@ describe('every role on every route', () => {
         });
         return row.id;
       },
+      lab: await labContext(admin.orgId, emails),
     };
   });
 
@@ -148,7 +251,9 @@ describe('every role on every route', () => {
           ? await browser.post(sample.path, sample.body)
           : method === 'PATCH'
             ? await browser.patch(sample.path, sample.body)
-            : await browser.delete(sample.path);
+            : method === 'PUT'
+              ? await browser.agent.put(sample.path).set('x-csrf-token', browser.csrfToken).send(sample.body ?? {})
+              : await browser.delete(sample.path);
     const expected = expectedOutcome(row.access, persona);
     if (expected === 'allowed') {
       expect(['unauthenticated', 'forbidden']).not.toContain(res.body?.code);
