@@ -96,7 +96,7 @@ describe('analyzeConsolidationTest(input) — recovery of a synthetic test built
   // σ′p on doubling loads, seeds 1–10. The truth is where the generator's recompression and virgin
   // asymptotes meet; the transition between them is rounded over ±0.2 decade (firstLoadingVoidRatio).
   // Casagrande's construction drawn on the exact curve itself reads +9 % (the method's own reading of a
-  // rounded knee, measured on 100 stresses a decade of the noise-free curve), so most of the error below
+  // rounded knee, measured on the noise-free curve sampled 180 times a decade), so most of the error below
   // belongs to the method, not to the automation. Bounds are just above the largest error measured.
   it('finds σ′p = 150 kPa by Casagrande within 17.5 % (measured +16.0 to +16.9 %) and by Pacheco Silva within 5 % (measured −4.6 to −4.4 %)', () => {
     for (const seed of seeds) {
