@@ -1,6 +1,6 @@
 import type { PreparedFooting } from '../stress/footing-stress-contribution.js';
 import type { PreparedElasticLayer } from './prepare-settlement-model.js';
-import { steinbrennerFactors } from './steinbrenner-factors.js';
+import { steinbrennerFactorsInto } from './steinbrenner-factors-into.js';
 
 /**
  * One footing's immediate settlement at a point offset (dx, dy) from its
@@ -11,8 +11,8 @@ import { steinbrennerFactors } from './steinbrenner-factors.js';
  * — the layered use of Steinbrenner's factors set out by Bowles, *Foundation
  * Analysis and Design*, ch. 5. B′ is the shorter side of each corner rectangle.
  *
- * Assumptions: flexible footing, no depth (Fox) reduction, the last elastic
- * layer's base taken as rigid.
+ * Assumptions: flexible footing, no depth (Fox) reduction here (the caller
+ * applies it), the last elastic layer's base taken as rigid.
  *
  * @param footing prepared footing (m, kPa)
  * @param dxM offset along x, m
@@ -33,31 +33,39 @@ export function elasticSettlementContributionM(footing: PreparedFooting, dxM: nu
   );
 }
 
+// Scratch for F1 and F2: the loop below is synchronous, so one pair serves every call.
+const FACTORS = new Float64Array(2);
+
 /** Settlement per unit pressure under the corner of an |a| × |b| rectangle, signed as in the stress superposition. */
 function signedCornerSettlement(a: number, b: number, baseDepthM: number, elasticLayers: readonly PreparedElasticLayer[]): number {
   if (a === 0 || b === 0) return 0;
-  const shortM = Math.min(Math.abs(a), Math.abs(b));
-  const lengthRatio = Math.max(Math.abs(a), Math.abs(b)) / shortM;
+  const absA = Math.abs(a);
+  const absB = Math.abs(b);
+  const shortM = absA < absB ? absA : absB;
+  const lengthRatio = (absA < absB ? absB : absA) / shortM;
   let sum = 0;
   let previousDepthM = 0;
   let previousF1 = 0;
   let previousF2 = 0;
-  for (const layer of elasticLayers) {
-    if (layer.bottomDepthM <= baseDepthM) continue;
+  for (let index = 0; index < elasticLayers.length; index += 1) {
+    const layer = elasticLayers[index];
+    if (layer === undefined || layer.bottomDepthM <= baseDepthM) continue;
     const topM = Math.max(0, layer.topDepthM - baseDepthM);
     const bottomM = layer.bottomDepthM - baseDepthM;
     if (topM !== previousDepthM) {
-      const atTop = steinbrennerFactors(lengthRatio, topM / shortM);
-      previousF1 = atTop.f1;
-      previousF2 = atTop.f2;
+      steinbrennerFactorsInto(lengthRatio, topM / shortM, FACTORS);
+      previousF1 = FACTORS[0] ?? 0;
+      previousF2 = FACTORS[1] ?? 0;
     }
-    const atBottom = steinbrennerFactors(lengthRatio, bottomM / shortM);
+    steinbrennerFactorsInto(lengthRatio, bottomM / shortM, FACTORS);
+    const f1 = FACTORS[0] ?? 0;
+    const f2 = FACTORS[1] ?? 0;
     const nu = layer.poissonRatio;
-    const shapeFactorChange = atBottom.f1 - previousF1 + ((1 - 2 * nu) / (1 - nu)) * (atBottom.f2 - previousF2);
+    const shapeFactorChange = f1 - previousF1 + ((1 - 2 * nu) / (1 - nu)) * (f2 - previousF2);
     sum += (shortM * (1 - nu * nu) * shapeFactorChange) / layer.elasticModulusKpa;
     previousDepthM = bottomM;
-    previousF1 = atBottom.f1;
-    previousF2 = atBottom.f2;
+    previousF1 = f1;
+    previousF2 = f2;
   }
   return (a > 0) === (b > 0) ? sum : -sum;
 }

@@ -2,6 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { elasticInfluenceFactor } from './elastic-influence-factor.js';
 import { immediateSettlementFiniteLayer } from './immediate-settlement-finite-layer.js';
 import { steinbrennerFactors } from './steinbrenner-factors.js';
+import { steinbrennerFactorsInto } from './steinbrenner-factors-into.js';
 
 describe('steinbrennerFactors(lengthRatio, depthRatio)', () => {
   it('m′ = n′ = 1 gives the published F1 = 0.142 and F2 = 0.083 (Das, Principles of Foundation Engineering, F1/F2 tables, from memory)', () => {
@@ -62,5 +63,18 @@ describe('immediateSettlementFiniteLayer({ pressureKpa, widthM, lengthM, layerTh
     expect(() => immediateSettlementFiniteLayer({ ...base, layerThicknessM: 0 })).toThrow(new RangeError('immediateSettlementFiniteLayer requires layerThicknessM > 0'));
     expect(() => immediateSettlementFiniteLayer({ ...base, elasticModulusKpa: -1 })).toThrow(new RangeError('immediateSettlementFiniteLayer requires a finite elasticModulusKpa > 0'));
     expect(() => immediateSettlementFiniteLayer({ ...base, poissonRatio: -0.1 })).toThrow(new RangeError('immediateSettlementFiniteLayer requires 0 <= poissonRatio <= 0.5'));
+  });
+});
+
+describe('steinbrennerFactorsInto(lengthRatio, depthRatio, out)', () => {
+  it('writes exactly what steinbrennerFactors returns, including n′ = 0 and n′ = ∞', () => {
+    const out = new Float64Array(2);
+    for (const m of [1, 1.3, 2, 7.5]) {
+      for (const n of [0, 0.2, 1, 4, 30, Infinity]) {
+        steinbrennerFactorsInto(m, n, out);
+        const { f1, f2 } = steinbrennerFactors(m, n);
+        expect([out[0], out[1]]).toEqual([f1, f2]);
+      }
+    }
   });
 });

@@ -11,6 +11,16 @@ export interface AngularDistortionVerdict {
   readonly statement: string;
 }
 
+interface SourceLimits {
+  readonly source: AngularDistortionLimit['source'];
+  readonly limits: readonly AngularDistortionLimit[];
+}
+
+// Each source's limits, strictest first, split once: a check judges thousands of
+// pairs, and closures made per call were a fifth of its first (cold) run.
+const limitsOf = (source: AngularDistortionLimit['source']): SourceLimits => ({ source, limits: ANGULAR_DISTORTION_LIMITS.filter((limit) => limit.source === source) });
+const LIMITS_BY_SOURCE: readonly [SourceLimits, SourceLimits] = [limitsOf('Bjerrum (1963)'), limitsOf('Skempton & MacDonald (1956)')];
+
 /**
  * Places an angular distortion δ/L among the published limits of Bjerrum (1963)
  * and of Skempton & MacDonald (1956), naming the most severe limit exceeded and
@@ -24,18 +34,24 @@ export interface AngularDistortionVerdict {
  */
 export function judgeAngularDistortion(angularDistortion: number): AngularDistortionVerdict[] {
   if (!(angularDistortion >= 0) || !Number.isFinite(angularDistortion)) throw new RangeError('judgeAngularDistortion requires a finite angularDistortion >= 0');
-  const sources = ['Bjerrum (1963)', 'Skempton & MacDonald (1956)'] as const;
   const printed = angularDistortion === 0 ? '0' : `1/${Math.round(1 / angularDistortion)}`;
-  return sources.map((source) => {
-    const limits = ANGULAR_DISTORTION_LIMITS.filter((limit) => limit.source === source);
-    const exceeded = limits.filter((limit) => angularDistortion > limit.angularDistortion);
-    const exceededLimit = exceeded[exceeded.length - 1] ?? null;
-    const nextLimit = limits.find((limit) => angularDistortion <= limit.angularDistortion) ?? null;
-    const describe = (limit: AngularDistortionLimit) => `${limit.ratioLabel} (${limit.description})`;
-    const statement =
-      exceededLimit === null
-        ? `${source}: ${printed} is within every limit; the strictest is ${nextLimit === null ? 'none' : describe(nextLimit)}.`
-        : `${source}: ${printed} exceeds ${describe(exceededLimit)}${nextLimit === null ? '; every published limit is exceeded.' : `; next limit ${describe(nextLimit)}.`}`;
-    return { source, exceededLimit, nextLimit, statement };
-  });
+  return [verdictForSource(LIMITS_BY_SOURCE[0], angularDistortion, printed), verdictForSource(LIMITS_BY_SOURCE[1], angularDistortion, printed)];
+}
+
+function verdictForSource({ source, limits }: SourceLimits, angularDistortion: number, printed: string): AngularDistortionVerdict {
+  let exceededLimit: AngularDistortionLimit | null = null;
+  let nextLimit: AngularDistortionLimit | null = null;
+  for (const limit of limits) {
+    if (angularDistortion > limit.angularDistortion) exceededLimit = limit;
+    else if (nextLimit === null) nextLimit = limit;
+  }
+  const statement =
+    exceededLimit === null
+      ? `${source}: ${printed} is within every limit; the strictest is ${nextLimit === null ? 'none' : describeLimit(nextLimit)}.`
+      : `${source}: ${printed} exceeds ${describeLimit(exceededLimit)}${nextLimit === null ? '; every published limit is exceeded.' : `; next limit ${describeLimit(nextLimit)}.`}`;
+  return { source, exceededLimit, nextLimit, statement };
+}
+
+function describeLimit(limit: AngularDistortionLimit): string {
+  return `${limit.ratioLabel} (${limit.description})`;
 }

@@ -39,4 +39,20 @@ describe('addRectangleInfluenceOverDepths(halfWidthM, halfLengthM, dxM, dyM, bas
       }),
     );
   });
+
+  it('equals the corner-by-corner sum under the rectangle, near its edges and just below the base, where the single arctangent must be unwrapped', () => {
+    const column = fc.tuple(side, side, fc.double({ min: -1.2, max: 1.2, noNaN: true }), fc.double({ min: -1.2, max: 1.2, noNaN: true }));
+    fc.assert(
+      fc.property(column, fc.double({ min: 1e-5, max: 50, noNaN: true }), ([widthM, lengthM, xShare, yShare], depthM) => {
+        const xM = (xShare * widthM) / 2;
+        const yM = (yShare * lengthM) / 2;
+        const out = new Float64Array(1);
+        addRectangleInfluenceOverDepths(widthM / 2, lengthM / 2, xM, yM, 0, 1, Float64Array.of(depthM), out);
+        const exact = stressIncreaseRectangle({ pressureKpa: 1, widthM, lengthM, xM, yM, depthM });
+        expect(Math.abs((out[0] ?? 0) - exact)).toBeLessThanOrEqual(1e-12);
+      }),
+      { numRuns: 3000 },
+    );
+  });
 });
+
