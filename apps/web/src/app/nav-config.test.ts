@@ -3,16 +3,32 @@ import { describe, expect, it } from 'vitest';
 import { NAV_ITEMS, navItemsFor, rolesFor } from './nav-config';
 
 describe('navItemsFor(role)', () => {
-  it('gives administrators Home, Members and Activity, in that order', () => {
-    expect(navItemsFor('admin').map((item) => item.label)).toEqual(['Home', 'Members', 'Activity']);
+  it('gives administrators every page, in order', () => {
+    expect(navItemsFor('admin').map((item) => item.label)).toEqual(['Home', 'Members', 'Activity', 'Projects', 'Tests', 'Review queue', 'Soil records']);
   });
 
-  it.each(['technician', 'lab_manager', 'designer', 'client'] as const)('gives a %s only Home for now', (role) => {
-    expect(navItemsFor(role).map((item) => item.label)).toEqual(['Home']);
+  it('gives technicians the bench pages: projects and tests', () => {
+    expect(navItemsFor('technician').map((item) => item.label)).toEqual(['Home', 'Projects', 'Tests']);
+  });
+
+  it('gives lab managers the review queue and the soil records as well', () => {
+    expect(navItemsFor('lab_manager').map((item) => item.label)).toEqual(['Home', 'Projects', 'Tests', 'Review queue', 'Soil records']);
+  });
+
+  it.each(['designer', 'client'] as const)('gives a %s the soil records only', (role) => {
+    expect(navItemsFor(role).map((item) => item.label)).toEqual(['Home', 'Soil records']);
   });
 
   it('builds links inside the organisation in the URL', () => {
-    expect(navItemsFor('admin').map((item) => item.to('org-1'))).toEqual(['/orgs/org-1', '/orgs/org-1/members', '/orgs/org-1/activity']);
+    expect(navItemsFor('admin').map((item) => item.to('org-1'))).toEqual([
+      '/orgs/org-1',
+      '/orgs/org-1/members',
+      '/orgs/org-1/activity',
+      '/orgs/org-1/projects',
+      '/orgs/org-1/tests',
+      '/orgs/org-1/review-queue',
+      '/orgs/org-1/soil-records',
+    ]);
   });
 });
 

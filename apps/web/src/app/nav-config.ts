@@ -20,6 +20,10 @@ export const NAV_ITEMS = [
   { id: 'home', label: 'Home', to: paths.org.home.to, roles: ROLES, end: true },
   { id: 'members', label: 'Members', to: paths.org.members.to, roles: ['admin'] },
   { id: 'activity', label: 'Activity', to: paths.org.activity.to, roles: ['admin'] },
+  { id: 'projects', label: 'Projects', to: paths.org.projects.to, roles: ['admin', 'technician', 'lab_manager'] },
+  { id: 'tests', label: 'Tests', to: paths.org.tests.to, roles: ['admin', 'technician', 'lab_manager'] },
+  { id: 'review-queue', label: 'Review queue', to: paths.org.reviewQueue.to, roles: ['admin', 'lab_manager'] },
+  { id: 'soil-records', label: 'Soil records', to: paths.org.soilRecords.to, roles: ['admin', 'lab_manager', 'designer', 'client'] },
 ] as const satisfies readonly NavItem[];
 
 export type NavItemId = (typeof NAV_ITEMS)[number]['id'];

@@ -4,6 +4,11 @@ import { FullPageSpinner } from './layout/full-page-spinner';
 import { RootLayout } from './layout/root-layout';
 import { RouteErrorBoundary } from './route-error-boundary';
 
+/** A lazily loaded page inside the organisation, with its own error boundary. */
+function labRoute(path: string, lazy: NonNullable<RouteObject['lazy']>): RouteObject[] {
+  return [{ path, lazy, ErrorBoundary: RouteErrorBoundary } as RouteObject];
+}
+
 /**
  * Every page is its own lazily loaded chunk; the shell, error boundary and spinner are the only
  * eager code. Each route has its own error boundary, so a failure in one page keeps the shell.
@@ -55,6 +60,13 @@ export const routes: RouteObject[] = [
             lazy: () => import('./routes/activity-route').then((m) => ({ Component: m.ActivityRoute })),
             ErrorBoundary: RouteErrorBoundary,
           },
+          ...labRoute(paths.org.projects.pattern, () => import('./routes/projects-route').then((m) => ({ Component: m.ProjectsRoute }))),
+          ...labRoute(paths.org.project.pattern, () => import('./routes/project-route').then((m) => ({ Component: m.ProjectRoute }))),
+          ...labRoute(paths.org.tests.pattern, () => import('./routes/tests-route').then((m) => ({ Component: m.TestsRoute }))),
+          ...labRoute(paths.org.test.pattern, () => import('./routes/test-route').then((m) => ({ Component: m.TestRoute }))),
+          ...labRoute(paths.org.reviewQueue.pattern, () => import('./routes/review-queue-route').then((m) => ({ Component: m.ReviewQueueRoute }))),
+          ...labRoute(paths.org.soilRecords.pattern, () => import('./routes/soil-records-route').then((m) => ({ Component: m.SoilRecordsRoute }))),
+          ...labRoute(paths.org.soilRecord.pattern, () => import('./routes/soil-record-route').then((m) => ({ Component: m.SoilRecordRoute }))),
           { path: '*', lazy: () => import('./routes/not-found-route').then((m) => ({ Component: m.NotFoundRoute })), ErrorBoundary: RouteErrorBoundary },
         ],
       },

@@ -58,6 +58,58 @@ async function sendWithCsrf(method: Method, path: string, body: unknown): Promis
   }
 }
 
+export type UploadProgress = { loadedBytes: number; totalBytes: number | null };
+export type UploadOptions = { onProgress?: (progress: UploadProgress) => void; signal?: AbortSignal };
+
+/**
+ * fetch reports no upload progress, so files go up through XMLHttpRequest, whose `upload`
+ * object fires progress events as the body leaves the browser. Same cookie, same CSRF header.
+ */
+function uploadWithProgress(path: string, form: FormData, token: string, { onProgress, signal }: UploadOptions): Promise<unknown> {
+  return new Promise((resolve, reject) => {
+    const request = new XMLHttpRequest();
+    request.open('POST', path);
+    request.withCredentials = true;
+    request.setRequestHeader('accept', 'application/json');
+    request.setRequestHeader('x-csrf-token', token);
+    request.upload.addEventListener('progress', (event) => {
+      onProgress?.({ loadedBytes: event.loaded, totalBytes: event.lengthComputable ? event.total : null });
+    });
+    request.addEventListener('load', () => {
+      const response = new Response(request.status === 204 ? null : request.responseText, {
+        status: request.status,
+        headers: { 'content-type': request.getResponseHeader('content-type') ?? 'application/json' },
+      });
+      if (!response.ok) {
+        void apiErrorFromResponse(response).then(reject, reject);
+        return;
+      }
+      resolve(request.responseText === '' ? undefined : (JSON.parse(request.responseText) as unknown));
+    });
+    request.addEventListener('error', () => reject(networkError()));
+    request.addEventListener('abort', () => reject(new ApiError(0, 'upload_cancelled', 'The upload was cancelled. Choose the file again to send it.')));
+    signal?.addEventListener('abort', () => request.abort());
+    request.send(form);
+  });
+}
+
+async function uploadWithCsrf(path: string, form: FormData, options: UploadOptions): Promise<unknown> {
+  csrfToken ??= fetchCsrfToken().catch((error: unknown) => {
+    csrfToken = undefined;
+    throw error;
+  });
+  try {
+    return await uploadWithProgress(path, form, await csrfToken, options);
+  } catch (error) {
+    if (error instanceof ApiError && error.status === 403 && error.code === 'csrf_invalid') {
+      forgetCsrfToken();
+      csrfToken = fetchCsrfToken();
+      return uploadWithProgress(path, form, await csrfToken, options);
+    }
+    throw error;
+  }
+}
+
 function parseWith<T>(schema: Parser<T> | undefined, value: unknown): T {
   return schema ? schema.parse(value) : (value as T);
 }
@@ -73,6 +125,11 @@ export const api = {
     parseWith(schema, await sendWithCsrf('POST', path, body ?? {})),
   patch: async <T = void>(path: string, body: unknown, schema?: Parser<T>): Promise<T> =>
     parseWith(schema, await sendWithCsrf('PATCH', path, body)),
+  put: async <T = void>(path: string, body: unknown, schema?: Parser<T>): Promise<T> =>
+    parseWith(schema, await sendWithCsrf('PUT', path, body)),
+  /** A multipart upload with real progress (see uploadWithProgress). */
+  upload: async <T>(path: string, form: FormData, schema: Parser<T>, options: UploadOptions = {}): Promise<T> =>
+    parseWith(schema, await uploadWithCsrf(path, form, options)),
   delete: async (path: string): Promise<void> => {
     await sendWithCsrf('DELETE', path, undefined);
   },

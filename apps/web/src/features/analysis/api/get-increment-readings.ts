@@ -1,0 +1,49 @@
+import { ReadingsPageSchema } from '@porestack/types';
+import { queryOptions, useQuery } from '@tanstack/react-query';
+import { apiPaths } from '../../../config/paths';
+import { api } from '../../../lib/api-client';
+import type { TimePoint } from '../components/analysis-result';
+
+const MAX_PAGE = 5000;
+/** Enough points to see the curve's shape; a logger's 50,000 are thinned for drawing only. */
+const MAX_PLOTTED_POINTS = 4000;
+
+/**
+ * One increment's readings for its time plots. Readings come back in test order, so the
+ * increment starts after the earlier increments' reading counts (from the analysis); only its
+ * own rows are fetched.
+ */
+export async function getIncrementReadings(orgId: string, testId: string, incrementIndex: number, offset: number, count: number): Promise<TimePoint[]> {
+  const points: TimePoint[] = [];
+  for (let start = offset; start < offset + count; start += MAX_PAGE) {
+    const limit = Math.min(MAX_PAGE, offset + count - start);
+    const page = await api.get(`${apiPaths.testReadings(orgId, testId)}?offset=${start}&limit=${limit}`, ReadingsPageSchema);
+    for (const r of page.readings) if (r.incrementIndex === incrementIndex) points.push({ timeMin: r.elapsedMin, deformationMm: r.deformationMm });
+    if (page.readings.length < limit) break;
+  }
+  return thin(points);
+}
+
+function thin(points: TimePoint[]): TimePoint[] {
+  if (points.length <= MAX_PLOTTED_POINTS) return points;
+  const step = points.length / MAX_PLOTTED_POINTS;
+  const kept: TimePoint[] = [];
+  for (let n = 0; n < MAX_PLOTTED_POINTS; n += 1) {
+    const point = points[Math.floor(n * step)];
+    if (point) kept.push(point);
+  }
+  const last = points[points.length - 1];
+  if (last) kept.push(last);
+  return kept;
+}
+
+export const incrementReadingsQueryOptions = (orgId: string, testId: string, incrementIndex: number, offset: number, count: number) =>
+  queryOptions({
+    queryKey: ['orgs', orgId, 'tests', testId, 'readings', 'increment', { incrementIndex, offset, count }],
+    queryFn: () => getIncrementReadings(orgId, testId, incrementIndex, offset, count),
+    staleTime: 5 * 60_000,
+  });
+
+export function useIncrementReadings(orgId: string, testId: string, incrementIndex: number, offset: number, count: number) {
+  return useQuery({ ...incrementReadingsQueryOptions(orgId, testId, incrementIndex, offset, count), enabled: count > 0 });
+}
