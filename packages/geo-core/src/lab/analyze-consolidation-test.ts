@@ -4,6 +4,7 @@ import { WATER_UNIT_WEIGHT_KN_PER_M3 } from '../constants/water-unit-weight.js';
 import { analyzeIncrementTimeCurves } from './analyze-increment-time-curves.js';
 import { apparatusDeflectionAtStress } from './apparatus-deflection-at-stress.js';
 import { branchFits, type PathPoint } from './branch-fits.js';
+import { checkConsolidationInput } from './check-consolidation-input.js';
 import { checkIncrementReadings } from './check-increment-readings.js';
 import type { ConsolidationTestInput } from './consolidation-test-input.js';
 import type { AppliedPick, ConsolidationIncrementResult, ConsolidationTestResult } from './consolidation-test-result.js';
@@ -15,8 +16,6 @@ import { resolveDryMass } from './resolve-dry-mass.js';
 import { sampleQualityAtInSituStress } from './sample-quality-at-in-situ-stress.js';
 
 const SECONDS_PER_YEAR = DAYS_PER_YEAR * 86400;
-
-const positive = (value: number): boolean => value > 0 && Number.isFinite(value);
 
 /**
  * Reduce an incremental-loading oedometer test (ASTM D2435/D2435M-11, 2020)
@@ -44,33 +43,7 @@ const positive = (value: number): boolean => value > 0 && Number.isFinite(value)
 export function analyzeConsolidationTest(input: ConsolidationTestInput): ConsolidationTestResult {
   const { specimen, increments } = input;
   const picks = input.picks ?? {};
-  if (!positive(specimen.initialHeightMm) || !positive(specimen.diameterMm)) {
-    throw new RangeError('analyzeConsolidationTest requires a positive initial height and diameter in mm');
-  }
-  if (!positive(specimen.specificGravity)) throw new RangeError('analyzeConsolidationTest requires a positive specific gravity');
-  if (specimen.drainage !== 'double' && specimen.drainage !== 'single') {
-    throw new RangeError("analyzeConsolidationTest requires drainage 'double' or 'single'");
-  }
-  if (increments.length === 0) throw new RangeError('analyzeConsolidationTest requires at least one increment');
-  const seen = new Set<number>();
-  for (const increment of increments) {
-    if (!Number.isFinite(increment.index) || seen.has(increment.index)) {
-      throw new RangeError('analyzeConsolidationTest requires each increment to have its own finite index');
-    }
-    seen.add(increment.index);
-    if (!positive(increment.stressKpa)) throw new RangeError('analyzeConsolidationTest requires every increment stress to be a positive number of kPa');
-    if (increment.readings.length === 0) throw new RangeError('analyzeConsolidationTest requires at least one reading in every increment');
-  }
-  const optionalNonNegative = (value: number | undefined): boolean => value === undefined || (value >= 0 && Number.isFinite(value));
-  if (!optionalNonNegative(specimen.finalWaterContent) || !optionalNonNegative(specimen.initialWaterContent)) {
-    throw new RangeError('analyzeConsolidationTest requires water contents to be fractions ≥ 0');
-  }
-  if (specimen.inSituVerticalEffectiveStressKpa !== undefined && !positive(specimen.inSituVerticalEffectiveStressKpa)) {
-    throw new RangeError('analyzeConsolidationTest requires the in-situ vertical effective stress to be a positive number of kPa');
-  }
-  if (picks.preconsolidationStressKpa !== undefined && !positive(picks.preconsolidationStressKpa)) {
-    throw new RangeError('analyzeConsolidationTest requires a picked preconsolidation stress to be a positive number of kPa');
-  }
+  checkConsolidationInput(input);
 
   const warnings: ConsolidationWarning[] = [];
   const warn = (code: ConsolidationWarningCode, message: string, incrementIndex: number | null = null): void => {

@@ -1,11 +1,11 @@
 import { abscissaAtDeformation } from './abscissa-at-deformation.js';
 import { deformationAtAbscissa } from './deformation-at-abscissa.js';
 import { leastSquaresLine } from './least-squares-line.js';
+import { logTimeCorrectedZero } from './log-time-corrected-zero.js';
 import { reduceTimeCurve } from './reduce-time-curve.js';
+import { steepestLogTimeTangent } from './steepest-log-time-tangent.js';
 import type { TimeCurveLine, TimeCurveWarning, TimeDeformationReading, ValueSource } from './time-curve-types.js';
 
-/** Half-width of the window in which the local slope of d–log t is fitted (a factor of 2 in time across). */
-const SLOPE_HALF_WINDOW_DECADES = 0.15;
 /**
  * The secondary tail starts 8 times the steepest point's time later: the
  * steepest point of Terzaghi's d–log t curve lies near Tv ≈ 0.3–0.4, and
@@ -14,8 +14,6 @@ const SLOPE_HALF_WINDOW_DECADES = 0.15;
 const TAIL_START_FACTOR_DECADES = Math.log10(8);
 /** A tail at least half as steep as the tangent is not a secondary line but primary still going. */
 const MAXIMUM_TAIL_TO_TANGENT_SLOPE = 0.5;
-/** d0 pairs are used while the later reading of the pair is within the parabolic part (U ≤ 50 %). */
-const PARABOLIC_UPPER_DEGREE = 0.5;
 
 export interface CasagrandePicks {
   /** Time to 50 % consolidation read by the reviewer, min. */
@@ -94,49 +92,11 @@ export function casagrandeLogTime(readings: readonly TimeDeformationReading[], p
     return { construction: null, warnings: [{ code: 'insufficient-readings', message: 'Casagrande\'s log-time method needs at least four readings after the load was applied.' }] };
   }
 
-  // Prefix sums make every local slope O(1), so a logger record costs one pass.
-  const sumX = new Float64Array(count + 1);
-  const sumY = new Float64Array(count + 1);
-  const sumXX = new Float64Array(count + 1);
-  const sumXY = new Float64Array(count + 1);
-  for (let index = 0; index < count; index += 1) {
-    const x = logs[index] as number;
-    const y = deformations[index] as number;
-    sumX[index + 1] = (sumX[index] as number) + x;
-    sumY[index + 1] = (sumY[index] as number) + y;
-    sumXX[index + 1] = (sumXX[index] as number) + x * x;
-    sumXY[index + 1] = (sumXY[index] as number) + x * y;
-  }
-  let steepestSlope = -Infinity;
-  let steepestIndex = -1;
-  let tangentCentroidX = 0;
-  let tangentCentroidY = 0;
-  let low = 0;
-  let high = 0;
-  for (let centre = 1; centre < count - 1; centre += 1) {
-    const x = logs[centre] as number;
-    while ((logs[low] as number) < x - SLOPE_HALF_WINDOW_DECADES) low += 1;
-    while (high + 1 < count && (logs[high + 1] as number) <= x + SLOPE_HALF_WINDOW_DECADES) high += 1;
-    const from = Math.min(low, centre - 1);
-    const to = Math.max(high, centre + 1);
-    const n = to - from + 1;
-    const sx = (sumX[to + 1] as number) - (sumX[from] as number);
-    const sy = (sumY[to + 1] as number) - (sumY[from] as number);
-    const sxx = (sumXX[to + 1] as number) - (sumXX[from] as number);
-    const sxy = (sumXY[to + 1] as number) - (sumXY[from] as number);
-    const denominator = n * sxx - sx * sx;
-    if (!(denominator > 0)) continue;
-    const slope = (n * sxy - sx * sy) / denominator;
-    if (slope > steepestSlope) {
-      steepestSlope = slope;
-      steepestIndex = centre;
-      tangentCentroidX = sx / n;
-      tangentCentroidY = sy / n;
-    }
-  }
-  if (steepestIndex < 0 || !(steepestSlope > 0)) {
+  const tangent = steepestLogTimeTangent(logs, deformations);
+  if (tangent === null) {
     return { construction: null, warnings: [{ code: 'insufficient-readings', message: 'The log-time curve never steepens in compression, so Casagrande\'s tangent cannot be drawn.' }] };
   }
+  const { slope: steepestSlope, index: steepestIndex, centroidLogTime: tangentCentroidX, centroidDeformationMm: tangentCentroidY } = tangent;
   const inflectionLog = logs[steepestIndex] as number;
 
   let tail: { slope: number; centroidX: number; centroidY: number } | null = null;
@@ -170,30 +130,14 @@ export function casagrandeLogTime(readings: readonly TimeDeformationReading[], p
     if (pickedLog === null) warnings.push({ code: 'pick-outside-data', message: `The picked d100 of ${picks.d100Mm} mm is not reached by the readings of this increment.` });
   }
 
-  // d0 from the parabola: first pair always, then every pair still in the parabolic part.
   const firstLog = logs[0] as number;
   const lastLog = logs[count - 1] as number;
-  const fourLog = Math.log10(4);
-  const pairValue = (index: number): number | null => {
-    const later = deformationAtAbscissa(logs, deformations, (logs[index] as number) + fourLog);
-    return later === null ? null : 2 * (deformations[index] as number) - later;
-  };
-  const firstPair = pairValue(0);
-  if (firstPair === null) {
+  const zero = logTimeCorrectedZero(logs, deformations, d100);
+  if (zero === null) {
     return { construction: null, warnings: [{ code: 'insufficient-readings', message: 'The readings do not span a factor of four in time after the first one, so the corrected zero d0 of the log-time method cannot be found.' }] };
   }
-  let d0 = firstPair;
-  let pairCount = 1;
-  if (d100 !== null && d100 > firstPair) {
-    let sum = firstPair;
-    for (let index = 1; index < count && (logs[index] as number) + fourLog <= lastLog; index += 1) {
-      const later = deformationAtAbscissa(logs, deformations, (logs[index] as number) + fourLog) as number;
-      if ((later - firstPair) / (d100 - firstPair) > PARABOLIC_UPPER_DEGREE) break;
-      sum += 2 * (deformations[index] as number) - later;
-      pairCount += 1;
-    }
-    d0 = sum / pairCount;
-  }
+  let d0 = zero.d0Mm;
+  const pairCount = zero.pairCount;
   const d0Source: ValueSource = picks.d0Mm === undefined ? 'automatic' : 'pick';
   if (picks.d0Mm !== undefined) d0 = picks.d0Mm;
 
