@@ -57,5 +57,7 @@ export async function importReadings(data: ImportReadingsJobData): Promise<void>
 
 export const importReadingsJob: JobDefinition = {
   name: IMPORT_READINGS_QUEUE,
+  // The upload page shows this job's progress: pick it up quickly.
+  pollingIntervalSeconds: 0.5,
   handler: (data) => importReadings(data as ImportReadingsJobData),
 };

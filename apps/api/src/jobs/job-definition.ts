@@ -7,4 +7,6 @@ export interface JobDefinition<Data extends object = object> {
   handler: (data: Data) => Promise<void>;
   /** cron, in UTC */
   schedule?: string;
+  /** How often an idle worker looks for new jobs (pg-boss default 2 s, minimum 0.5 s); lower for jobs a page waits on. */
+  pollingIntervalSeconds?: number;
 }

@@ -18,6 +18,8 @@ export interface UploadFailure {
 @Entity({ name: 'uploads' })
 @Index('uploads_organisation_id_idx', ['organisationId'])
 @Index('uploads_test_id_created_at_idx', ['testId', 'createdAt'])
+// The target of the readings' (test_id, upload_id) foreign key.
+@Index('uploads_test_id_id_key', ['testId', 'id'], { unique: true })
 export class UploadEntity {
   @PrimaryGeneratedColumn('uuid')
   id!: string;

@@ -1,0 +1,68 @@
+import type { JobRun, Upload } from '@porestack/types';
+import type PgBoss from 'pg-boss';
+import { dataSource } from '../data-source.js';
+import { createBoss } from '../jobs/boss.js';
+import { importReadingsJob } from '../jobs/import-readings.job.js';
+import { registerJobs } from '../jobs/register-jobs.js';
+import { bucketName, ensureBucket, storage } from '../storage/storage.js';
+import type { Browser } from './browser.js';
+
+/** A pg-boss worker working the import queue, as the worker process does. */
+export async function startImportWorker(): Promise<PgBoss> {
+  await ensureBucket();
+  const boss = createBoss();
+  boss.on('error', () => undefined);
+  await boss.start();
+  await registerJobs(boss, [importReadingsJob]);
+  return boss;
+}
+
+/** supertest's parser for a binary body (a download), collected into a Buffer. */
+export function binary(res: NodeJS.ReadableStream, done: (error: Error | null, body: Buffer) => void): void {
+  const chunks: Buffer[] = [];
+  res.on('data', (chunk: Buffer) => chunks.push(chunk));
+  res.on('end', () => done(null, Buffer.concat(chunks)));
+}
+
+/** Sends a file as the web page does: multipart field `file`, with the CSRF header. */
+export function sendFile(browser: Browser, orgId: string, testId: string, bytes: Buffer, name: string) {
+  return browser.agent.post(`/api/orgs/${orgId}/tests/${testId}/uploads`).set('x-csrf-token', browser.csrfToken).attach('file', bytes, name);
+}
+
+/** Polls GET /jobs/:jobId until the job has finished. */
+export async function finishedJob(browser: Browser, orgId: string, jobId: string, timeoutMs = 15_000): Promise<JobRun> {
+  const deadline = Date.now() + timeoutMs;
+  for (;;) {
+    const res = await browser.get(`/api/orgs/${orgId}/jobs/${jobId}`).expect(200);
+    const job = res.body as JobRun;
+    if (job.state === 'succeeded' || job.state === 'failed') return job;
+    if (Date.now() > deadline) throw new Error(`job ${jobId} still ${job.state} after ${timeoutMs} ms: ${job.message}`);
+    await new Promise((resolve) => setTimeout(resolve, 50));
+  }
+}
+
+/** Uploads a file and waits for its import job. */
+export async function uploadAndWait(browser: Browser, orgId: string, testId: string, bytes: Buffer, name: string): Promise<{ upload: Upload; job: JobRun }> {
+  const res = await sendFile(browser, orgId, testId, bytes, name);
+  if (res.status !== 201) throw new Error(`upload answered ${res.status}: ${JSON.stringify(res.body)}`);
+  const { upload, job } = res.body as { upload: Upload; job: JobRun };
+  return { upload, job: await finishedJob(browser, orgId, job.id) };
+}
+
+export async function readingCount(testId: string): Promise<number> {
+  const [row] = (await dataSource.query('SELECT count(*)::int AS n FROM readings WHERE test_id = $1', [testId])) as Array<{ n: number }>;
+  return row?.n ?? 0;
+}
+
+export async function uploadRowCount(testId: string): Promise<number> {
+  const [row] = (await dataSource.query('SELECT count(*)::int AS n FROM uploads WHERE test_id = $1', [testId])) as Array<{ n: number }>;
+  return row?.n ?? 0;
+}
+
+/** Objects stored under the test's prefix. */
+export async function storedObjectCount(orgId: string, testId: string): Promise<number> {
+  let count = 0;
+  for await (const _item of storage().listObjectsV2(bucketName(), `orgs/${orgId}/tests/${testId}/`, true)) count += 1;
+  return count;
+}
+
