@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { elasticInfluenceFactor } from './elastic-influence-factor.js';
+import { foxDepthFactor } from './fox-depth-factor.js';
 import { immediateSettlementFiniteLayer } from './immediate-settlement-finite-layer.js';
 import { steinbrennerFactors } from './steinbrenner-factors.js';
 import { steinbrennerFactorsInto } from './steinbrenner-factors-into.js';
@@ -55,6 +56,18 @@ describe('immediateSettlementFiniteLayer({ pressureKpa, widthM, lengthM, layerTh
 
   it('is scaled by the given Fox depth factor', () => {
     expect(immediateSettlementFiniteLayer({ ...base, depthFactor: 0.8 }).settlementM).toBeCloseTo(0.8 * immediateSettlementFiniteLayer(base).settlementM, 12);
+  });
+
+  it('with foundationDepthM works out Fox’s If itself and reports it', () => {
+    const buried = immediateSettlementFiniteLayer({ ...base, foundationDepthM: 1 });
+    expect(buried.depthFactor).toBe(foxDepthFactor(1, 0.5, 0.3));
+    expect(buried.settlementM).toBeCloseTo(buried.depthFactor * immediateSettlementFiniteLayer(base).settlementM, 15);
+    expect(immediateSettlementFiniteLayer(base).depthFactor).toBe(1);
+  });
+
+  it('throws RangeError for both depthFactor and foundationDepthM, or a negative depth', () => {
+    expect(() => immediateSettlementFiniteLayer({ ...base, depthFactor: 0.8, foundationDepthM: 1 })).toThrow(new RangeError('immediateSettlementFiniteLayer requires depthFactor or foundationDepthM, not both'));
+    expect(() => immediateSettlementFiniteLayer({ ...base, foundationDepthM: -1 })).toThrow(new RangeError('immediateSettlementFiniteLayer requires a finite foundationDepthM >= 0'));
   });
 
   it('throws RangeError for a bad depth factor, L < B, a non-positive thickness or modulus', () => {

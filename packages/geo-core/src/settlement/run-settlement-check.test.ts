@@ -2,6 +2,7 @@ import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import type { SoilProfile } from '../profile/soil-profile.types.js';
 import type { Footing } from '../stress/footing.types.js';
+import { foxDepthFactor } from './fox-depth-factor.js';
 import { runSettlementCheck } from './run-settlement-check.js';
 
 // Hand-calculation profile (invented; no textbook example is recalled precisely enough
@@ -174,5 +175,68 @@ describe('runSettlementCheck({ profile, footings, options })', () => {
     expect(() => runSettlementCheck({ profile: { ...profile, layers: [profile.layers[0]!, clayWithoutCs] }, footings: [footing] })).toThrow(
       new RangeError('runSettlementCheck requires cs wherever ocr or preconsolidationKpa is given, in layer 2 (clay)'),
     );
+  });
+});
+
+describe('runSettlementCheck — mv layers and Fox’s depth factor', () => {
+  const sand = { name: 'sand', thicknessM: 4, unitWeightKnPerM3: 18, saturatedUnitWeightKnPerM3: 20 };
+  const mvClay = { name: 'clay', thicknessM: 4, unitWeightKnPerM3: 19, saturatedUnitWeightKnPerM3: 19, mvM2PerKn: 0.0004 };
+  const footingAlone: Footing = { id: 'F1', xM: 0, yM: 0, widthM: 2, lengthM: 2, depthM: 1, loadKn: 800 };
+
+  it('a layer with mv and no Cc settles by mv·Δσ′·H per sublayer, row by row', () => {
+    const profile: SoilProfile = { groundLevelM: 0, waterTableDepthM: 2, layers: [sand, mvClay] };
+    const result = runSettlementCheck({ profile, footings: [footingAlone], options: { sublayerCount: 4, evaluationPoints: 'centre' } });
+    const rows = result.footings[0]?.sublayers ?? [];
+    expect(rows).toHaveLength(4);
+    for (const row of rows) {
+      expect(row.consolidationCase).toBe('volume-compressibility');
+      expect(row.primarySettlementM).toBeCloseTo(0.0004 * row.stressIncreaseKpa * row.thicknessM, 15);
+    }
+    expect(result.footings[0]?.primaryM).toBeCloseTo(rows.reduce((sum, row) => sum + row.primarySettlementM, 0), 15);
+    expect(result.layers[1]).toMatchObject({ compressible: true, primaryMethod: 'mv', mvM2PerKn: 0.0004, preconsolidationBasis: null });
+    expect(result.warnings.some((w) => /treated as normally consolidated/.test(w))).toBe(false);
+  });
+
+  it('uses Cc where a layer has both, and says so', () => {
+    const profile: SoilProfile = { groundLevelM: 0, waterTableDepthM: 2, layers: [sand, { ...mvClay, e0: 1, cc: 0.35 }] };
+    const result = runSettlementCheck({ profile, footings: [footingAlone], options: { sublayerCount: 2, evaluationPoints: 'centre' } });
+    expect(result.footings[0]?.sublayers[0]?.consolidationCase).toBe('normally-consolidated');
+    expect(result.layers[1]?.primaryMethod).toBe('e-log-stress');
+    expect(result.warnings.some((w) => /both Cc and mv/.test(w))).toBe(true);
+  });
+
+  it('leaves out secondary compression of an mv layer without e0, and says so', () => {
+    const profile: SoilProfile = { groundLevelM: 0, waterTableDepthM: 2, layers: [sand, { ...mvClay, cAlpha: 0.01, cvM2PerYr: 2, drainageTop: 'free', drainageBottom: 'free' }] };
+    const result = runSettlementCheck({ profile, footings: [footingAlone], options: { sublayerCount: 2, evaluationPoints: 'centre' } });
+    expect(result.footings[0]?.sublayers[0]?.secondarySettlementM).toBeNull();
+    expect(result.footings[0]?.timeTo50PercentYears).not.toBeNull();
+    expect(result.warnings.some((w) => /mv and Cα but no e0/.test(w))).toBe(true);
+  });
+
+  it('throws RangeError for mv ≤ 0', () => {
+    const profile: SoilProfile = { groundLevelM: 0, waterTableDepthM: 2, layers: [sand, { ...mvClay, mvM2PerKn: 0 }] };
+    expect(() => runSettlementCheck({ profile, footings: [footingAlone] })).toThrow(new RangeError('runSettlementCheck requires mvM2PerKn > 0 in layer 2 (clay)'));
+  });
+
+  it('applyFoxDepthFactor scales a lone footing’s immediate settlement by If(L/B, Df/B, ν below the base), and nothing else', () => {
+    const elastic = { elasticModulusKpa: 20_000, poissonRatio: 0.3 };
+    const profile: SoilProfile = { groundLevelM: 0, waterTableDepthM: 2, layers: [{ ...sand, ...elastic }, { ...mvClay, ...elastic, poissonRatio: 0.45 }] };
+    const off = runSettlementCheck({ profile, footings: [footingAlone], options: { evaluationPoints: 'centre' } });
+    const on = runSettlementCheck({ profile, footings: [footingAlone], options: { evaluationPoints: 'centre', applyFoxDepthFactor: true } });
+    const expected = foxDepthFactor(1, 0.5, 0.3);
+    expect(on.footings[0]?.immediateDepthFactor).toBe(expected);
+    expect(off.footings[0]?.immediateDepthFactor).toBe(1);
+    expect(on.footings[0]?.immediateM).toBeCloseTo(expected * (off.footings[0]?.immediateM ?? 0), 15);
+    expect(on.footings[0]?.primaryM).toBe(off.footings[0]?.primaryM);
+    expect(on.method.applyFoxDepthFactor).toBe(true);
+    expect(on.method.notes.some((n) => /Fox’s \(1948\) depth factor/.test(n))).toBe(true);
+  });
+
+  it('applyFoxDepthFactor leaves the neighbours’ shares of immediate settlement whole', () => {
+    const profile: SoilProfile = { groundLevelM: 0, waterTableDepthM: 2, layers: [{ ...sand, elasticModulusKpa: 20_000, poissonRatio: 0.3 }, mvClay] };
+    const pair: Footing[] = [footingAlone, { ...footingAlone, id: 'F2', xM: 4 }];
+    const alone = (fox: boolean) => runSettlementCheck({ profile, footings: pair, options: { evaluationPoints: 'centre', includeNeighbours: false, applyFoxDepthFactor: fox } }).footings[0]?.immediateM ?? 0;
+    const together = (fox: boolean) => runSettlementCheck({ profile, footings: pair, options: { evaluationPoints: 'centre', applyFoxDepthFactor: fox } }).footings[0]?.immediateM ?? 0;
+    expect(together(true) - alone(true)).toBeCloseTo(together(false) - alone(false), 15);
   });
 });
