@@ -8,6 +8,8 @@ import { listRoutes, type Access } from '../routes.js';
 import { LAB_READERS, LAB_WORKERS, PROJECT_EDITORS, RECORD_READERS, REVIEWERS } from '../../modules/projects/lab-roles.js';
 import { approveTest } from '../../modules/reviews/reviews.service.js';
 import { analysedTest, draftTest, submittedTest, uploadKnownReadings, type LabFixture } from '../../testing/lab-fixtures.js';
+import { IMPORTERS, PROFILE_EDITORS, UPLOAD_READERS } from '../../modules/uploads/upload-roles.js';
+import { canonicalCsvTemplate, LOGGER_MAPPING } from '../../modules/readings-import/demo-files.js';
 
 const app = createApp();
 
@@ -18,6 +20,8 @@ const app = createApp();
 interface Sample {
   path: string;
   body?: object;
+  /** Sent as multipart field `file` instead of a JSON body. */
+  file?: { bytes: Buffer; name: string };
 }
 interface Context {
   orgId: string;
@@ -137,7 +141,40 @@ const SPEC: Record<string, { access: Access; sample: (ctx: Context) => Promise<S
     sample: (c) => ({ path: `/api/orgs/${c.orgId}/soil-records/${c.lab.recordId}/versions/1` }),
   },
   'GET /api/orgs/:orgId/jobs/:jobId': { access: LAB_READERS, sample: (c) => ({ path: `/api/orgs/${c.orgId}/jobs/${c.lab.jobId}` }) },
+  'POST /api/orgs/:orgId/tests/:testId/uploads': {
+    access: IMPORTERS,
+    sample: (c) => ({ path: `/api/orgs/${c.orgId}/tests/${c.lab.draft.testId}/uploads`, file: { bytes: Buffer.from(canonicalCsvTemplate()), name: 'policy.csv' } }),
+  },
+  'GET /api/orgs/:orgId/tests/:testId/uploads': { access: UPLOAD_READERS, sample: (c) => ({ path: `/api/orgs/${c.orgId}/tests/${c.lab.analysed.testId}/uploads` }) },
+  'GET /api/orgs/:orgId/uploads/:uploadId': { access: UPLOAD_READERS, sample: async (c) => ({ path: `/api/orgs/${c.orgId}/uploads/${await uploadOf(c.lab.analysed.testId)}` }) },
+  'GET /api/orgs/:orgId/uploads/:uploadId/download': {
+    access: UPLOAD_READERS,
+    sample: async (c) => ({ path: `/api/orgs/${c.orgId}/uploads/${await uploadOf(c.lab.analysed.testId)}/download` }),
+  },
+  'GET /api/orgs/:orgId/uploads/:uploadId/preview': {
+    access: UPLOAD_READERS,
+    sample: async (c) => ({ path: `/api/orgs/${c.orgId}/uploads/${await uploadOf(c.lab.analysed.testId)}/preview` }),
+  },
+  'POST /api/orgs/:orgId/uploads/:uploadId/import': {
+    access: IMPORTERS,
+    sample: async (c) => ({ path: `/api/orgs/${c.orgId}/uploads/${await uploadOf(c.lab.analysed.testId)}/import`, body: { mapping: LOGGER_MAPPING } }),
+  },
+  'GET /api/orgs/:orgId/import-profiles': { access: UPLOAD_READERS, sample: (c) => ({ path: `/api/orgs/${c.orgId}/import-profiles` }) },
+  'POST /api/orgs/:orgId/import-profiles': {
+    access: PROFILE_EDITORS,
+    sample: (c) => ({ path: `/api/orgs/${c.orgId}/import-profiles`, body: { name: `Policy ${Math.random()}`, mapping: LOGGER_MAPPING } }),
+  },
+  'GET /api/orgs/:orgId/tests/:testId/readings': { access: LAB_READERS, sample: (c) => ({ path: `/api/orgs/${c.orgId}/tests/${c.lab.analysed.testId}/readings` }) },
+  'GET /api/orgs/:orgId/templates/readings.csv': { access: UPLOAD_READERS, sample: (c) => ({ path: `/api/orgs/${c.orgId}/templates/readings.csv` }) },
+  'GET /api/orgs/:orgId/templates/readings.xlsx': { access: UPLOAD_READERS, sample: (c) => ({ path: `/api/orgs/${c.orgId}/templates/readings.xlsx` }) },
 };
+
+/** The upload behind a fixture test's readings. */
+async function uploadOf(testId: string): Promise<string> {
+  const [row] = (await dataSource.query('SELECT id FROM uploads WHERE test_id = $1 ORDER BY created_at LIMIT 1', [testId])) as Array<{ id: string }>;
+  if (!row) throw new Error(`no upload for test ${testId}`);
+  return row.id;
+}
 
 describe('route policies', () => {
   it('when the app is built, then every registered route declares its access', () => {
@@ -247,7 +284,9 @@ describe('every role on every route', () => {
     const res =
       method === 'GET'
         ? await browser.get(sample.path)
-        : method === 'POST'
+        : method === 'POST' && sample.file
+          ? await browser.agent.post(sample.path).set('x-csrf-token', browser.csrfToken).attach('file', sample.file.bytes, sample.file.name)
+          : method === 'POST'
           ? await browser.post(sample.path, sample.body)
           : method === 'PATCH'
             ? await browser.patch(sample.path, sample.body)
