@@ -22,7 +22,8 @@ export const NAV_ITEMS = [
   { id: 'activity', label: 'Activity', to: paths.org.activity.to, roles: ['admin'] },
   { id: 'projects', label: 'Projects', to: paths.org.projects.to, roles: ['admin', 'technician', 'lab_manager'] },
   { id: 'tests', label: 'Tests', to: paths.org.tests.to, roles: ['admin', 'technician', 'lab_manager'] },
-  { id: 'review-queue', label: 'Review queue', to: paths.org.reviewQueue.to, roles: ['admin', 'lab_manager'] },
+  // Reviewing is the lab manager's alone (the API refuses administrators), so the queue is not offered to them.
+  { id: 'review-queue', label: 'Review queue', to: paths.org.reviewQueue.to, roles: ['lab_manager'] },
   { id: 'soil-records', label: 'Soil records', to: paths.org.soilRecords.to, roles: ['admin', 'lab_manager', 'designer', 'client'] },
 ] as const satisfies readonly NavItem[];
 

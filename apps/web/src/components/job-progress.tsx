@@ -19,7 +19,8 @@ export function JobProgress({ job, what }: { job: JobRun; what: string }) {
     );
   }
   if (job.state === 'succeeded') {
-    return <Alert tone="success">{what}: done{job.message ? ` — ${job.message}` : ''}.</Alert>;
+    const message = job.message ? ` — ${job.message}` : '';
+    return <Alert tone="success">{what}: done{message}{/[.!?]$/.test(message) ? '' : '.'}</Alert>;
   }
   return (
     <div className="space-y-1" data-testid="job-progress">

@@ -8,6 +8,7 @@ import { useBoreholes } from '../../features/projects/api/get-boreholes';
 import { useProject } from '../../features/projects/api/get-project';
 import { useProjectTests } from '../../features/projects/api/get-project-tests';
 import { BoreholesSection } from '../../features/projects/components/boreholes-section';
+import { labPermissions } from '../lab-permissions';
 import { rolesFor } from '../nav-config';
 import { useCurrentOrg } from '../org-context';
 import { RoleGate } from '../role-gate';
@@ -53,7 +54,7 @@ function ProjectPage() {
         ) : tests.error ? (
           <ErrorMessage error={tests.error} title="The tests could not be loaded" onRetry={() => void tests.refetch()} />
         ) : (
-          <BoreholesSection orgId={orgId} projectId={projectId} boreholes={boreholes.data} tests={tests.data} canEdit={membership.role !== 'designer' && membership.role !== 'client'} />
+          <BoreholesSection orgId={orgId} projectId={projectId} boreholes={boreholes.data} tests={tests.data} canEdit={labPermissions(membership.role).benchWork} />
         )}
       </Panel>
     </>

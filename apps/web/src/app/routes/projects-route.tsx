@@ -9,6 +9,7 @@ import { paths } from '../../config/paths';
 import { useProjects } from '../../features/projects/api/get-projects';
 import { ProjectCreateForm } from '../../features/projects/components/project-create-form';
 import { ProjectsTable } from '../../features/projects/components/projects-table';
+import { labPermissions } from '../lab-permissions';
 import { rolesFor } from '../nav-config';
 import { useCurrentOrg } from '../org-context';
 import { RoleGate } from '../role-gate';
@@ -23,23 +24,25 @@ export function ProjectsRoute() {
 }
 
 function ProjectsPage() {
-  const { orgId } = useCurrentOrg();
+  const { orgId, membership } = useCurrentOrg();
   const projects = useProjects(orgId);
   const navigate = useNavigate();
   return (
     <>
       <PageHeader title="Projects" description="Each project is a job for a client: its boreholes, the samples taken from them and the tests run on those samples." />
       <div className="flex flex-col gap-6">
-        <DisclosureForm openLabel="New project" size="md">
-          {(close) => <ProjectCreateForm orgId={orgId} onCancel={close} onCreated={(project) => navigate(paths.org.project.to(orgId, project.id))} />}
-        </DisclosureForm>
+        {labPermissions(membership.role).editProjects ? (
+          <DisclosureForm openLabel="New project" size="md">
+            {(close) => <ProjectCreateForm orgId={orgId} onCancel={close} onCreated={(project) => navigate(paths.org.project.to(orgId, project.id))} />}
+          </DisclosureForm>
+        ) : null}
         <Panel title="All projects" flush>
           {projects.isPending ? (
             <Padded><LoadingBlock label="Loading projects…" /></Padded>
           ) : projects.error ? (
             <Padded><ErrorMessage error={projects.error} title="The projects could not be loaded" onRetry={() => void projects.refetch()} /></Padded>
           ) : projects.data.length === 0 ? (
-            <Padded><EmptyState title="No projects yet">Create the first project to set up its boreholes and samples.</EmptyState></Padded>
+            <Padded><EmptyState title="No projects yet">A lab manager creates each project; then its boreholes and samples are set up here.</EmptyState></Padded>
           ) : (
             <ProjectsTable orgId={orgId} projects={projects.data} />
           )}

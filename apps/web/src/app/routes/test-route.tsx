@@ -24,7 +24,7 @@ import { SpecimenForm } from '../../features/tests/components/specimen-form';
 import { SpecimenSummary } from '../../features/tests/components/specimen-summary';
 import { ReadingsTable } from '../../features/uploads/components/readings-table';
 import { UploadPanel } from '../../features/uploads/components/upload-panel';
-import { rolesFor } from '../nav-config';
+import { labPermissions, TEST_PAGE_ROLES } from '../lab-permissions';
 import { useCurrentOrg } from '../org-context';
 import { RoleGate } from '../role-gate';
 
@@ -40,7 +40,7 @@ type SectionId = (typeof SECTIONS)[number]['id'];
 
 export function TestRoute() {
   return (
-    <RoleGate roles={rolesFor('tests')} purpose="working on laboratory tests">
+    <RoleGate roles={TEST_PAGE_ROLES} purpose="working on laboratory tests">
       <TestPage />
     </RoleGate>
   );
@@ -51,15 +51,15 @@ const LOCKED = new Set(['submitted', 'approved']);
 function TestPage() {
   const { orgId, membership, user } = useCurrentOrg();
   const { testId = '' } = useParams();
-  const [search, setSearch] = useSearchParams();
+  const [search] = useSearchParams();
   const test = useTest(orgId, testId);
   const section: SectionId = SECTIONS.find((s) => s.id === search.get('section'))?.id ?? 'setup';
 
   if (test.isPending) return <LoadingBlock label="Loading the test…" />;
   if (test.error) return <ErrorMessage error={test.error} title="The test could not be loaded" onRetry={() => void test.refetch()} />;
   const t = test.data;
-  const bench = membership.role === 'technician' || membership.role === 'admin' || membership.role === 'lab_manager';
-  const editable = bench && !LOCKED.has(t.status);
+  const may = labPermissions(membership.role);
+  const editable = may.benchWork && !LOCKED.has(t.status);
 
   return (
     <>
@@ -74,22 +74,21 @@ function TestPage() {
       ) : null}
       <nav aria-label="Parts of the test" className="mb-5 flex gap-1 overflow-x-auto border-b border-slate-200">
         {SECTIONS.map((s) => (
-          <button
+          <Link
             key={s.id}
-            type="button"
+            to={{ search: `?section=${s.id}` }}
             aria-current={section === s.id ? 'page' : undefined}
-            onClick={() => setSearch({ section: s.id }, { replace: true })}
             className={`-mb-px whitespace-nowrap border-b-2 px-3 py-2 text-sm font-medium ${section === s.id ? 'border-accent-600 text-accent-700' : 'border-transparent text-slate-600 hover:text-slate-900'}`}
           >
             {s.label}
-          </button>
+          </Link>
         ))}
       </nav>
       {section === 'setup' ? <SetupSection orgId={orgId} test={t} editable={editable} /> : null}
-      {section === 'readings' ? <ReadingsSection orgId={orgId} test={t} editable={editable} /> : null}
-      {section === 'results' ? <AnalysisSection orgId={orgId} test={t} view="results" canPick={false} /> : null}
-      {section === 'curves' ? <AnalysisSection orgId={orgId} test={t} view="curves" canPick={editable && t.status !== 'draft'} /> : null}
-      {section === 'review' ? <ReviewSection orgId={orgId} test={t} canSubmit={editable} isManager={membership.role === 'lab_manager' || membership.role === 'admin'} userId={user.id} /> : null}
+      {section === 'readings' ? <ReadingsSection orgId={orgId} test={t} canImport={may.importReadings && !LOCKED.has(t.status)} /> : null}
+      {section === 'results' ? <AnalysisSection orgId={orgId} test={t} view="results" canPick={false} canRerun={editable && t.status !== 'draft'} /> : null}
+      {section === 'curves' ? <AnalysisSection orgId={orgId} test={t} view="curves" canPick={editable && t.status !== 'draft'} canRerun={editable && t.status !== 'draft'} /> : null}
+      {section === 'review' ? <ReviewSection orgId={orgId} test={t} canSubmit={editable} isManager={may.review} userId={user.id} /> : null}
     </>
   );
 }
@@ -98,16 +97,16 @@ function SetupSection({ orgId, test, editable }: { orgId: string; test: TestDeta
   return (
     <div className="space-y-6">
       <Panel title="Summary"><SpecimenSummary test={test} /></Panel>
-      <Panel title="Specimen, apparatus and compliance"><SpecimenForm key={test.updatedAt} orgId={orgId} test={test} readOnly={!editable} /></Panel>
+      <Panel title="Specimen, apparatus and compliance"><SpecimenForm key={test.id} orgId={orgId} test={test} readOnly={!editable} /></Panel>
     </div>
   );
 }
 
-function ReadingsSection({ orgId, test, editable }: { orgId: string; test: TestDetail; editable: boolean }) {
+function ReadingsSection({ orgId, test, canImport }: { orgId: string; test: TestDetail; canImport: boolean }) {
   return (
     <div className="space-y-6">
       <Panel title="Readings file" description="The canonical layout imports at once; any other layout asks which column holds what.">
-        <UploadPanel orgId={orgId} testId={test.id} canUpload={editable} />
+        <UploadPanel orgId={orgId} testId={test.id} canUpload={canImport} />
       </Panel>
       <Panel title="All readings" flush>
         <ReadingsTable key={test.latestUploadId ?? 'none'} orgId={orgId} testId={test.id} />
@@ -116,7 +115,7 @@ function ReadingsSection({ orgId, test, editable }: { orgId: string; test: TestD
   );
 }
 
-function AnalysisSection({ orgId, test, view, canPick }: { orgId: string; test: TestDetail; view: 'results' | 'curves'; canPick: boolean }) {
+function AnalysisSection({ orgId, test, view, canPick, canRerun }: { orgId: string; test: TestDetail; view: 'results' | 'curves'; canPick: boolean; canRerun: boolean }) {
   const analysis = useAnalysis(orgId, test.id);
   const rerun = useRerunAnalysis(orgId, test.id);
   const pendingJob = useJob(orgId, test.pendingJobId);
@@ -137,7 +136,7 @@ function AnalysisSection({ orgId, test, view, canPick }: { orgId: string; test: 
       <div className="space-y-4">
         {pendingJob.data && view === 'results' ? <JobProgress job={pendingJob.data} what="Analysis" /> : null}
         {body}
-        {canPick || (view === 'results' && test.status !== 'draft' && !LOCKED.has(test.status)) ? (
+        {canRerun ? (
           <div className="flex items-center gap-3 border-t border-slate-100 pt-4">
             <Button variant="secondary" size="sm" pending={rerun.isPending} disabled={test.pendingJobId !== null} onClick={() => rerun.mutate()}>
               Run the analysis again

@@ -121,7 +121,7 @@ function positiveTimes(readings: readonly TimePoint[]): TimePoint[] {
 export function taylorTraces(increment: AnalysisIncrement, readings: readonly TimePoint[]): PlotData[] {
   const traces: PlotData[] = [
     {
-      type: 'scattergl',
+      type: 'scatter',
       mode: 'markers',
       name: 'Readings',
       x: readings.map((r) => Math.sqrt(r.timeMin)),
@@ -155,7 +155,7 @@ export function logTimeTraces(increment: AnalysisIncrement, readings: readonly T
   const shown = positiveTimes(readings);
   const traces: PlotData[] = [
     {
-      type: 'scattergl',
+      type: 'scatter',
       mode: 'markers',
       name: 'Readings',
       x: shown.map((r) => r.timeMin),

@@ -35,7 +35,7 @@ export function FileDropZone({ disabled, onFile }: { disabled: boolean; onFile: 
         type="file"
         accept={ACCEPT}
         className="sr-only"
-        aria-label="Readings file"
+        aria-label="Readings file to upload (CSV or XLSX)"
         disabled={disabled}
         onChange={(e) => {
           const file = e.target.files?.[0];

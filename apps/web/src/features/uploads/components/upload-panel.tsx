@@ -26,7 +26,7 @@ const STATUS_WORDS: Record<Upload['status'], string> = {
   failed: 'Rejected',
 };
 
-const megabytes = (bytes: number) => `${(bytes / 1_048_576).toFixed(bytes < 1_048_576 ? 2 : 1)} MB`;
+const megabytes = (bytes: number) => (bytes < 1_048_576 ? `${Math.max(1, Math.round(bytes / 1024))} kB` : `${(bytes / 1_048_576).toFixed(1)} MB`);
 
 /**
  * Upload with a real progress bar, then follow the import job; a file in another layout gets the
@@ -41,11 +41,17 @@ export function UploadPanel({ orgId, testId, canUpload }: { orgId: string; testI
   const [fileName, setFileName] = useState<string | null>(null);
   const [jobId, setJobId] = useState<string | null>(null);
   const job = useJob(orgId, jobId);
+  // A successful import queues the analysis; follow that job too, so a failure there is seen here.
+  const analysisJobId = typeof job.data?.result?.['analysisJobId'] === 'string' ? job.data.result['analysisJobId'] : null;
+  const analysisJob = useJob(orgId, analysisJobId);
 
   useEffect(() => {
-    // When the import finishes, the test's status, readings and analysis have all moved on.
+    // When a job finishes, the test's status, readings and analysis have all moved on.
     if (job.data && !isJobRunning(job.data)) void queryClient.invalidateQueries({ queryKey: ['orgs', orgId, 'tests', testId] });
   }, [job.data, orgId, testId, queryClient]);
+  useEffect(() => {
+    if (analysisJob.data && !isJobRunning(analysisJob.data)) void queryClient.invalidateQueries({ queryKey: ['orgs', orgId, 'tests', testId] });
+  }, [analysisJob.data, orgId, testId, queryClient]);
 
   const onFile = (file: File) => {
     setFileName(file.name);
@@ -75,6 +81,7 @@ export function UploadPanel({ orgId, testId, canUpload }: { orgId: string; testI
       ) : null}
       {send.error ? <ErrorMessage error={send.error} title={`${fileName ?? 'The file'} was not accepted`} /> : null}
       {job.data ? <JobProgress job={job.data} what="Reading the file" /> : null}
+      {analysisJob.data ? <JobProgress job={analysisJob.data} what="Analysis" /> : null}
       {uploads.isPending ? (
         <LoadingBlock label="Loading uploads…" />
       ) : uploads.error ? (
