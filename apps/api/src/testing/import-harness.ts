@@ -1,28 +1,41 @@
 import type { JobRun, Upload } from '@porestack/types';
 import type PgBoss from 'pg-boss';
+import type request from 'supertest';
 import { dataSource } from '../data-source.js';
-import { createBoss } from '../jobs/boss.js';
+import { analyseTestJob } from '../jobs/analyse-test.job.js';
+import { BOSS_SCHEMA, createBoss } from '../jobs/boss.js';
 import { importReadingsJob } from '../jobs/import-readings.job.js';
 import { registerJobs } from '../jobs/register-jobs.js';
 import { bucketName, ensureBucket, storage } from '../storage/storage.js';
 import type { Browser } from './browser.js';
 
-/** A pg-boss worker working the import queue, as the worker process does. */
+/** A pg-boss worker working the import and analysis queues, as the worker process does. */
 export async function startImportWorker(): Promise<PgBoss> {
   await ensureBucket();
   const boss = createBoss();
   boss.on('error', () => undefined);
   await boss.start();
-  await registerJobs(boss, [importReadingsJob]);
+  await registerJobs(boss, [importReadingsJob, analyseTestJob]);
   return boss;
 }
 
-/** supertest's parser for a binary body (a download), collected into a Buffer. */
-export function binary(res: NodeJS.ReadableStream, done: (error: Error | null, body: Buffer) => void): void {
-  const chunks: Buffer[] = [];
-  res.on('data', (chunk: Buffer) => chunks.push(chunk));
-  res.on('end', () => done(null, Buffer.concat(chunks)));
+/**
+ * Stops the worker and drops the jobs of these organisations still waiting in the queue
+ * (analyses queued by the last imports), so the next test file's worker does not inherit them.
+ */
+export async function stopImportWorker(boss: PgBoss, orgIds: string[]): Promise<void> {
+  await boss.stop({ graceful: true, wait: true });
+  await dataSource.query(`DELETE FROM ${BOSS_SCHEMA}.job WHERE state IN ('created', 'retry') AND data->>'orgId' = ANY($1)`, [orgIds]);
 }
+
+/** supertest's parser for a binary body (a download), collected into a Buffer. */
+export const binary: Parameters<request.Test['parse']>[0] = (res, done) => {
+  // In Node, superagent hands the parser the response stream itself.
+  const stream = res as unknown as NodeJS.ReadableStream;
+  const chunks: Buffer[] = [];
+  stream.on('data', (chunk: Buffer) => chunks.push(chunk));
+  stream.on('end', () => done(null, Buffer.concat(chunks)));
+};
 
 /** Sends a file as the web page does: multipart field `file`, with the CSRF header. */
 export function sendFile(browser: Browser, orgId: string, testId: string, bytes: Buffer, name: string) {

@@ -10,21 +10,21 @@ import { ReadingEntity } from './reading.entity.js';
  * Part of the contract with the analysis job.
  */
 export async function loadIncrements(orgId: string, testId: string): Promise<ConsolidationIncrementInput[]> {
+  // One row per increment with its readings as arrays: 200,000 readings arrive as 10 rows
+  // of float8[] instead of 200,000 row objects (measured 1.0 s → see the import benchmark).
   const rows = (await dataSource.query(
-    `SELECT increment_index, stress_kpa, elapsed_min, deformation_mm FROM readings
-      WHERE organisation_id = $1 AND test_id = $2 ORDER BY row_number`,
+    `SELECT increment_index, min(stress_kpa) AS stress_kpa,
+            array_agg(elapsed_min ORDER BY row_number) AS elapsed_min,
+            array_agg(deformation_mm ORDER BY row_number) AS deformation_mm
+       FROM readings WHERE organisation_id = $1 AND test_id = $2
+      GROUP BY increment_index ORDER BY min(row_number)`,
     [orgId, testId],
-  )) as Array<{ increment_index: number; stress_kpa: number; elapsed_min: number; deformation_mm: number }>;
-  const increments: Array<{ index: number; stressKpa: number; readings: Array<{ elapsedMin: number; deformationMm: number }> }> = [];
-  let current: (typeof increments)[number] | undefined;
-  for (const row of rows) {
-    if (current === undefined || current.index !== row.increment_index) {
-      current = { index: row.increment_index, stressKpa: row.stress_kpa, readings: [] };
-      increments.push(current);
-    }
-    current.readings.push({ elapsedMin: row.elapsed_min, deformationMm: row.deformation_mm });
-  }
-  return increments;
+  )) as Array<{ increment_index: number; stress_kpa: number; elapsed_min: number[]; deformation_mm: number[] }>;
+  return rows.map((row) => ({
+    index: row.increment_index,
+    stressKpa: row.stress_kpa,
+    readings: row.elapsed_min.map((elapsedMin, i) => ({ elapsedMin, deformationMm: row.deformation_mm[i] as number })),
+  }));
 }
 
 /**

@@ -1,9 +1,10 @@
-import { describe, expect, it } from 'vitest';
+import { afterAll, describe, expect, it } from 'vitest';
 import { dataSource } from '../../../data-source.js';
 import { createMember, signUpAdmin } from '../../../testing/browser.js';
 import { readingCount } from '../../../testing/import-harness.js';
 import { draftTest, uploadKnownReadings } from '../../../testing/lab-fixtures.js';
 import { createApp } from '../../../app.js';
+import { BOSS_SCHEMA, stopJobQueue } from '../../../jobs/boss.js';
 import type { ParsedReadings } from '../../readings-import/read-readings.js';
 import { replaceReadings } from '../readings-writer.js';
 
@@ -30,9 +31,18 @@ function syntheticReadings(count: number, duplicateAt?: number): ParsedReadings 
   return readings;
 }
 
+const orgIds: string[] = [];
+
+afterAll(async () => {
+  // The fixtures queue analyses of their tests; nobody works them here.
+  await dataSource.query(`DELETE FROM ${BOSS_SCHEMA}.job WHERE state = 'created' AND data->>'orgId' = ANY($1)`, [orgIds]);
+  await stopJobQueue();
+});
+
 describe('replaceReadings(manager, target, readings)', () => {
   it('when the COPY fails part-way (a repeated row number at reading 150,000), then the test keeps exactly its old readings', async () => {
     const admin = await signUpAdmin(createApp(), 'writer-admin');
+    orgIds.push(admin.orgId);
     const tech = await createMember(admin.orgId, 'technician', 'writer-tech');
     const { testId } = await draftTest(admin.orgId, tech.userId);
     const { uploadId } = await uploadKnownReadings(admin.orgId, testId, tech.userId);
@@ -47,6 +57,7 @@ describe('replaceReadings(manager, target, readings)', () => {
 
   it('when 200,000 readings are written, then all arrive exactly (doubles round-trip) within a few seconds', async () => {
     const admin = await signUpAdmin(createApp(), 'writer-admin-2');
+    orgIds.push(admin.orgId);
     const tech = await createMember(admin.orgId, 'technician', 'writer-tech-2');
     const { testId } = await draftTest(admin.orgId, tech.userId);
     const { uploadId } = await uploadKnownReadings(admin.orgId, testId, tech.userId);

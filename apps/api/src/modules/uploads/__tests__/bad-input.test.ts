@@ -5,7 +5,7 @@ import { createApp } from '../../../app.js';
 import { dataSource } from '../../../data-source.js';
 import { stopJobQueue } from '../../../jobs/boss.js';
 import { createMember, signedInBrowser, signUpAdmin, type Browser } from '../../../testing/browser.js';
-import { readingCount, sendFile, startImportWorker, storedObjectCount, uploadAndWait, uploadRowCount } from '../../../testing/import-harness.js';
+import { readingCount, sendFile, startImportWorker, stopImportWorker, storedObjectCount, uploadAndWait, uploadRowCount } from '../../../testing/import-harness.js';
 import { draftTest } from '../../../testing/lab-fixtures.js';
 import { csv, fixture, workbook } from '../../readings-import/__tests__/import-test-files.js';
 
@@ -30,7 +30,7 @@ beforeAll(async () => {
 });
 
 afterAll(async () => {
-  await worker.stop({ graceful: true, wait: true });
+  await stopImportWorker(worker, [orgId]);
   await stopJobQueue();
 });
 

@@ -6,7 +6,7 @@ import { createApp } from '../../../app.js';
 import { dataSource } from '../../../data-source.js';
 import { stopJobQueue } from '../../../jobs/boss.js';
 import { createMember, signedInBrowser, signUpAdmin, type Browser } from '../../../testing/browser.js';
-import { binary, finishedJob, readingCount, sendFile, startImportWorker, uploadAndWait } from '../../../testing/import-harness.js';
+import { binary, finishedJob, readingCount, sendFile, startImportWorker, stopImportWorker, uploadAndWait } from '../../../testing/import-harness.js';
 import { draftTest } from '../../../testing/lab-fixtures.js';
 import { ConsolidationTestEntity } from '../../consolidation-tests/consolidation-test.entity.js';
 import { LOGGER_MAPPING } from '../../readings-import/demo-files.js';
@@ -37,7 +37,7 @@ beforeAll(async () => {
 });
 
 afterAll(async () => {
-  await worker.stop({ graceful: true, wait: true });
+  await stopImportWorker(worker, [orgId]);
   await stopJobQueue();
 });
 
