@@ -13,6 +13,8 @@ export class ImportProblem extends Error {
     message: string,
     readonly issues: readonly ImportIssue[] = [],
     readonly issueCount: number = issues.length,
+    /** 'not_readings': the bytes are not CSV or XLSX at all (refused by content). */
+    readonly kind: 'rows' | 'not_readings' = 'rows',
   ) {
     super(message);
     this.name = 'ImportProblem';

@@ -53,7 +53,8 @@ export async function importUpload(data: ImportReadingsJobData, onProgress: (fra
     await replaceReadings(manager, { orgId: data.orgId, testId: data.testId, uploadId: upload.id }, readings, (fraction) => {
       if (fraction - lastReported < 0.2 && fraction < 1) return;
       lastReported = fraction;
-      void onProgress(0.45 + 0.45 * fraction, `Writing readings: ${Math.round(fraction * 100)} %.`);
+      // A lost progress write must not stop the import.
+      onProgress(0.45 + 0.45 * fraction, fraction < 1 ? `Writing readings: ${Math.round(fraction * 100)} % sent.` : 'Readings written; finishing.').catch(() => undefined);
     });
     await manager.getRepository(UploadEntity).update(
       { id: upload.id },

@@ -29,29 +29,33 @@ export function sniffFileType(bytes: Buffer): DetectedFileType {
   }
   if (bytes.subarray(0, 4).equals(ZIP_MAGIC)) {
     if (bytes.includes(XLSX_ENTRY)) return 'xlsx';
-    throw new ImportProblem(
+    throw notReadings(
       'The file is a ZIP archive but not an Excel workbook (it has no xl/ folder inside; it may be a Word or OpenDocument file). Save the readings as .xlsx or CSV and upload that.',
     );
   }
   const known = KNOWN_BINARIES.find(({ magic }) => bytes.subarray(0, magic.length).equals(magic));
   if (known) {
-    throw new ImportProblem(`The file's content is ${known.what}, not readings as CSV or XLSX, whatever its name says. Choose the CSV or XLSX file with the readings.`);
+    throw notReadings(`The file's content is ${known.what}, not readings as CSV or XLSX, whatever its name says. Choose the CSV or XLSX file with the readings.`);
   }
   if (UTF16_BOMS.some((bom) => bytes.subarray(0, 2).equals(bom))) {
-    throw new ImportProblem('The file is text saved as UTF-16. Save it again as "CSV UTF-8" (or plain UTF-8 text) and upload that.');
+    throw notReadings('The file is text saved as UTF-16. Save it again as "CSV UTF-8" (or plain UTF-8 text) and upload that.');
   }
   const nul = bytes.indexOf(0);
   if (nul !== -1) {
-    throw new ImportProblem(`The file holds binary data (a NUL byte at byte ${nul + 1}), so it is neither CSV text nor an XLSX workbook, whatever its name says. Choose the CSV or XLSX file with the readings.`);
+    throw notReadings(`The file holds binary data (a NUL byte at byte ${nul + 1}), so it is neither CSV text nor an XLSX workbook, whatever its name says. Choose the CSV or XLSX file with the readings.`);
   }
   try {
     new TextDecoder('utf-8', { fatal: true }).decode(bytes);
   } catch {
-    throw new ImportProblem(
+    throw notReadings(
       'The file is not UTF-8 text, so it is neither a CSV we can read nor an XLSX workbook. If it is a CSV saved in another encoding, save it again as "CSV UTF-8" and upload that.',
     );
   }
   return 'csv';
+}
+
+function notReadings(message: string): ImportProblem {
+  return new ImportProblem(message, [], 0, 'not_readings');
 }
 
 /** No bytes, or only spaces and line ends (and perhaps a byte-order mark). */

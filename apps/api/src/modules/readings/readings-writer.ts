@@ -35,6 +35,8 @@ export async function replaceReadings(
     copyFrom('COPY readings (test_id, row_number, organisation_id, upload_id, increment_index, stress_kpa, elapsed_min, deformation_mm) FROM STDIN'),
   );
   await pipeline(Readable.from(copyChunks(target, readings, onProgress)), copy);
+  // Only now has the server taken every row (the last chunks were still being checked).
+  onProgress(1);
 }
 
 function* copyChunks(target: ReadingsTarget, readings: ParsedReadings, onProgress: (fraction: number) => void): Generator<string> {
@@ -49,9 +51,8 @@ function* copyChunks(target: ReadingsTarget, readings: ParsedReadings, onProgres
     if (lines.length === ROWS_PER_CHUNK) {
       yield lines.join('');
       lines = [];
-      if ((i + 1) % reportEvery < ROWS_PER_CHUNK) onProgress((i + 1) / readings.count);
+      if ((i + 1) % reportEvery < ROWS_PER_CHUNK && i + 1 < readings.count) onProgress((i + 1) / readings.count);
     }
   }
   if (lines.length > 0) yield lines.join('');
-  onProgress(1);
 }

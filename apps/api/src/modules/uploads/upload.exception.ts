@@ -13,9 +13,9 @@ export const fileMissing = () =>
   ]);
 
 /** A file refused by its content: not CSV or XLSX at all (415), or one whose rows cannot be read (422). */
-export function fileRefused(problem: ImportProblem, unreadableType: boolean): DomainError {
+export function fileRefused(problem: ImportProblem): DomainError {
   const issues = problem.issues.map((issue) => ({ path: issue.column ? `row ${issue.row}, ${issue.column}` : `row ${issue.row}`, message: issue.message }));
-  return new DomainError(unreadableType ? 'unsupported_file' : 'invalid_file', problem.message, issues.length > 0 ? issues : undefined);
+  return new DomainError(problem.kind === 'not_readings' ? 'unsupported_file' : 'invalid_file', problem.message, issues.length > 0 ? issues : undefined);
 }
 
 export const readingsLocked = (status: string) =>

@@ -51,7 +51,7 @@ export async function createUpload(orgId: string, testId: string, actor: Actor, 
   try {
     detectedType = sniffFileType(file.bytes);
   } catch (error) {
-    if (error instanceof ImportProblem) throw fileRefused(error, file.bytes.length > 0 && !error.message.startsWith('The file is empty'));
+    if (error instanceof ImportProblem) throw fileRefused(error);
     throw error;
   }
   const uploadId = randomUUID();
@@ -145,7 +145,7 @@ export async function previewUpload(orgId: string, uploadId: string, delimiter?:
       specimen: table.specimen,
     };
   } catch (error) {
-    if (error instanceof ImportProblem) throw fileRefused(error, false);
+    if (error instanceof ImportProblem) throw fileRefused(error);
     throw error;
   }
 }

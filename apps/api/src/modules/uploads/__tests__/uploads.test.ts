@@ -7,7 +7,8 @@ import { dataSource } from '../../../data-source.js';
 import { stopJobQueue } from '../../../jobs/boss.js';
 import { createMember, signedInBrowser, signUpAdmin, type Browser } from '../../../testing/browser.js';
 import { binary, finishedJob, readingCount, sendFile, startImportWorker, stopImportWorker, uploadAndWait } from '../../../testing/import-harness.js';
-import { draftTest } from '../../../testing/lab-fixtures.js';
+import { draftTest, submittedTest } from '../../../testing/lab-fixtures.js';
+import { storedObjectCount, uploadRowCount } from '../../../testing/import-harness.js';
 import { ConsolidationTestEntity } from '../../consolidation-tests/consolidation-test.entity.js';
 import { LOGGER_MAPPING } from '../../readings-import/demo-files.js';
 import { demoReadings } from '../../readings-import/demo-readings.js';
@@ -168,6 +169,19 @@ describe('templates', () => {
     const { testId } = await draftTest(orgId, technicianId);
     const { job } = await uploadAndWait(technician, orgId, testId, xlsxRes.body as Buffer, 'template.xlsx');
     expect(job.result).toMatchObject({ importedReadings: 150 });
+  });
+});
+
+describe('a test with the lab manager', () => {
+  it('when the test is submitted for review, then a new upload is refused with 409 and nothing is stored', async () => {
+    const { testId } = await submittedTest(orgId, technicianId);
+    const uploads = await uploadRowCount(testId);
+    const objects = await storedObjectCount(orgId, testId);
+    const res = await sendFile(technician, orgId, testId, fixture('canonical.csv'), 'late.csv');
+    expect(res.status).toBe(409);
+    expect(res.body.message).toBe('This test is with the lab manager for review, so its readings cannot be replaced now. Wait for the review.');
+    expect(await uploadRowCount(testId)).toBe(uploads);
+    expect(await storedObjectCount(orgId, testId)).toBe(objects);
   });
 });
 
