@@ -47,10 +47,10 @@ export async function importReadings(data: ImportReadingsJobData): Promise<void>
       return;
     }
     logger.error({ err: error, job: IMPORT_READINGS_QUEUE, uploadId: data.uploadId }, 'import failed');
-    await jobRuns.update(data.jobRunId, {
-      state: 'failed',
-      message: 'The import stopped because of a problem on our side; no readings were changed. It is tried again; if it keeps failing, tell your administrator.',
-    });
+    const message = 'The import stopped because of a problem on our side; no readings were changed. It is tried again; if it keeps failing, tell your administrator.';
+    await jobRuns.update(data.jobRunId, { state: 'failed', message });
+    // The page stops waiting; a successful retry marks the upload imported.
+    await dataSource.getRepository(UploadEntity).update({ id: data.uploadId }, { status: 'failed', failure: { message, issues: [], issueCount: 0 } }).catch(() => undefined);
     throw error;
   }
 }

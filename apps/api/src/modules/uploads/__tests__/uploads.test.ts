@@ -9,6 +9,10 @@ import { createMember, signedInBrowser, signUpAdmin, type Browser } from '../../
 import { binary, finishedJob, readingCount, sendFile, startImportWorker, stopImportWorker, uploadAndWait } from '../../../testing/import-harness.js';
 import { draftTest, submittedTest } from '../../../testing/lab-fixtures.js';
 import { storedObjectCount, uploadRowCount } from '../../../testing/import-harness.js';
+import { importReadings } from '../../../jobs/import-readings.job.js';
+import { jobRuns } from '../../job-runs/job-runs.service.js';
+import { removeUploadObject } from '../upload-object.js';
+import { UploadEntity } from '../upload.entity.js';
 import { ConsolidationTestEntity } from '../../consolidation-tests/consolidation-test.entity.js';
 import { LOGGER_MAPPING } from '../../readings-import/demo-files.js';
 import { demoReadings } from '../../readings-import/demo-readings.js';
@@ -117,6 +121,21 @@ describe('replacing readings and retrying', () => {
     const { upload } = await uploadAndWait(technician, orgId, testId, fixture('canonical.csv'), 'readings.csv');
     const again = (await technician.post(`/api/orgs/${orgId}/uploads/${upload.id}/import`, { mapping: { columns: { increment: 'increment', stress: 'stress_kpa', elapsedTime: 'elapsed_min', deformation: 'deformation_mm' }, units: {} } }).expect(202)).body as JobRun;
     expect((await finishedJob(technician, orgId, again.id)).state).toBe('succeeded');
+    expect(await readingCount(testId)).toBe(150);
+  });
+});
+
+describe('a failure on our side', () => {
+  it('when the stored file cannot be read (storage lost it), then the job fails saying so, is thrown for a pg-boss retry, and the readings stay', async () => {
+    const { testId } = await draftTest(orgId, technicianId);
+    const { upload } = await uploadAndWait(technician, orgId, testId, fixture('canonical.csv'), 'readings.csv');
+    const row = await dataSource.getRepository(UploadEntity).findOneByOrFail({ id: upload.id });
+    await removeUploadObject(row.objectKey);
+    const run = await jobRuns.create({ organisationId: orgId, kind: 'import-readings', testId, uploadId: upload.id });
+    await expect(importReadings({ orgId, testId, uploadId: upload.id, jobRunId: run.id, actorId: technicianId, mapping: null })).rejects.toThrow();
+    const job = (await technician.get(`/api/orgs/${orgId}/jobs/${run.id}`).expect(200)).body as JobRun;
+    expect(job).toMatchObject({ state: 'failed', message: 'The import stopped because of a problem on our side; no readings were changed. It is tried again; if it keeps failing, tell your administrator.' });
+    expect((await technician.get(`/api/orgs/${orgId}/uploads/${upload.id}`).expect(200)).body.status).toBe('failed');
     expect(await readingCount(testId)).toBe(150);
   });
 });
