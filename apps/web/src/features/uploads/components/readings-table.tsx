@@ -60,7 +60,19 @@ export function ReadingsTable({ orgId, testId }: { orgId: string; testId: string
     position: item.index,
     reading: byPage.get(Math.floor(item.index / PAGE_SIZE))?.[item.index % PAGE_SIZE],
   }));
-  const table = useReactTable({ data: slots, columns, getCoreRowModel: getCoreRowModel(), getRowId: (s) => String(s.position) });
+  // The rows in view change on every scroll, so `data` is a new array on every render. TanStack
+  // Table's default autoResetPageIndex answers each new `data` with a state update (queued in a
+  // microtask), which renders again with new `data`: an endless loop of urgent updates that starved
+  // React Router's navigation transition (the URL changed, the page never did). The virtualiser
+  // does the paging here, so the table's own pagination stays off.
+  const table = useReactTable({
+    data: slots,
+    columns,
+    getCoreRowModel: getCoreRowModel(),
+    getRowId: (s) => String(s.position),
+    manualPagination: true,
+    autoResetPageIndex: false,
+  });
   const headers = useMemo(() => table.getHeaderGroups(), [table]);
 
   if (first.isPending) return <LoadingBlock label="Loading readings…" />;
