@@ -109,7 +109,7 @@ test('a technician uploads, maps, overrides a pick and submits; a lab manager ap
   await mapping.getByLabel('Increment column').selectOption('Stage');
   await mapping.getByLabel('Stress column').selectOption('Load (kgf/cm2)');
   await mapping.getByLabel('Time column').selectOption('Time (s)');
-  await mapping.getByLabel('Deformation column').selectOption('Dial (div)');
+  await mapping.getByLabel('Deformation column', { exact: true }).selectOption('Dial (div)');
   await mapping.getByLabel('Stress unit').selectOption('kgfPerCm2');
   await mapping.getByLabel('Time unit').selectOption('s');
   await mapping.getByLabel('The deformation column holds').selectOption('dial');

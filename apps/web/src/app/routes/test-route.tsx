@@ -1,5 +1,5 @@
 import type { TestDetail } from '@porestack/types';
-import type { ReactNode } from 'react';
+import { useState, type ReactNode } from 'react';
 import { Link, useParams, useSearchParams } from 'react-router-dom';
 import { Alert } from '../../components/alert';
 import { Button } from '../../components/button';
@@ -153,8 +153,17 @@ function ReviewSection({ orgId, test, canSubmit, isManager, userId }: { orgId: s
   const reviews = useReviews(orgId, test.id);
   const submit = useSubmitTest(orgId, test.id);
   const ready = test.status === 'analysed' || (test.status === 'changes_requested' && test.latestAnalysis !== null);
+  // The decision panel goes away once the status moves on, so its confirmation is kept here.
+  const [decided, setDecided] = useState<'approved' | 'changes_requested' | null>(null);
   return (
     <div className="space-y-6">
+      {decided === 'approved' ? (
+        <Alert tone="success">
+          {test.reference} approved. A new soil record version has been written;{' '}
+          <Link to={paths.org.soilRecords.to(orgId)} className="font-medium underline">see the soil records</Link>.
+        </Alert>
+      ) : null}
+      {decided === 'changes_requested' ? <Alert tone="success">{test.reference} sent back to the technician with your comment.</Alert> : null}
       {canSubmit ? (
         <Panel title="Send for review" description="A lab manager checks the curves and parameters, then approves them or sends the test back with a comment.">
           {ready ? (
@@ -169,7 +178,7 @@ function ReviewSection({ orgId, test, canSubmit, isManager, userId }: { orgId: s
       ) : null}
       {test.status === 'submitted' && isManager ? (
         <Panel title="Your decision">
-          <ReviewDecision orgId={orgId} testId={test.id} testReference={test.reference} isOwnTest={test.technicianId === userId} />
+          <ReviewDecision orgId={orgId} testId={test.id} testReference={test.reference} isOwnTest={test.technicianId === userId} onDecided={setDecided} />
         </Panel>
       ) : null}
       {test.status === 'submitted' && !isManager ? <Alert tone="info">Submitted. A lab manager will review it; you will get an e-mail with the decision.</Alert> : null}
