@@ -216,6 +216,15 @@ export const TestDetailSchema = TestSummarySchema.extend({
   latestAnalysis: AnalysisSummarySchema.nullable(),
   /** The newest analysis job for this test, if one is queued or running. */
   pendingJobId: z.uuid().nullable(),
+  /** The newest analysis job in any state, so a failure is still shown after the fact. */
+  latestAnalysisJob: z
+    .object({
+      id: z.uuid(),
+      state: z.enum(['queued', 'running', 'succeeded', 'failed']),
+      message: z.string().nullable(),
+      updatedAt: isoDateTime,
+    })
+    .nullable(),
   /** The latest change request's comment while the test is sent back. */
   changesRequestedComment: z.string().nullable(),
   createdAt: isoDateTime,

@@ -24,7 +24,7 @@ function specimenInput(test: ConsolidationTestEntity, inSituKpa: number | null):
   if (test.initialHeightMm === null) missing.push('initialHeightMm');
   if (test.diameterMm === null) missing.push('diameterMm');
   if (test.specificGravity === null) missing.push('specificGravity');
-  if (test.dryMassG === null && (test.wetMassG === null || test.initialWaterContent === null)) missing.push('dryMassG (or wetMassG with initialWaterContent)');
+  if (test.dryMassG === null && (test.wetMassG === null || test.initialWaterContent === null)) missing.push('dryMassG');
   if (missing.length > 0) throw specimenIncomplete(missing);
   return {
     initialHeightMm: test.initialHeightMm as number,

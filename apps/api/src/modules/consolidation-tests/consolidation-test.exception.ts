@@ -36,12 +36,23 @@ export const technicianNotMember = () =>
     { path: 'technicianId', message: 'Not a member of this organisation.' },
   ]);
 
-export const specimenIncomplete = (missing: string[]) =>
-  new DomainError(
+/** What the technician reads for each specimen value the analysis cannot do without. */
+const SPECIMEN_WORDS: Record<string, string> = {
+  initialHeightMm: "the specimen's initial height",
+  diameterMm: "the specimen's diameter",
+  specificGravity: 'the specific gravity of the solids',
+  dryMassG: "the specimen's dry mass, or its wet mass and initial water content",
+};
+
+export const specimenIncomplete = (missing: string[]) => {
+  const words = missing.map((key) => SPECIMEN_WORDS[key] ?? key);
+  const list = words.length > 1 ? `${words.slice(0, -1).join('; ')}; and ${words[words.length - 1]}` : (words[0] ?? '');
+  return new DomainError(
     'validation_failed',
-    `The specimen data is incomplete, so the test cannot be analysed: enter ${missing.join(', ')} on the test page.`,
+    `The test cannot be analysed yet. Enter ${list}, on the Set-up tab, then run the analysis again.`,
     missing.map((path) => ({ path: `specimen.${path}`, message: 'Required for the analysis.' })),
   );
+};
 
 export const specimenLocked = () =>
   new DomainError(

@@ -63,6 +63,7 @@ export async function getTestDetail(orgId: string, testId: string): Promise<Test
   if (!row || !test) throw new NotFoundError('test');
   const analysis = test.latestAnalysisId ? await dataSource.getRepository(AnalysisEntity).findOneBy({ organisationId: orgId, id: test.latestAnalysisId }) : null;
   const pending = await jobRuns.pendingFor(orgId, testId, ANALYSE_TEST_QUEUE);
+  const latestJob = await jobRuns.latestFor(orgId, testId, ANALYSE_TEST_QUEUE);
   const [lastChangeRequest] = test.status === 'changes_requested'
     ? ((await dataSource.query(
         `SELECT comment FROM review_events WHERE organisation_id = $1 AND test_id = $2 AND decision = 'changes_requested' ORDER BY at DESC LIMIT 1`,
@@ -99,6 +100,7 @@ export async function getTestDetail(orgId: string, testId: string): Promise<Test
     picks: test.picks,
     latestAnalysis: analysis ? toAnalysisSummary(analysis) : null,
     pendingJobId: pending?.id ?? null,
+    latestAnalysisJob: latestJob ? { id: latestJob.id, state: latestJob.state, message: latestJob.message, updatedAt: latestJob.updatedAt.toISOString() } : null,
     changesRequestedComment: lastChangeRequest?.comment ?? null,
     createdAt: test.createdAt.toISOString(),
   };

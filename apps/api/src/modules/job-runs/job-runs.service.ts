@@ -69,6 +69,16 @@ export const jobRuns = {
     return toJobRun(row);
   },
 
+  /** The newest job of this kind for a test, in any state (a failure seen after the fact). */
+  async latestFor(orgId: string, testId: string, kind: string): Promise<JobRunEntity | null> {
+    return dataSource
+      .getRepository(JobRunEntity)
+      .createQueryBuilder('run')
+      .where('run.organisation_id = :orgId AND run.test_id = :testId AND run.kind = :kind', { orgId, testId, kind })
+      .orderBy('run.created_at', 'DESC')
+      .getOne();
+  },
+
   /** The newest queued or running job of this kind for a test, if any. */
   async pendingFor(orgId: string, testId: string, kind: string): Promise<JobRunEntity | null> {
     return dataSource

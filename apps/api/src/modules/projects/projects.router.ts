@@ -7,11 +7,17 @@ import { defineRoutes } from '../../http/routes.js';
 import { createBorehole, listBoreholes } from '../boreholes/boreholes.service.js';
 import { createSample, listSamples } from '../samples/samples.service.js';
 import { LAB_READERS, LAB_WORKERS, PROJECT_EDITORS } from './lab-roles.js';
-import { createProject, getProject, listProjects, updateProject } from './projects.service.js';
+import { createProject, getProject, listDesignerCandidates, listProjects, updateProject } from './projects.service.js';
 
 /** Projects, their boreholes and the boreholes' samples. */
 export function projectsRouter(): Router {
   return defineRoutes('/api/orgs/:orgId', [
+    {
+      method: 'get',
+      path: '/designers',
+      access: PROJECT_EDITORS,
+      handler: async (req, res) => res.json(await listDesignerCandidates(currentTenant(req).orgId)),
+    },
     { method: 'get', path: '/projects', access: LAB_READERS, handler: async (req, res) => res.json(await listProjects(currentTenant(req).orgId)) },
     {
       method: 'post',

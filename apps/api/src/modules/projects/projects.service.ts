@@ -1,4 +1,4 @@
-import type { ProjectCreate, ProjectDetail, ProjectSummary, ProjectUpdate } from '@porestack/types';
+import type { ProjectCreate, ProjectDesigner, ProjectDetail, ProjectSummary, ProjectUpdate } from '@porestack/types';
 import { In, type EntityManager } from 'typeorm';
 import { dataSource } from '../../data-source.js';
 import { DomainError, NotFoundError } from '../../errors/domain-error.js';
@@ -50,6 +50,15 @@ export async function listProjects(orgId: string): Promise<ProjectSummary[]> {
     testCount: row['test_count'] as number,
     createdAt: (row['created_at'] as Date).toISOString(),
   }));
+}
+
+/** The organisation's members with the designer role: who can be attached to a project. */
+export async function listDesignerCandidates(orgId: string): Promise<ProjectDesigner[]> {
+  const rows = (await dataSource.query(
+    "SELECT u.id AS user_id, u.name, u.email FROM memberships m JOIN users u ON u.id = m.user_id WHERE m.organisation_id = $1 AND m.role = 'designer' ORDER BY u.name",
+    [orgId],
+  )) as Array<{ user_id: string; name: string; email: string }>;
+  return rows.map((d) => ({ userId: d.user_id, name: d.name, email: d.email }));
 }
 
 export async function getProject(orgId: string, projectId: string): Promise<ProjectDetail> {
