@@ -8,6 +8,7 @@ import { signIn } from './support/people';
 const PASSWORD = 'porestack-demo';
 const TECHNICIAN = 'technician@demo.porestack.test';
 const MANAGER = 'lab-manager@demo.porestack.test';
+const DESIGNER = 'designer@demo.porestack.test';
 const fixtures = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '../../../fixtures/readings');
 const unique = Date.now().toString(36);
 
@@ -67,6 +68,11 @@ test('a technician uploads, maps, overrides a pick and submits; a lab manager ap
   await manager.page.getByLabel('Client').fill('Fenwick Rail Partners');
   await manager.page.getByRole('button', { name: 'Create project' }).click();
   await expect(manager.page.getByRole('heading', { level: 1, name: projectName })).toBeVisible();
+  // The demo designer is attached afterwards, through the edit form, to be told of new versions.
+  await manager.page.getByRole('button', { name: 'Edit project and designers' }).click();
+  await manager.page.getByRole('form', { name: 'Edit project' }).getByRole('checkbox', { name: new RegExp(DESIGNER.replace('.', '\\.')) }).check();
+  await manager.page.getByRole('button', { name: 'Save project' }).click();
+  await expect(manager.page.getByText(/designers: .+/)).toBeVisible();
 
   const tech = await signedIn(browser, TECHNICIAN);
   const page = tech.page;
@@ -88,6 +94,9 @@ test('a technician uploads, maps, overrides a pick and submits; a lab manager ap
   await expect(page.locator('[data-testid="plotly-chart"] .main-svg').first()).toBeVisible({ timeout: 30_000 });
   await expect(page.getByText('Casagrande construction').first()).toBeVisible();
   await expect(page.getByText('Pacheco Silva construction').first()).toBeVisible();
+  // One increment's √t and log t plots, fetched by increment.
+  await expect(page.getByRole('img', { name: /deformation against square root of time/ }).locator('.main-svg').first()).toBeVisible({ timeout: 30_000 });
+  await expect(page.getByRole('img', { name: /deformation against log time/ }).locator('.main-svg').first()).toBeVisible();
 
   // Override σ′p through the form; the reason is required.
   const form = page.getByRole('form', { name: 'Override picks' });
@@ -119,12 +128,17 @@ test('a technician uploads, maps, overrides a pick and submits; a lab manager ap
   await mapping.getByLabel('Save as profile (optional)').fill(`Bench logger ${unique}`);
   await mapping.getByRole('button', { name: 'Import with this mapping' }).click();
   await expect(page.getByText(/^ — \d+ readings in \d+ increments/)).toBeVisible({ timeout: 45_000 });
+  await expect(page.getByRole('table', { name: 'Readings of this test' })).toBeVisible();
+  // The mapping was kept as a named profile of the organisation.
+  const profiles = (await (await page.request.get(`/api/orgs/${orgId}/import-profiles`)).json()) as { name: string }[];
+  expect(profiles.map((p) => p.name)).toContain(`Bench logger ${unique}`);
 
   // Back to the first test: submit it.
   await page.goto(`${testUrl.split('?')[0]}?section=review`);
   await page.getByRole('button', { name: /^Submit .* for review$/ }).click();
   await waitForStatus(page, 'Awaiting review');
-  await linkFromMail(MANAGER, `/orgs/${orgId}/tests/`, 30_000);
+  const testPath = new URL(testUrl).pathname;
+  expect(await linkFromMail(MANAGER, testPath, 30_000)).toContain(testPath);
 
   // The lab manager approves from the queue and the test page.
   await manager.page.goto(`/orgs/${orgId}/review-queue`);
@@ -132,11 +146,19 @@ test('a technician uploads, maps, overrides a pick and submits; a lab manager ap
   await openPart(manager.page, 'Review');
   await manager.page.getByRole('button', { name: `Approve U-${unique}a-OED` }).click();
   await expect(manager.page.getByText(/approved\. A new soil record version/)).toBeVisible();
-  await linkFromMail(TECHNICIAN, `/orgs/${orgId}/tests/`, 30_000);
+  expect(await linkFromMail(TECHNICIAN, testPath, 30_000)).toContain(testPath);
 
   // The version appears in the soil records.
   await manager.page.goto(`/orgs/${orgId}/soil-records`);
   await manager.page.getByRole('link', { name: `BH-${unique}a / U-${unique}a` }).click();
   await expect(manager.page.getByText('Version 1 is the current version of this record.')).toBeVisible();
   await expect(manager.page.getByRole('table', { name: 'Parameters of version 1' })).toContainText('95 kPa (picked)');
+  const recordPath = new URL(manager.page.url()).pathname;
+
+  // The project's designer is told, with a link to this record's version, and can read it.
+  const designerLink = await linkFromMail(DESIGNER, recordPath, 30_000);
+  expect(designerLink).toBe(`${recordPath}?version=1`);
+  const designer = await signedIn(browser, DESIGNER);
+  await designer.page.goto(designerLink);
+  await expect(designer.page.getByRole('table', { name: 'Parameters of version 1' })).toContainText('95 kPa (picked)');
 });

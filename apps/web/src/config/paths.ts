@@ -58,6 +58,7 @@ export const apiPaths = {
   testReviews: (orgId: string, testId: string) => `/api/orgs/${orgId}/tests/${testId}/reviews`,
   testUploads: (orgId: string, testId: string) => `/api/orgs/${orgId}/tests/${testId}/uploads`,
   testReadings: (orgId: string, testId: string) => `/api/orgs/${orgId}/tests/${testId}/readings`,
+  designers: (orgId: string) => `/api/orgs/${orgId}/designers`,
   uploadDownload: (orgId: string, uploadId: string) => `/api/orgs/${orgId}/uploads/${uploadId}/download`,
   uploadPreview: (orgId: string, uploadId: string) => `/api/orgs/${orgId}/uploads/${uploadId}/preview`,
   uploadImport: (orgId: string, uploadId: string) => `/api/orgs/${orgId}/uploads/${uploadId}/import`,

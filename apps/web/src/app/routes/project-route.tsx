@@ -8,6 +8,8 @@ import { useBoreholes } from '../../features/projects/api/get-boreholes';
 import { useProject } from '../../features/projects/api/get-project';
 import { useProjectTests } from '../../features/projects/api/get-project-tests';
 import { BoreholesSection } from '../../features/projects/components/boreholes-section';
+import { ProjectEditForm } from '../../features/projects/components/project-edit-form';
+import { DisclosureForm } from '../../components/disclosure-form';
 import { labPermissions } from '../lab-permissions';
 import { rolesFor } from '../nav-config';
 import { useCurrentOrg } from '../org-context';
@@ -46,6 +48,13 @@ function ProjectPage() {
           </>
         }
       />
+      {labPermissions(membership.role).editProjects ? (
+        <div className="mb-6">
+          <DisclosureForm openLabel="Edit project and designers">
+            {(close) => <ProjectEditForm orgId={orgId} project={p} onDone={close} />}
+          </DisclosureForm>
+        </div>
+      ) : null}
       <Panel title="Boreholes, samples and tests" description="Open a test to upload its readings, check the curves and send it for review.">
         {boreholes.isPending || tests.isPending ? (
           <LoadingBlock label="Loading boreholes…" />

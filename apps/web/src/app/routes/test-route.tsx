@@ -135,6 +135,12 @@ function AnalysisSection({ orgId, test, view, canPick, canRerun }: { orgId: stri
     <Panel title={view === 'results' ? 'Parameters' : 'Curves and picks'}>
       <div className="space-y-4">
         {pendingJob.data && view === 'results' ? <JobProgress job={pendingJob.data} what="Analysis" /> : null}
+        {test.pendingJobId === null && test.latestAnalysisJob?.state === 'failed' ? (
+          <Alert tone="error" title="The last analysis failed">
+            {test.latestAnalysisJob.message ?? 'It stopped without saying why.'}
+            {analysis.data ? ' The parameters below are from the analysis before it.' : ''}
+          </Alert>
+        ) : null}
         {body}
         {canRerun ? (
           <div className="flex items-center gap-3 border-t border-slate-100 pt-4">

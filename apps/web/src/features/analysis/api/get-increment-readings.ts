@@ -9,17 +9,15 @@ const MAX_PAGE = 5000;
 const MAX_PLOTTED_POINTS = 4000;
 
 /**
- * One increment's readings for its time plots. Readings come back in test order, so the
- * increment starts after the earlier increments' reading counts (from the analysis); only its
- * own rows are fetched.
+ * One increment's readings for its time plots, asked for by increment (`?increment=N`), page by
+ * page until the increment's total. `count` (from the analysis) only decides whether to ask.
  */
-export async function getIncrementReadings(orgId: string, testId: string, incrementIndex: number, offset: number, count: number): Promise<TimePoint[]> {
+export async function getIncrementReadings(orgId: string, testId: string, incrementIndex: number): Promise<TimePoint[]> {
   const points: TimePoint[] = [];
-  for (let start = offset; start < offset + count; start += MAX_PAGE) {
-    const limit = Math.min(MAX_PAGE, offset + count - start);
-    const page = await api.get(`${apiPaths.testReadings(orgId, testId)}?offset=${start}&limit=${limit}`, ReadingsPageSchema);
-    for (const r of page.readings) if (r.incrementIndex === incrementIndex) points.push({ timeMin: r.elapsedMin, deformationMm: r.deformationMm });
-    if (page.readings.length < limit) break;
+  for (let start = 0; ; start += MAX_PAGE) {
+    const page = await api.get(`${apiPaths.testReadings(orgId, testId)}?increment=${incrementIndex}&offset=${start}&limit=${MAX_PAGE}`, ReadingsPageSchema);
+    for (const r of page.readings) points.push({ timeMin: r.elapsedMin, deformationMm: r.deformationMm });
+    if (page.readings.length < MAX_PAGE || start + MAX_PAGE >= page.total) break;
   }
   return thin(points);
 }
@@ -40,7 +38,7 @@ function thin(points: TimePoint[]): TimePoint[] {
 export const incrementReadingsQueryOptions = (orgId: string, testId: string, incrementIndex: number, offset: number, count: number) =>
   queryOptions({
     queryKey: ['orgs', orgId, 'tests', testId, 'readings', 'increment', { incrementIndex, offset, count }],
-    queryFn: () => getIncrementReadings(orgId, testId, incrementIndex, offset, count),
+    queryFn: () => getIncrementReadings(orgId, testId, incrementIndex),
     staleTime: 5 * 60_000,
   });
 
