@@ -1,6 +1,6 @@
 import { expect, test, type Page } from '@playwright/test';
 import { linkFromMail } from './support/mail';
-import { newPerson, signUp } from './support/people';
+import { newPerson, signIn, signUp } from './support/people';
 
 // Writes a PNG of every page to apps/web/screenshots/ for a visual check by a person.
 // Only with SCREENSHOTS=1, so `npm test` does not spend time on it.
@@ -86,4 +86,71 @@ test('screenshots of every page', async ({ page, browser }) => {
   await page.goto(`/orgs/${orgId}/members`);
   await expect(page.getByRole('heading', { level: 1, name: 'Members' })).toBeVisible();
   await shot(page, 'members-narrow');
+});
+
+/** The lab pages, on the demo organisation's lab (whatever tests it holds in each status). */
+test('screenshots of the lab pages', async ({ browser }) => {
+  test.setTimeout(120_000);
+  const context = await browser.newContext({ viewport: { width: 1280, height: 800 } });
+  const page = await context.newPage();
+  await signIn(page, 'lab-manager@demo.porestack.test', 'porestack-demo');
+  await page.waitForURL(/\/orgs\/[^/]+/);
+  const orgId = /\/orgs\/([^/?]+)/.exec(page.url())?.[1] ?? '';
+
+  await page.goto(`/orgs/${orgId}/projects`);
+  await expect(page.getByRole('table', { name: 'Projects' }).or(page.getByText('No projects yet'))).toBeVisible();
+  await shot(page, 'lab-projects');
+  await page.getByRole('button', { name: 'New project' }).click();
+  await shot(page, 'lab-project-new');
+
+  await page.goto(`/orgs/${orgId}/tests`);
+  await expect(page.getByRole('table', { name: 'Consolidation tests' })).toBeVisible();
+  await shot(page, 'lab-tests');
+
+  // An analysed (or later) test shows every part of the test page.
+  await page.getByLabel('Status').selectOption('analysed');
+  await page.getByRole('table', { name: 'Consolidation tests' }).getByRole('link').first().click();
+  await expect(page.getByRole('heading', { level: 1, name: /^Test / })).toBeVisible();
+  const projectLink = page.getByRole('link', { name: /^← / });
+  const parts = page.getByRole('navigation', { name: 'Parts of the test' });
+  await shot(page, 'lab-test-setup');
+  await parts.getByRole('link', { name: 'Readings' }).click();
+  await expect(page.getByRole('table', { name: 'Readings of this test' })).toBeVisible();
+  await shot(page, 'lab-test-readings');
+  await parts.getByRole('link', { name: 'Results' }).click();
+  await expect(page.getByRole('table', { name: 'Parameters of the whole test' })).toBeVisible();
+  await shot(page, 'lab-test-results');
+  await parts.getByRole('link', { name: 'Curves' }).click();
+  await expect(page.locator('[data-testid="plotly-chart"] .main-svg').first()).toBeVisible({ timeout: 30_000 });
+  await expect(page.locator('[data-testid="plotly-chart"]:not(:has(.main-svg))')).toHaveCount(0, { timeout: 30_000 });
+  await page.waitForTimeout(500);
+  await shot(page, 'lab-test-curves');
+  await parts.getByRole('link', { name: 'Review' }).click();
+  await shot(page, 'lab-test-review');
+
+  await projectLink.click();
+  await expect(page.getByRole('heading', { name: 'Boreholes, samples and tests' })).toBeVisible();
+  await shot(page, 'lab-project');
+
+  await page.goto(`/orgs/${orgId}/review-queue`);
+  await expect(page.getByRole('heading', { level: 1 })).toBeVisible();
+  await page.waitForLoadState('networkidle');
+  await shot(page, 'lab-review-queue');
+
+  await page.goto(`/orgs/${orgId}/soil-records`);
+  await expect(page.getByRole('heading', { level: 1 })).toBeVisible();
+  await page.waitForLoadState('networkidle');
+  await shot(page, 'lab-soil-records');
+  const record = page.getByRole('table').getByRole('link').first();
+  if (await record.count()) {
+    await record.click();
+    await expect(page.getByRole('navigation', { name: 'Versions' })).toBeVisible();
+    await shot(page, 'lab-soil-record');
+  }
+
+  await page.setViewportSize({ width: 390, height: 800 });
+  await page.goto(`/orgs/${orgId}/tests`);
+  await expect(page.getByRole('table', { name: 'Consolidation tests' })).toBeVisible();
+  await shot(page, 'lab-tests-narrow');
+  await context.close();
 });
