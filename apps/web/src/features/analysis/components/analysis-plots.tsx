@@ -102,7 +102,7 @@ export function CoefficientPlots({ result }: { result: AnalysisResult }) {
   const mv = useMemo(() => coefficientTraces(loading, [{ name: 'mv', value: (i) => i.mvPerMPa, colour: PLOT_COLOURS.measured }]), [loading]);
   const k = useMemo(() => coefficientTraces(loading, [{ name: 'k', value: (i) => i.hydraulicConductivityMPerS, colour: PLOT_COLOURS.adopted }]), [loading]);
   const ca = useMemo(() => coefficientTraces(loading, [{ name: 'Cα', value: (i) => i.secondaryCompressionIndex, colour: PLOT_COLOURS.secondary }]), [loading]);
-  const layout = (title: string, logY: boolean): Partial<PlotLayout> => ({ xaxis: LOG_STRESS, yaxis: { title: { text: title }, ...(logY ? { type: 'log' as const, exponentformat: 'power' as const } : {}) }, showlegend: !logY || title.startsWith('cv'), height: 300 });
+  const layout = (title: string, logY: boolean): Partial<PlotLayout> => ({ xaxis: LOG_STRESS, yaxis: { title: { text: title }, ...(logY ? { type: 'log' as const, exponentformat: 'power' as const } : {}) }, showlegend: !logY || title.startsWith('cv'), legend: { orientation: 'h', y: -0.38 }, margin: { l: 64, r: 16, t: 24, b: 76 }, height: 320 });
   const layouts = useMemo(
     () => ({ cv: layout('cv (m²/yr)', true), mv: layout('mv (1/MPa)', false), k: layout('k (m/s)', true), ca: layout('Cα (–)', false) }),
     [],

@@ -12,7 +12,7 @@ describe('formatParameter(value, style, warning)', () => {
   });
 
   it('prints small coefficients in scientific form', () => {
-    expect(formatParameter(2.34e-10, { digits: 3, scientific: true }).text).toBe('2.34×10^-10');
+    expect(formatParameter(2.34e-10, { digits: 3, scientific: true }).text).toBe('2.34×10⁻¹⁰');
   });
 
   it.each([null, undefined, Number.NaN, Number.POSITIVE_INFINITY])('shows an em dash and the warning for %s, never NaN', (value) => {

@@ -23,7 +23,10 @@ export function formatParameter(
     return { text: MISSING_VALUE, reason: warning?.message ?? FALLBACK_REASON };
   }
   const digits = style.digits ?? 3;
-  if (style.scientific) return { text: value.toExponential(Math.max(digits - 1, 0)).replace('e', '×10^').replace('^+', '^'), reason: null };
+  if (style.scientific) {
+    const [mantissa, exponent = '0'] = value.toExponential(Math.max(digits - 1, 0)).split('e');
+    return { text: `${mantissa}×10${superscript(Number(exponent))}`, reason: null };
+  }
   return { text: value.toFixed(digits), reason: null };
 }
 
@@ -37,4 +40,11 @@ export function warningFor(
     warnings.find((w) => codes.includes(w.code) && (incrementIndex === null || w.incrementIndex === incrementIndex)) ??
     (incrementIndex === null ? null : (warnings.find((w) => w.incrementIndex === incrementIndex) ?? null))
   );
+}
+
+const SUPERSCRIPT_DIGITS = '⁰¹²³⁴⁵⁶⁷⁸⁹';
+/** −10 → ⁻¹⁰, as a parameter table prints a power of ten. */
+function superscript(exponent: number): string {
+  const digits = String(Math.abs(exponent)).replace(/\d/g, (d) => SUPERSCRIPT_DIGITS[Number(d)] ?? d);
+  return exponent < 0 ? `⁻${digits}` : digits;
 }

@@ -21,23 +21,31 @@ export function ReviewQueueTable({ orgId, items, currentUserId }: { orgId: strin
           </Link>
         ),
       }),
-      column.accessor('projectName', { header: 'Project' }),
-      column.accessor((r) => `${r.boreholeName} / ${r.sampleReference}`, { id: 'sample', header: 'Sample' }),
-      column.accessor((r) => `${r.topDepthM.toFixed(2)}–${r.bottomDepthM.toFixed(2)}`, { id: 'depth', header: 'Depth (m)' }),
-      column.accessor('technicianName', {
-        header: 'Technician',
+      column.accessor('projectName', { header: 'Project', cell: (info) => <span className="block min-w-40 whitespace-normal">{info.getValue()}</span> }),
+      column.accessor((r) => `${r.boreholeName} / ${r.sampleReference}`, {
+        id: 'sample',
+        header: 'Sample',
         cell: (info) => (
           <>
             {info.getValue()}
-            {info.row.original.technicianId === currentUserId ? <span className="ml-1 text-xs text-slate-500">(you)</span> : null}
+            <span className="block text-xs text-slate-500">{info.row.original.topDepthM.toFixed(2)}–{info.row.original.bottomDepthM.toFixed(2)} m</span>
           </>
         ),
       }),
-      column.accessor('submittedAt', { header: 'Submitted', cell: (info) => formatDateTime(info.getValue()) }),
-      column.accessor((r) => r.keyParameters.compressionIndex, { id: 'cc', header: 'Cc', cell: (info) => fixed(info.getValue(), 3) }),
-      column.accessor((r) => r.keyParameters.preconsolidationStressKpa, { id: 'sp', header: 'σ′p (kPa)', cell: (info) => fixed(info.getValue(), 0) }),
+      column.accessor('technicianName', {
+        header: 'Technician',
+        cell: (info) => (
+          <span className="block min-w-24 whitespace-normal">
+            {info.getValue()}
+            {info.row.original.technicianId === currentUserId ? <span className="ml-1 text-xs text-slate-500">(you)</span> : null}
+          </span>
+        ),
+      }),
+      column.accessor('submittedAt', { header: 'Submitted', cell: (info) => <span className="block min-w-24 whitespace-normal">{formatDateTime(info.getValue())}</span> }),
+      column.accessor((r) => r.keyParameters.compressionIndex, { id: 'cc', header: () => <span className="normal-case">Cc</span>, cell: (info) => fixed(info.getValue(), 3) }),
+      column.accessor((r) => r.keyParameters.preconsolidationStressKpa, { id: 'sp', header: () => <span className="normal-case">σ′p (kPa)</span>, cell: (info) => fixed(info.getValue(), 0) }),
       column.accessor((r) => r.keyParameters.overconsolidationRatio, { id: 'ocr', header: 'OCR', cell: (info) => fixed(info.getValue(), 2) }),
-      column.accessor((r) => r.keyParameters.sampleQuality, { id: 'quality', header: 'Quality', cell: (info) => info.getValue() ?? '—' }),
+      column.accessor((r) => r.keyParameters.sampleQuality, { id: 'quality', header: 'Quality', cell: (info) => <span className="block min-w-16 whitespace-normal">{info.getValue() ?? '—'}</span> }),
       column.accessor('warningCount', {
         header: 'Warnings',
         cell: (info) => <span className={info.getValue() > 0 ? 'font-medium text-amber-800' : 'text-slate-500'}>{info.getValue()}</span>,
