@@ -13,7 +13,7 @@ function hollCornerFactor(m: number, n: number): number {
 
 // The published table prints four decimals, so the tolerance is half a unit of
 // the fourth decimal. Sources: the first six points are printed in
-// /work/shared/domain.md; the rest are from the table of I against m and n in
+// the project domain brief (shared/domain.md); the rest are from the table of I against m and n in
 // Das, Principles of Geotechnical Engineering (Newmark/Fadum values), from memory.
 // Two recalled entries, (0.5, ∞) and (0.6, 1), disagreed in the last digit and were
 // dropped rather than adjusted: memory, not the formula, is the doubtful side there.
