@@ -1,3 +1,4 @@
+import { generateSyntheticConsolidationTest, type SyntheticConsolidationParameters } from '@porestack/geo-core';
 import type { DataSource } from 'typeorm';
 import { runAnalysis } from '../modules/analyses/analyses.service.js';
 import { AnalysisEntity } from '../modules/analyses/analysis.entity.js';
@@ -12,7 +13,6 @@ import { createVersion } from '../modules/soil-records/soil-records.service.js';
 import { ensureBucket } from '../storage/storage.js';
 import type { DemoOrganisation } from './demo-organisation.seed.js';
 import { storeReadings } from './lab-readings-store.js';
-import { syntheticIncrements, type SyntheticSoil } from './lab-synthetic-readings.js';
 
 /** A fixed id: a later run finds the project and adds nothing. */
 export const DEMO_PROJECT_ID = '5eed0000-0000-4000-8000-00000000a001';
@@ -26,10 +26,16 @@ interface DemoTest {
   description: string;
   target: Target;
   /** Chosen so the soil stiffens and drains more slowly with depth. */
-  soil: Partial<SyntheticSoil>;
+  soil: Partial<SyntheticConsolidationParameters>;
 }
 
-const BASE_SOIL: SyntheticSoil = {
+/**
+ * What every demo test shares, for geo-core's synthetic-test generator (seating, immediate
+ * compression, the rounded σ′p transition and the reading noise are its defaults). Cα is 4 % of
+ * each increment's own compression slope, so it is small on recompression and ≈ 0.018 on the
+ * virgin line; every increment is held 24 h, long enough for primary to end in all of them.
+ */
+const BASE_SOIL: Partial<SyntheticConsolidationParameters> = {
   initialHeightMm: 20,
   diameterMm: 75,
   specificGravity: 2.69,
@@ -39,8 +45,9 @@ const BASE_SOIL: SyntheticSoil = {
   swellIndex: 0.08,
   preconsolidationStressKpa: 90,
   cvM2PerYr: 2.4,
-  secondaryRatio: 0.04,
-  seatingStressKpa: 4,
+  secondaryToCompressionRatio: 0.04,
+  startingEffectiveStressKpa: 4,
+  drainage: 'double',
   stressesKpa: [12.5, 25, 50, 100, 200, 400, 800, 1600, 400, 100, 25],
 };
 
@@ -64,9 +71,10 @@ const RANK: Record<Target, number> = { draft: 0, readings_uploaded: 1, analysed:
 
 /**
  * The demo laboratory: an invented project (fictional client and site) with three boreholes
- * and a test in every status, whose readings are generated from Terzaghi's theory with the
- * parameters above; analyses are run by the service itself (no worker needed), two tests
- * are approved, one of them twice so its first version is superseded. No e-mails are sent.
+ * and a test in every status, whose readings come from geo-core's synthetic-test generator
+ * (Terzaghi's theory) with the parameters above; analyses are run by the service itself (no
+ * worker needed), two tests are approved, one of them twice so its first version is
+ * superseded. No e-mails are sent.
  * @returns how many tests were created (0 when the project was already there).
  */
 export async function seedLabDemo(dataSource: DataSource, demo: DemoOrganisation): Promise<number> {
@@ -93,8 +101,8 @@ export async function seedLabDemo(dataSource: DataSource, demo: DemoOrganisation
     }
     const ids: string[] = [];
     for (const [position, spec] of TESTS.entries()) {
-      const soil = { ...BASE_SOIL, ...spec.soil };
-      const { increments, dryMassG } = syntheticIncrements(soil);
+      // A seed of its own per test, so no two tests carry the same noise.
+      const { input, dryMassG, parameters: soil } = generateSyntheticConsolidationTest({ ...BASE_SOIL, ...spec.soil, seed: position + 1 });
       const sample = await manager.getRepository(SampleEntity).save({
         organisationId: orgId,
         boreholeId: boreholeIds.get(spec.borehole) as string,
@@ -118,7 +126,7 @@ export async function seedLabDemo(dataSource: DataSource, demo: DemoOrganisation
         initialWaterContent: null,
         wetMassG: null,
         finalWaterContent: null,
-        drainage: 'double',
+        drainage: soil.drainage,
         apparatusName: position % 2 === 0 ? 'Front-loading frame A' : 'Front-loading frame B',
         compliance: [],
         startedOn: `2026-0${1 + (position % 3)}-${String(5 + position * 2).padStart(2, '0')}`,
@@ -127,7 +135,7 @@ export async function seedLabDemo(dataSource: DataSource, demo: DemoOrganisation
       });
       ids.push(test.id);
       if (RANK[spec.target] >= 1) {
-        const uploadId = await storeReadings(manager, { orgId, testId: test.id, uploadedById: technicianId, fileName: `${test.reference}.csv` }, increments);
+        const uploadId = await storeReadings(manager, { orgId, testId: test.id, uploadedById: technicianId, fileName: `${test.reference}.csv` }, input.increments);
         await moveTest(manager, test, 'readings_uploaded', technicianId, { changes: { latestUploadId: uploadId }, details: { uploadId, seeded: true } });
       }
     }
@@ -161,7 +169,9 @@ export async function seedLabDemo(dataSource: DataSource, demo: DemoOrganisation
     await submit(testId);
     if (spec.target === 'submitted') continue;
     if (spec.target === 'changes_requested') {
-      await decide(testId, 'changes_requested', 'The 1600 kPa increment looks short of primary; check the reading times and re-run.');
+      // Every seeded increment reaches primary (no "primary not reached" warning), so the request
+      // is about what the readings do hold: the 0.02 mm bedding of the stones at the first load.
+      await decide(testId, 'changes_requested', 'Increment 1 includes about 0.02 mm of bedding of the porous stones; check its seating and re-run.');
       continue;
     }
     await decide(testId, 'approved', null);

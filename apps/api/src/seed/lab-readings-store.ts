@@ -1,21 +1,37 @@
 import { createHash } from 'node:crypto';
-import type { ConsolidationIncrementInput } from '@porestack/geo-core';
+import { READINGS_CSV_HEADER, type ConsolidationIncrementInput } from '@porestack/geo-core';
 import type { EntityManager } from 'typeorm';
 import { UploadEntity } from '../modules/uploads/upload.entity.js';
 import { bucketName, storage } from '../storage/storage.js';
-import { incrementsToCsv } from './lab-synthetic-readings.js';
+
+/** Deformation as a logger writes it, to 0.0001 mm: generated readings carry every digit of a double. */
+const roundToTenthMicron = (mm: number): number => Math.round(mm * 10_000) / 10_000;
+
+/** The increments as geo-core's canonical readings CSV (what a technician would upload). */
+function incrementsToCsv(increments: readonly ConsolidationIncrementInput[]): string {
+  const lines = [READINGS_CSV_HEADER.join(',')];
+  for (const increment of increments) {
+    for (const reading of increment.readings) lines.push(`${increment.index},${increment.stressKpa},${reading.elapsedMin},${reading.deformationMm}`);
+  }
+  return `${lines.join('\n')}\n`;
+}
 
 /**
  * Stores generated readings as if a technician had uploaded and imported the canonical CSV:
- * the file in object storage, its upload row with the SHA-256, and the readings rows.
- * Used by the demo seed and by the API tests (which need readings without the import UI).
+ * the file in object storage, its upload row with the SHA-256, and the readings rows, the
+ * deformations rounded to 0.0001 mm in both. Used by the demo seed and by the API tests
+ * (which need readings without the import UI).
  * @returns the upload id.
  */
 export async function storeReadings(
   manager: EntityManager,
   target: { orgId: string; testId: string; uploadedById: string; fileName: string },
-  increments: readonly ConsolidationIncrementInput[],
+  generated: readonly ConsolidationIncrementInput[],
 ): Promise<string> {
+  const increments = generated.map((increment) => ({
+    ...increment,
+    readings: increment.readings.map((reading) => ({ ...reading, deformationMm: roundToTenthMicron(reading.deformationMm) })),
+  }));
   const csv = Buffer.from(incrementsToCsv(increments), 'utf8');
   const uploads = manager.getRepository(UploadEntity);
   const upload = await uploads.save(

@@ -1,3 +1,4 @@
+import { generateSyntheticConsolidationTest } from '@porestack/geo-core';
 import { dataSource } from '../data-source.js';
 import { runAnalysis } from '../modules/analyses/analyses.service.js';
 import { createBorehole } from '../modules/boreholes/boreholes.service.js';
@@ -6,10 +7,14 @@ import { createProject } from '../modules/projects/projects.service.js';
 import { submitTest } from '../modules/reviews/reviews.service.js';
 import { createSample } from '../modules/samples/samples.service.js';
 import { storeReadings } from '../seed/lab-readings-store.js';
-import { syntheticIncrements, type SyntheticSoil } from '../seed/lab-synthetic-readings.js';
 
-/** A soft clay with known parameters: what the analysis should give back. */
-export const KNOWN_SOIL: SyntheticSoil = {
+/**
+ * A soft clay with known parameters, from geo-core's synthetic-test generator: what the
+ * analysis should give back. Cα is 4 % of each increment's own slope; seating, immediate
+ * compression, the rounded σ′p transition and the seeded reading noise are the generator's.
+ */
+export const KNOWN_TEST = generateSyntheticConsolidationTest({
+  seed: 11,
   initialHeightMm: 20,
   diameterMm: 75,
   specificGravity: 2.68,
@@ -19,10 +24,12 @@ export const KNOWN_SOIL: SyntheticSoil = {
   swellIndex: 0.07,
   preconsolidationStressKpa: 120,
   cvM2PerYr: 2,
-  secondaryRatio: 0.04,
-  seatingStressKpa: 5,
+  secondaryToCompressionRatio: 0.04,
+  startingEffectiveStressKpa: 5,
+  drainage: 'double',
   stressesKpa: [12.5, 25, 50, 100, 200, 400, 800, 1600, 400, 100, 25],
-};
+});
+export const KNOWN_SOIL = KNOWN_TEST.parameters;
 
 let counter = 0;
 
@@ -39,7 +46,7 @@ export async function draftTest(orgId: string, technicianId: string, options: { 
   counter += 1;
   const tag = `${Date.now().toString(36)}-${counter}`;
   const actor = { id: technicianId };
-  const { dryMassG } = syntheticIncrements(KNOWN_SOIL);
+  const { dryMassG } = KNOWN_TEST;
   const project = await createProject(orgId, { name: `Fixture project ${tag}`, reference: `FX-${tag}`, clientName: 'Fixture client', siteName: '', designerIds: options.designerIds ?? [] }, actor);
   const borehole = await createBorehole(orgId, project.id, { name: 'BH1', groundLevelMOd: 4.2, waterTableDepthM: 1.5 }, actor);
   const sample = await createSample(orgId, borehole.id, { reference: 'U1', topDepthM: 6, bottomDepthM: 6.45, description: 'Soft grey clay', bulkUnitWeightKnPerM3: 17.5, inSituStressKpa: null }, actor);
@@ -48,7 +55,7 @@ export async function draftTest(orgId: string, technicianId: string, options: { 
     sample.id,
     {
       reference: `T-${tag}`,
-      specimen: { initialHeightMm: KNOWN_SOIL.initialHeightMm, diameterMm: KNOWN_SOIL.diameterMm, specificGravity: KNOWN_SOIL.specificGravity, dryMassG, drainage: 'double' },
+      specimen: { initialHeightMm: KNOWN_SOIL.initialHeightMm, diameterMm: KNOWN_SOIL.diameterMm, specificGravity: KNOWN_SOIL.specificGravity, dryMassG, drainage: KNOWN_SOIL.drainage },
       apparatusName: 'Frame 2',
       compliance: [],
       startedOn: '2026-03-02',
@@ -61,9 +68,8 @@ export async function draftTest(orgId: string, technicianId: string, options: { 
 
 /** Stores the known soil's readings as an imported upload and calls markReadingsUploaded. */
 export async function uploadKnownReadings(orgId: string, testId: string, uploaderId: string): Promise<{ uploadId: string; analysisJobId: string }> {
-  const { increments } = syntheticIncrements(KNOWN_SOIL);
   return dataSource.transaction(async (manager) => {
-    const uploadId = await storeReadings(manager, { orgId, testId, uploadedById: uploaderId, fileName: 'readings.csv' }, increments);
+    const uploadId = await storeReadings(manager, { orgId, testId, uploadedById: uploaderId, fileName: 'readings.csv' }, KNOWN_TEST.input.increments);
     const { analysisJobId } = await markReadingsUploaded(orgId, testId, { id: uploaderId }, { uploadId, manager });
     return { uploadId, analysisJobId };
   });

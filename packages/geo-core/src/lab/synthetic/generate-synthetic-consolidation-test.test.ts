@@ -20,6 +20,12 @@ describe('generateSyntheticConsolidationTest(overrides?)', () => {
     expect(analyzeConsolidationTest(test.input).initialVoidRatio).toBeCloseTo(1.1, 12);
   });
 
+  it('gives the dry mass beside the input: Hs·Gs·ρw·A = (20/2.1) × 2.7 × 0.001 × π·63.5²/4 = 81.435 g (hand calculation)', () => {
+    const test = generateSyntheticConsolidationTest();
+    expect(test.dryMassG).toBeCloseTo(81.4351, 4);
+    expect(test.input.specimen.dryMassG).toBe(test.dryMassG);
+  });
+
   it('ends every first-loading increment on the chosen curve (less the seating, 0.02 mm over Hs = 20/2.1 mm)', () => {
     const test = generateSyntheticConsolidationTest({ noiseMm: 0 });
     const seatingVoidRatio = 0.02 / test.heightOfSolidsMm;

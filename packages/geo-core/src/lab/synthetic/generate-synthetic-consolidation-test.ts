@@ -16,6 +16,8 @@ export interface SyntheticIncrementTruth {
 export interface SyntheticConsolidationTest {
   readonly input: ConsolidationTestInput;
   readonly heightOfSolidsMm: number;
+  /** The specimen's dry mass, g (also in input.specimen, where the type leaves it optional). */
+  readonly dryMassG: number;
   readonly increments: readonly SyntheticIncrementTruth[];
   readonly parameters: SyntheticConsolidationParameters;
 }
@@ -37,7 +39,7 @@ export interface SyntheticConsolidationTest {
  * primary part is solved for what the immediate and secondary parts leave.
  *
  * @param overrides parameters that differ from DEFAULT_SYNTHETIC_CONSOLIDATION_PARAMETERS.
- * @returns the input for analyzeConsolidationTest, the height of solids and each increment's truth.
+ * @returns the input for analyzeConsolidationTest, the height of solids, the dry mass and each increment's truth.
  * @throws RangeError when the σ′p transition starts at or below the starting stress (from firstLoadingVoidRatio).
  * @example generateSyntheticConsolidationTest({ seed: 7 }).input.increments.length // 15
  */
@@ -111,6 +113,7 @@ export function generateSyntheticConsolidationTest(overrides: Partial<SyntheticC
       increments,
     },
     heightOfSolidsMm,
+    dryMassG,
     increments: truths,
     parameters: p,
   };

@@ -9,7 +9,7 @@ import { analyseTestJob } from '../../../jobs/analyse-test.job.js';
 import { createBoss, stopJobQueue } from '../../../jobs/boss.js';
 import { registerJobs } from '../../../jobs/register-jobs.js';
 import { createMember, signedInBrowser, signUpAdmin, type Browser } from '../../../testing/browser.js';
-import { draftTest, KNOWN_SOIL, submittedTest, uploadKnownReadings } from '../../../testing/lab-fixtures.js';
+import { draftTest, KNOWN_SOIL, KNOWN_TEST, submittedTest, uploadKnownReadings } from '../../../testing/lab-fixtures.js';
 import { linkIn, waitForMail } from '../../../testing/mail-inbox.js';
 
 const app = createApp();
@@ -85,7 +85,7 @@ describe('lab workflow: readings → analysis → review → soil record version
     // σ′v = 18 × 6.25 − 9.81 × (6.25 − 1.5) = 112.5 − 46.5975 = 65.9025 kPa
     expect(sample.body.inSituStressKpa).toBeCloseTo(65.9025, 4);
     expect(sample.body.inSituStressSource).toBe('estimated');
-    const { dryMassG } = await import('../../../seed/lab-synthetic-readings.js').then((m) => m.syntheticIncrements(KNOWN_SOIL));
+    const { dryMassG } = KNOWN_TEST;
     const test = await tech
       .post(`/api/orgs/${orgId}/samples/${sample.body.id}/tests`, {
         reference: 'QLC-OED-1',
