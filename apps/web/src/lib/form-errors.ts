@@ -35,7 +35,8 @@ export function formValues(form: HTMLFormElement): Record<string, string> {
   return values;
 }
 
-type SafeParser<T> = {
+/** Any schema with zod's safeParse, such as the shared ones in @porestack/types. */
+export type SafeParser<T> = {
   safeParse: (value: unknown) => { success: true; data: T } | { success: false; error: ValidationFailure };
 };
 

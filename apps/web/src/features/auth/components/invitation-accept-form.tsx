@@ -1,9 +1,9 @@
 import { InvitationAcceptSchema, ROLE_LABELS, type InvitationPreview, type Session } from '@porestack/types';
-import { useState, type FormEvent } from 'react';
 import { Button } from '../../../components/button';
 import { ErrorMessage } from '../../../components/error-message';
 import { TextField } from '../../../components/text-field';
-import { fieldErrorsFromApi, focusFirstInvalid, formValues, validate, type FieldErrors } from '../../../lib/form-errors';
+import type { FieldErrors } from '../../../lib/form-errors';
+import { useSchemaForm } from '../../../lib/use-schema-form';
 import { useAcceptInvitation } from '../api/accept-invitation';
 
 type InvitationAcceptFormProps = {
@@ -15,26 +15,19 @@ type InvitationAcceptFormProps = {
 /** A new person chooses a name and password; someone with an account confirms with their password. */
 export function InvitationAcceptForm({ token, invitation, onAccepted }: InvitationAcceptFormProps) {
   const accept = useAcceptInvitation(token);
-  const [errors, setErrors] = useState<FieldErrors>({});
-  const fieldErrors = { ...fieldErrorsFromApi(accept.error), ...errors };
   const isNewAccount = !invitation.accountExists;
-
-  const onSubmit = (event: FormEvent<HTMLFormElement>) => {
-    event.preventDefault();
-    const values = formValues(event.currentTarget);
-    const clientErrors: FieldErrors = {};
-    if (isNewAccount && (values['name'] ?? '').trim() === '') clientErrors['name'] = 'Enter your name.';
-    if (isNewAccount && (values['password'] ?? '').length < 10) clientErrors['password'] = 'Use a password of at least 10 characters.';
-    const result = validate(InvitationAcceptSchema, isNewAccount ? values : { password: values['password'] });
-    if (!result.ok || Object.keys(clientErrors).length > 0) {
-      const allErrors = { ...(result.ok ? {} : result.errors), ...clientErrors };
-      setErrors(allErrors);
-      focusFirstInvalid(event.currentTarget, allErrors);
-      return;
-    }
-    setErrors({});
-    accept.mutate(result.data, { onSuccess: onAccepted });
-  };
+  const { errors, onSubmit } = useSchemaForm(InvitationAcceptSchema, {
+    toValues: (values) => (isNewAccount ? values : { password: values['password'] }),
+    // The shared schema also fits people who already have an account, so a new account's rules are added here.
+    check: (values, schemaErrors) => {
+      const newAccountErrors: FieldErrors = {};
+      if (isNewAccount && (values['name'] ?? '').trim() === '') newAccountErrors['name'] = 'Enter your name.';
+      if (isNewAccount && (values['password'] ?? '').length < 10) newAccountErrors['password'] = 'Use a password of at least 10 characters.';
+      return { ...schemaErrors, ...newAccountErrors };
+    },
+    serverError: accept.error,
+    onValid: (data) => accept.mutate(data, { onSuccess: onAccepted }),
+  });
 
   return (
     <form noValidate onSubmit={onSubmit} className="flex flex-col gap-4" aria-label="Accept the invitation">
@@ -50,7 +43,7 @@ export function InvitationAcceptForm({ token, invitation, onAccepted }: Invitati
       </dl>
       {accept.error ? <ErrorMessage error={accept.error} hideIssuesFor={['name', 'password']} /> : null}
       {isNewAccount ? (
-        <TextField label="Your name" name="name" autoComplete="name" autoFocus error={fieldErrors['name']} />
+        <TextField label="Your name" name="name" autoComplete="name" autoFocus error={errors['name']} />
       ) : null}
       <TextField
         label={isNewAccount ? 'Choose a password' : 'Your Porestack password'}
@@ -59,7 +52,7 @@ export function InvitationAcceptForm({ token, invitation, onAccepted }: Invitati
         autoComplete={isNewAccount ? 'new-password' : 'current-password'}
         autoFocus={!isNewAccount}
         hint={isNewAccount ? 'At least 10 characters.' : 'You already have an account with this address; confirm it is you.'}
-        error={fieldErrors['password']}
+        error={errors['password']}
       />
       <Button type="submit" pending={accept.isPending}>
         {accept.isPending ? 'Joining…' : `Join ${invitation.organisationName}`}

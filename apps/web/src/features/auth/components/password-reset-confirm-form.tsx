@@ -1,10 +1,9 @@
 import { PasswordResetConfirmSchema } from '@porestack/types';
-import { useState, type FormEvent } from 'react';
 import { Alert } from '../../../components/alert';
 import { Button } from '../../../components/button';
 import { ErrorMessage } from '../../../components/error-message';
 import { TextField } from '../../../components/text-field';
-import { fieldErrorsFromApi, focusFirstInvalid, formValues, validate, type FieldErrors } from '../../../lib/form-errors';
+import { useSchemaForm } from '../../../lib/use-schema-form';
 import { useConfirmPasswordReset } from '../api/confirm-password-reset';
 
 type PasswordResetConfirmFormProps = {
@@ -14,32 +13,21 @@ type PasswordResetConfirmFormProps = {
 
 export function PasswordResetConfirmForm({ token, onReset }: PasswordResetConfirmFormProps) {
   const confirm = useConfirmPasswordReset();
-  const [errors, setErrors] = useState<FieldErrors>({});
-  const fieldErrors = { ...fieldErrorsFromApi(confirm.error), ...errors };
-
-  const onSubmit = (event: FormEvent<HTMLFormElement>) => {
-    event.preventDefault();
-    const values = formValues(event.currentTarget);
-    if (values['password'] !== values['passwordAgain']) {
-      const mismatch = { passwordAgain: 'The two passwords differ. Type the same password in both fields.' };
-      setErrors(mismatch);
-      focusFirstInvalid(event.currentTarget, mismatch);
-      return;
-    }
-    const result = validate(PasswordResetConfirmSchema, { token, password: values['password'] });
-    if (!result.ok) {
-      setErrors(result.errors);
-      focusFirstInvalid(event.currentTarget, result.errors);
-      return;
-    }
-    setErrors({});
-    confirm.mutate(result.data, { onSuccess: onReset });
-  };
+  const { errors, onSubmit } = useSchemaForm(PasswordResetConfirmSchema, {
+    toValues: (values) => ({ token, password: values['password'] }),
+    // Differing passwords get this message alone: both must be typed again anyway, whatever the schema says of the first.
+    check: (values, schemaErrors) =>
+      values['password'] === values['passwordAgain']
+        ? schemaErrors
+        : { passwordAgain: 'The two passwords differ. Type the same password in both fields.' },
+    serverError: confirm.error,
+    onValid: (data) => confirm.mutate(data, { onSuccess: onReset }),
+  });
 
   return (
     <form noValidate onSubmit={onSubmit} className="flex flex-col gap-4" aria-label="Choose a new password">
       {confirm.error ? <ErrorMessage error={confirm.error} hideIssuesFor={['password']} /> : null}
-      {fieldErrors['token'] ? <Alert tone="error">{fieldErrors['token']}</Alert> : null}
+      {errors['token'] ? <Alert tone="error">{errors['token']}</Alert> : null}
       <TextField
         label="New password"
         name="password"
@@ -47,14 +35,14 @@ export function PasswordResetConfirmForm({ token, onReset }: PasswordResetConfir
         autoComplete="new-password"
         autoFocus
         hint="At least 10 characters."
-        error={fieldErrors['password']}
+        error={errors['password']}
       />
       <TextField
         label="New password, again"
         name="passwordAgain"
         type="password"
         autoComplete="new-password"
-        error={fieldErrors['passwordAgain']}
+        error={errors['passwordAgain']}
       />
       <Button type="submit" pending={confirm.isPending}>
         {confirm.isPending ? 'Saving…' : 'Save new password'}

@@ -1,29 +1,19 @@
 import { PasswordResetRequestSchema } from '@porestack/types';
-import { useState, type FormEvent } from 'react';
+import { useState } from 'react';
 import { Alert } from '../../../components/alert';
 import { Button } from '../../../components/button';
 import { ErrorMessage } from '../../../components/error-message';
 import { TextField } from '../../../components/text-field';
-import { fieldErrorsFromApi, focusFirstInvalid, formValues, validate, type FieldErrors } from '../../../lib/form-errors';
+import { useSchemaForm } from '../../../lib/use-schema-form';
 import { useRequestPasswordReset } from '../api/request-password-reset';
 
 export function PasswordResetRequestForm() {
   const request = useRequestPasswordReset();
-  const [errors, setErrors] = useState<FieldErrors>({});
   const [sentTo, setSentTo] = useState<string | null>(null);
-  const fieldErrors = { ...fieldErrorsFromApi(request.error), ...errors };
-
-  const onSubmit = (event: FormEvent<HTMLFormElement>) => {
-    event.preventDefault();
-    const result = validate(PasswordResetRequestSchema, formValues(event.currentTarget));
-    if (!result.ok) {
-      setErrors(result.errors);
-      focusFirstInvalid(event.currentTarget, result.errors);
-      return;
-    }
-    setErrors({});
-    request.mutate(result.data, { onSuccess: () => setSentTo(result.data.email) });
-  };
+  const { errors, onSubmit } = useSchemaForm(PasswordResetRequestSchema, {
+    serverError: request.error,
+    onValid: (data) => request.mutate(data, { onSuccess: () => setSentTo(data.email) }),
+  });
 
   if (sentTo) {
     return (
@@ -43,7 +33,7 @@ export function PasswordResetRequestForm() {
         type="email"
         autoComplete="email"
         autoFocus
-        error={fieldErrors['email']}
+        error={errors['email']}
       />
       <Button type="submit" pending={request.isPending}>
         {request.isPending ? 'Sending…' : 'Send reset link'}

@@ -1,11 +1,10 @@
 import { SignInSchema, type Session } from '@porestack/types';
-import { useState, type FormEvent } from 'react';
 import { Link } from 'react-router-dom';
 import { Button } from '../../../components/button';
 import { ErrorMessage } from '../../../components/error-message';
 import { TextField } from '../../../components/text-field';
 import { paths } from '../../../config/paths';
-import { fieldErrorsFromApi, focusFirstInvalid, formValues, validate, type FieldErrors } from '../../../lib/form-errors';
+import { useSchemaForm } from '../../../lib/use-schema-form';
 import { useSignIn } from '../api/sign-in';
 
 type SignInFormProps = {
@@ -16,20 +15,10 @@ type SignInFormProps = {
 
 export function SignInForm({ onSignedIn, defaultEmail }: SignInFormProps) {
   const signIn = useSignIn();
-  const [errors, setErrors] = useState<FieldErrors>({});
-  const fieldErrors = { ...fieldErrorsFromApi(signIn.error), ...errors };
-
-  const onSubmit = (event: FormEvent<HTMLFormElement>) => {
-    event.preventDefault();
-    const result = validate(SignInSchema, formValues(event.currentTarget));
-    if (!result.ok) {
-      setErrors(result.errors);
-      focusFirstInvalid(event.currentTarget, result.errors);
-      return;
-    }
-    setErrors({});
-    signIn.mutate(result.data, { onSuccess: onSignedIn });
-  };
+  const { errors, onSubmit } = useSchemaForm(SignInSchema, {
+    serverError: signIn.error,
+    onValid: (data) => signIn.mutate(data, { onSuccess: onSignedIn }),
+  });
 
   return (
     <form noValidate onSubmit={onSubmit} className="flex flex-col gap-4" aria-label="Sign in">
@@ -41,14 +30,14 @@ export function SignInForm({ onSignedIn, defaultEmail }: SignInFormProps) {
         autoComplete="username"
         autoFocus
         defaultValue={defaultEmail}
-        error={fieldErrors['email']}
+        error={errors['email']}
       />
       <TextField
         label="Password"
         name="password"
         type="password"
         autoComplete="current-password"
-        error={fieldErrors['password']}
+        error={errors['password']}
         hint={
           <Link to={paths.forgotPassword.to()} className="text-accent-700 underline-offset-2 hover:underline">
             Forgotten your password?

@@ -1,49 +1,38 @@
 import { SignUpSchema, type Session } from '@porestack/types';
-import { useState, type FormEvent } from 'react';
 import { Button } from '../../../components/button';
 import { ErrorMessage } from '../../../components/error-message';
 import { TextField } from '../../../components/text-field';
-import { fieldErrorsFromApi, focusFirstInvalid, formValues, validate, type FieldErrors } from '../../../lib/form-errors';
+import { useSchemaForm } from '../../../lib/use-schema-form';
 import { useSignUp } from '../api/sign-up';
 
 const FIELDS = ['name', 'email', 'password', 'organisationName'];
 
 export function SignUpForm({ onSignedUp }: { onSignedUp: (session: Session) => void }) {
   const signUp = useSignUp();
-  const [errors, setErrors] = useState<FieldErrors>({});
-  const fieldErrors = { ...fieldErrorsFromApi(signUp.error), ...errors };
-
-  const onSubmit = (event: FormEvent<HTMLFormElement>) => {
-    event.preventDefault();
-    const result = validate(SignUpSchema, formValues(event.currentTarget));
-    if (!result.ok) {
-      setErrors(result.errors);
-      focusFirstInvalid(event.currentTarget, result.errors);
-      return;
-    }
-    setErrors({});
-    signUp.mutate(result.data, { onSuccess: onSignedUp });
-  };
+  const { errors, onSubmit } = useSchemaForm(SignUpSchema, {
+    serverError: signUp.error,
+    onValid: (data) => signUp.mutate(data, { onSuccess: onSignedUp }),
+  });
 
   return (
     <form noValidate onSubmit={onSubmit} className="flex flex-col gap-4" aria-label="Create an account">
       {signUp.error ? <ErrorMessage error={signUp.error} hideIssuesFor={FIELDS} /> : null}
-      <TextField label="Your name" name="name" autoComplete="name" autoFocus error={fieldErrors['name']} />
-      <TextField label="E-mail address" name="email" type="email" autoComplete="email" error={fieldErrors['email']} />
+      <TextField label="Your name" name="name" autoComplete="name" autoFocus error={errors['name']} />
+      <TextField label="E-mail address" name="email" type="email" autoComplete="email" error={errors['email']} />
       <TextField
         label="Password"
         name="password"
         type="password"
         autoComplete="new-password"
         hint="At least 10 characters. A short sentence is easier to remember than symbols."
-        error={fieldErrors['password']}
+        error={errors['password']}
       />
       <TextField
         label="Organisation name"
         name="organisationName"
         autoComplete="organization"
         hint="Your laboratory or firm. You become its administrator and can invite colleagues."
-        error={fieldErrors['organisationName']}
+        error={errors['organisationName']}
       />
       <Button type="submit" pending={signUp.isPending}>
         {signUp.isPending ? 'Creating your account…' : 'Create account'}

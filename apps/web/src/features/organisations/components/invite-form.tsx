@@ -5,42 +5,37 @@ import { Button } from '../../../components/button';
 import { ErrorMessage } from '../../../components/error-message';
 import { Select } from '../../../components/select';
 import { TextField } from '../../../components/text-field';
-import { fieldErrorsFromApi, focusFirstInvalid, formValues, validate, type FieldErrors } from '../../../lib/form-errors';
+import { useSchemaForm } from '../../../lib/use-schema-form';
 import { useCreateInvitation } from '../api/create-invitation';
 import { ROLE_OPTIONS } from './role-options';
 
 export function InviteForm({ orgId }: { orgId: string }) {
   const create = useCreateInvitation(orgId);
-  const [errors, setErrors] = useState<FieldErrors>({});
   const [sentTo, setSentTo] = useState<string | null>(null);
   const emailRef = useRef<HTMLInputElement>(null);
-  const fieldErrors = { ...fieldErrorsFromApi(create.error), ...errors };
+  const { errors, onSubmit: submit } = useSchemaForm(InvitationCreateSchema, {
+    serverError: create.error,
+    onValid: (data, form) =>
+      create.mutate(data, {
+        onSuccess: (invitation) => {
+          setSentTo(invitation.email);
+          form.reset();
+          emailRef.current?.focus();
+        },
+      }),
+  });
 
+  // The last confirmation goes as soon as another invitation is sent, valid or not.
   const onSubmit = (event: FormEvent<HTMLFormElement>) => {
-    event.preventDefault();
-    const form = event.currentTarget;
     setSentTo(null);
-    const result = validate(InvitationCreateSchema, formValues(form));
-    if (!result.ok) {
-      setErrors(result.errors);
-      focusFirstInvalid(event.currentTarget, result.errors);
-      return;
-    }
-    setErrors({});
-    create.mutate(result.data, {
-      onSuccess: (invitation) => {
-        setSentTo(invitation.email);
-        form.reset();
-        emailRef.current?.focus();
-      },
-    });
+    submit(event);
   };
 
   return (
     <form noValidate onSubmit={onSubmit} className="flex flex-col gap-4" aria-label="Invite a colleague">
       <div className="grid gap-4 sm:grid-cols-[minmax(0,1fr)_12rem_auto] sm:items-start">
-        <TextField ref={emailRef} label="E-mail address" name="email" type="email" autoComplete="off" error={fieldErrors['email']} />
-        <Select label="Role" name="role" options={ROLE_OPTIONS} defaultValue="technician" error={fieldErrors['role']} />
+        <TextField ref={emailRef} label="E-mail address" name="email" type="email" autoComplete="off" error={errors['email']} />
+        <Select label="Role" name="role" options={ROLE_OPTIONS} defaultValue="technician" error={errors['role']} />
         <Button type="submit" pending={create.isPending} className="sm:mt-6">
           {create.isPending ? 'Sending…' : 'Send invitation'}
         </Button>

@@ -1,38 +1,29 @@
 import { ProjectCreateSchema, type ProjectDetail } from '@porestack/types';
-import { useState, type FormEvent } from 'react';
+import { useState } from 'react';
 import { Button } from '../../../components/button';
 import { ErrorMessage } from '../../../components/error-message';
 import { TextField } from '../../../components/text-field';
-import { fieldErrorsFromApi, focusFirstInvalid, formValues, validate, type FieldErrors } from '../../../lib/form-errors';
+import { useSchemaForm } from '../../../lib/use-schema-form';
 import { useCreateProject } from '../api/create-project';
 import { DesignerPicker } from './designer-picker';
 
 export function ProjectCreateForm({ orgId, onCreated, onCancel }: { orgId: string; onCreated: (project: ProjectDetail) => void; onCancel: () => void }) {
   const create = useCreateProject(orgId);
-  const [errors, setErrors] = useState<FieldErrors>({});
   const [designerIds, setDesignerIds] = useState<string[]>([]);
-  const shown = { ...fieldErrorsFromApi(create.error), ...errors };
-
-  const onSubmit = (event: FormEvent<HTMLFormElement>) => {
-    event.preventDefault();
-    const result = validate(ProjectCreateSchema, { ...formValues(event.currentTarget), designerIds });
-    if (!result.ok) {
-      setErrors(result.errors);
-      focusFirstInvalid(event.currentTarget, result.errors);
-      return;
-    }
-    setErrors({});
-    create.mutate(result.data, { onSuccess: onCreated });
-  };
+  const { errors, onSubmit } = useSchemaForm(ProjectCreateSchema, {
+    toValues: (values) => ({ ...values, designerIds }),
+    serverError: create.error,
+    onValid: (project) => create.mutate(project, { onSuccess: onCreated }),
+  });
 
   return (
     <form noValidate onSubmit={onSubmit} aria-label="New project" className="grid gap-4 sm:grid-cols-2">
-      <TextField label="Project name" name="name" autoFocus error={shown['name']} />
-      <TextField label="Reference" name="reference" hint="Your job number, e.g. PS-2031" error={shown['reference']} />
-      <TextField label="Client" name="clientName" error={shown['clientName']} />
-      <TextField label="Site" name="siteName" error={shown['siteName']} />
+      <TextField label="Project name" name="name" autoFocus error={errors['name']} />
+      <TextField label="Reference" name="reference" hint="Your job number, e.g. PS-2031" error={errors['reference']} />
+      <TextField label="Client" name="clientName" error={errors['clientName']} />
+      <TextField label="Site" name="siteName" error={errors['siteName']} />
       <div className="sm:col-span-2">
-        <DesignerPicker orgId={orgId} value={designerIds} onChange={setDesignerIds} error={shown['designerIds']} />
+        <DesignerPicker orgId={orgId} value={designerIds} onChange={setDesignerIds} error={errors['designerIds']} />
       </div>
       {create.error ? (
         <div className="sm:col-span-2">

@@ -1,39 +1,30 @@
 import { ProjectUpdateSchema, type ProjectDetail } from '@porestack/types';
-import { useState, type FormEvent } from 'react';
+import { useState } from 'react';
 import { Button } from '../../../components/button';
 import { ErrorMessage } from '../../../components/error-message';
 import { TextField } from '../../../components/text-field';
-import { fieldErrorsFromApi, focusFirstInvalid, formValues, validate, type FieldErrors } from '../../../lib/form-errors';
+import { useSchemaForm } from '../../../lib/use-schema-form';
 import { useUpdateProject } from '../api/update-project';
 import { DesignerPicker } from './designer-picker';
 
 /** The project's name, reference, client, site and designers, as a lab manager keeps them. */
 export function ProjectEditForm({ orgId, project, onDone }: { orgId: string; project: ProjectDetail; onDone: () => void }) {
   const update = useUpdateProject(orgId, project.id);
-  const [errors, setErrors] = useState<FieldErrors>({});
   const [designerIds, setDesignerIds] = useState<string[]>(project.designers.map((d) => d.userId));
-  const shown = { ...fieldErrorsFromApi(update.error), ...errors };
-
-  const onSubmit = (event: FormEvent<HTMLFormElement>) => {
-    event.preventDefault();
-    const result = validate(ProjectUpdateSchema, { ...formValues(event.currentTarget), designerIds });
-    if (!result.ok) {
-      setErrors(result.errors);
-      focusFirstInvalid(event.currentTarget, result.errors);
-      return;
-    }
-    setErrors({});
-    update.mutate(result.data, { onSuccess: onDone });
-  };
+  const { errors, onSubmit } = useSchemaForm(ProjectUpdateSchema, {
+    toValues: (values) => ({ ...values, designerIds }),
+    serverError: update.error,
+    onValid: (changes) => update.mutate(changes, { onSuccess: onDone }),
+  });
 
   return (
     <form noValidate onSubmit={onSubmit} aria-label="Edit project" className="grid gap-4 sm:grid-cols-2">
-      <TextField label="Project name" name="name" defaultValue={project.name} autoFocus error={shown['name']} />
-      <TextField label="Reference" name="reference" defaultValue={project.reference} error={shown['reference']} />
-      <TextField label="Client" name="clientName" defaultValue={project.clientName} error={shown['clientName']} />
-      <TextField label="Site" name="siteName" defaultValue={project.siteName} error={shown['siteName']} />
+      <TextField label="Project name" name="name" defaultValue={project.name} autoFocus error={errors['name']} />
+      <TextField label="Reference" name="reference" defaultValue={project.reference} error={errors['reference']} />
+      <TextField label="Client" name="clientName" defaultValue={project.clientName} error={errors['clientName']} />
+      <TextField label="Site" name="siteName" defaultValue={project.siteName} error={errors['siteName']} />
       <div className="sm:col-span-2">
-        <DesignerPicker orgId={orgId} value={designerIds} onChange={setDesignerIds} error={shown['designerIds']} />
+        <DesignerPicker orgId={orgId} value={designerIds} onChange={setDesignerIds} error={errors['designerIds']} />
       </div>
       {update.error ? (
         <div className="sm:col-span-2">

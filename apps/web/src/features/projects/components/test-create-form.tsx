@@ -1,11 +1,10 @@
 import { TestCreateSchema, type TestDetail } from '@porestack/types';
-import { useState, type FormEvent } from 'react';
 import { Button } from '../../../components/button';
 import { ErrorMessage } from '../../../components/error-message';
 import { Select } from '../../../components/select';
 import { TextField } from '../../../components/text-field';
 import { numberOrUndefined } from '../../../lib/form-numbers';
-import { fieldErrorsFromApi, focusFirstInvalid, formValues, validate, type FieldErrors } from '../../../lib/form-errors';
+import { useSchemaForm } from '../../../lib/use-schema-form';
 import { useCreateTest } from '../api/create-test';
 
 const DRAINAGE_OPTIONS = [
@@ -16,13 +15,8 @@ const DRAINAGE_OPTIONS = [
 /** Starts a test with the ring most labs use (75 mm × 20 mm) and a typical Gs; all can be changed later. */
 export function TestCreateForm({ orgId, sampleId, sampleReference, onCreated, onCancel }: { orgId: string; sampleId: string; sampleReference: string; onCreated: (test: TestDetail) => void; onCancel: () => void }) {
   const create = useCreateTest(orgId, sampleId);
-  const [errors, setErrors] = useState<FieldErrors>({});
-  const shown = { ...fieldErrorsFromApi(create.error), ...errors };
-
-  const onSubmit = (event: FormEvent<HTMLFormElement>) => {
-    event.preventDefault();
-    const values = formValues(event.currentTarget);
-    const result = validate(TestCreateSchema, {
+  const { errors, onSubmit } = useSchemaForm(TestCreateSchema, {
+    toValues: (values) => ({
       reference: values['reference'],
       apparatusName: values['apparatusName'],
       specimen: {
@@ -31,22 +25,17 @@ export function TestCreateForm({ orgId, sampleId, sampleReference, onCreated, on
         specificGravity: numberOrUndefined(values['specificGravity']),
         drainage: values['drainage'],
       },
-    });
-    if (!result.ok) {
-      setErrors(result.errors);
-      focusFirstInvalid(event.currentTarget, result.errors);
-      return;
-    }
-    setErrors({});
-    create.mutate(result.data, { onSuccess: onCreated });
-  };
+    }),
+    serverError: create.error,
+    onValid: (test) => create.mutate(test, { onSuccess: onCreated }),
+  });
 
   return (
     <form noValidate onSubmit={onSubmit} aria-label={`New test on ${sampleReference}`} className="grid gap-4 sm:grid-cols-3">
-      <TextField label="Test reference" name="reference" autoFocus defaultValue={`${sampleReference}-OED`} error={shown['reference']} />
-      <TextField label="Apparatus" name="apparatusName" hint="Frame or cell name" error={shown['apparatusName']} />
+      <TextField label="Test reference" name="reference" autoFocus defaultValue={`${sampleReference}-OED`} error={errors['reference']} />
+      <TextField label="Apparatus" name="apparatusName" hint="Frame or cell name" error={errors['apparatusName']} />
       <Select label="Drainage" name="drainage" options={DRAINAGE_OPTIONS} defaultValue="double" />
-      <TextField label="Ring height H0 (mm)" name="initialHeightMm" inputMode="decimal" defaultValue="20" error={shown['specimen']} />
+      <TextField label="Ring height H0 (mm)" name="initialHeightMm" inputMode="decimal" defaultValue="20" error={errors['specimen']} />
       <TextField label="Ring diameter (mm)" name="diameterMm" inputMode="decimal" defaultValue="75" />
       <TextField label="Specific gravity Gs" name="specificGravity" inputMode="decimal" defaultValue="2.70" />
       {create.error ? <div className="sm:col-span-3"><ErrorMessage error={create.error} hideIssuesFor={['reference']} /></div> : null}
