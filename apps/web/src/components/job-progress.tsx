@@ -14,7 +14,8 @@ export function JobProgress({ job, what }: { job: JobRun; what: string }) {
   if (job.state === 'failed') {
     return (
       <Alert tone="error" title={`${what} failed`}>
-        {job.message ?? 'The job stopped without saying why.'} Fix what it names and try again; retrying is safe.
+        {/* The job's own message already says what to fix; only a silent failure needs advice. */}
+        {job.message ?? 'The job stopped without saying why. Try again; nothing from the failed attempt was kept.'}
       </Alert>
     );
   }

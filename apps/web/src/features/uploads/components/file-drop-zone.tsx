@@ -43,7 +43,7 @@ export function FileDropZone({ disabled, onFile }: { disabled: boolean; onFile: 
           if (input.current) input.current.value = '';
         }}
       />
-      <p className="text-xs text-slate-500">Up to 50 MB. The original file is kept unchanged and can be downloaded again.</p>
+      <p className="text-xs text-slate-500">Up to 40 MB. The original file is kept unchanged and can be downloaded again.</p>
     </div>
   );
 }
