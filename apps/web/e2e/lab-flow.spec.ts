@@ -60,7 +60,7 @@ test('a technician uploads, maps, overrides a pick and submits; a lab manager ap
   test.setTimeout(180_000);
   const manager = await signedIn(browser, MANAGER);
   const orgId = manager.orgId;
-  const projectName = `Harrowgate Embankment ${unique}`;
+  const projectName = `Fennick Ridge Embankment ${unique}`;
   await manager.page.goto(`/orgs/${orgId}/projects`);
   await manager.page.getByRole('button', { name: 'New project' }).click();
   await manager.page.getByLabel('Project name').fill(projectName);
