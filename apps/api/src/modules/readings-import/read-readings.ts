@@ -84,7 +84,17 @@ export function readReadings(table: RawTable, mapping: ImportMapping): ParsedRea
       return Number.NaN;
     };
     const numbers = { increment: numeric('increment'), stress: numeric('stress'), elapsedTime: numeric('elapsedTime'), deformation: numeric('deformation') };
-    if (!rowOk) continue;
+    if (!rowOk) {
+      // A row rejected only for its deformation still has a good time: keep it as the increment's
+      // latest, so a later row that goes back in time is reported in this same pass.
+      if (current !== null && Number.isNaN(numbers.deformation) && numbers.elapsedTime > current.lastTime
+        && (positions.increment !== null ? numbers.increment === current.index : numbers.stress === current.stress)) {
+        current.lastTime = numbers.elapsedTime;
+        current.lastDeformation = Number.NaN;
+        current.lastRow = row.rowNumber;
+      }
+      continue;
+    }
     /** The cell as written, for messages. */
     const text = (field: Field): string => {
       const position = positions[field];

@@ -94,6 +94,15 @@ describe('readReadings(table, mapping)', () => {
     ]);
   });
 
+  it('still reports time going backwards right after a row rejected for its deformation', () => {
+    const problem = problemOf(() => read(csv('1,25,0,0', '1,25,4,abc', '1,25,2,0.2')));
+    expect(problem.issues.map((issue) => [issue.row, issue.column])).toEqual([
+      [3, 'deformation_mm'],
+      [4, 'elapsed_min'],
+    ]);
+    expect(problem.issues[1]?.message).toContain('time goes backwards within increment 1: 2 after 4 at row 3');
+  });
+
   it('rejects a repeated row and a second reading at the same time', () => {
     const problem = problemOf(() => read(csv('1,25,0,0', '1,25,1,0.1', '1,25,1,0.1', '1,25,2,0.2', '1,25,2,0.25')));
     expect(problem.issues.map((issue) => issue.message)).toEqual([
