@@ -11,11 +11,16 @@ export async function decideReview(orgId: string, testId: string, decision: Deci
   await api.post<unknown>(path, decision.body);
 }
 
-/** Approve, or send back with a comment; the queue, the test and the soil records all change. */
-export function useDecideReview(orgId: string) {
+/**
+ * Approve, or send back with a comment; the queue, the test and the soil records all change.
+ * `onDecided` runs at the hook level, before the caches refetch: the refetched test status
+ * unmounts the decision panel, and callbacks given to `mutate()` do not run once it is gone.
+ */
+export function useDecideReview(orgId: string, { onDecided }: { onDecided?: (decision: Decision) => void } = {}) {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: ({ testId, decision }: { testId: string; decision: Decision }) => decideReview(orgId, testId, decision),
+    onSuccess: (_result, { decision }) => onDecided?.(decision),
     onSettled: () =>
       Promise.all([
         queryClient.invalidateQueries({ queryKey: reviewQueueQueryOptions(orgId).queryKey }),

@@ -16,20 +16,23 @@ type ReviewDecisionProps = {
 
 /** Approve, or ask for changes with a comment the technician will read on the test page. */
 export function ReviewDecision({ orgId, testId, testReference, isOwnTest, onDecided }: ReviewDecisionProps) {
-  const decide = useDecideReview(orgId);
   const [comment, setComment] = useState('');
   const [commentError, setCommentError] = useState<string | undefined>();
   const [done, setDone] = useState<string | null>(null);
+  const decide = useDecideReview(orgId, {
+    onDecided: (decision) => {
+      const kind = decision.kind === 'approve' ? 'approved' : 'changes_requested';
+      setDone(kind === 'approved' ? `${testReference} approved. A new soil record version has been written.` : `${testReference} sent back to the technician with your comment.`);
+      onDecided?.(kind);
+    },
+  });
   const commentId = useId();
 
   // A parent that hears about the decision shows the confirmation itself (it outlives this panel).
   if (done) return onDecided ? null : <Alert tone="success">{done}</Alert>;
 
   const approve = () =>
-    decide.mutate(
-      { testId, decision: { kind: 'approve', body: comment.trim() ? { comment: comment.trim() } : {} } },
-      { onSuccess: () => { setDone(`${testReference} approved. A new soil record version has been written.`); onDecided?.('approved'); } },
-    );
+    decide.mutate({ testId, decision: { kind: 'approve', body: comment.trim() ? { comment: comment.trim() } : {} } });
   const sendBack = () => {
     const parsed = ChangeRequestSchema.safeParse({ comment });
     if (!parsed.success) {
@@ -38,10 +41,7 @@ export function ReviewDecision({ orgId, testId, testReference, isOwnTest, onDeci
       return;
     }
     setCommentError(undefined);
-    decide.mutate(
-      { testId, decision: { kind: 'request-changes', body: parsed.data } },
-      { onSuccess: () => { setDone(`${testReference} sent back to the technician with your comment.`); onDecided?.('changes_requested'); } },
-    );
+    decide.mutate({ testId, decision: { kind: 'request-changes', body: parsed.data } });
   };
 
   return (
