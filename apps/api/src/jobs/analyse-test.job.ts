@@ -38,6 +38,8 @@ export async function analyseTest(data: AnalyseTestJobData): Promise<void> {
 
 export const analyseTestJob: JobDefinition = {
   name: ANALYSE_TEST_QUEUE,
+  // A technician waits on the page for the result after every import and pick: pick it up quickly.
+  pollingIntervalSeconds: 0.5,
   // The queue carries only what enqueueAnalysis sent.
   handler: (data) => analyseTest(data as AnalyseTestJobData),
 };
