@@ -24,3 +24,9 @@ export const passwordTooShort = (min: number) =>
   new DomainError('validation_failed', `The request was not accepted. password: Use a password of at least ${min} characters.`, [
     { path: 'password', message: `Use a password of at least ${min} characters.` },
   ]);
+
+export const invitationMailFailed = () =>
+  new DomainError(
+    'service_unavailable',
+    'The invitation e-mail could not be sent, so no invitation was made. Try again in a few minutes; if it keeps failing, ask whoever runs Porestack to check its mail settings.',
+  );

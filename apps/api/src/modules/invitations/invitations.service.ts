@@ -2,6 +2,7 @@ import type { Invitation, InvitationAccept, InvitationCreate, InvitationPreview 
 import { IsNull, MoreThan, type EntityManager } from 'typeorm';
 import { dataSource } from '../../data-source.js';
 import { NotFoundError } from '../../errors/domain-error.js';
+import { logger } from '../../http/logger.js';
 import { publicLink, sendMail } from '../../mail/mailer.js';
 import { invitationMail } from '../../mail/templates/invitation.mail.js';
 import { audit } from '../audit/audit.service.js';
@@ -16,6 +17,7 @@ import {
   invitationExpired,
   invitationRevoked,
   invitationUnknown,
+  invitationMailFailed,
   invitationUsed,
   nameRequired,
   passwordTooShort,
@@ -47,7 +49,7 @@ async function isMember(manager: EntityManager, orgId: string, email: string): P
 /** Invites by e-mail; a new invitation to the same address replaces the pending one. */
 export async function createInvitation(orgId: string, actor: UserEntity, input: InvitationCreate): Promise<Invitation> {
   const { token, tokenHash } = createOneTimeToken();
-  const { row, organisation } = await dataSource.transaction(async (manager) => {
+  const { row } = await dataSource.transaction(async (manager) => {
     if (await isMember(manager, orgId, input.email)) throw alreadyMember(input.email);
     const invitations = manager.getRepository(InvitationEntity);
     await invitations.update(
@@ -75,19 +77,26 @@ export async function createInvitation(orgId: string, actor: UserEntity, input: 
       },
       manager,
     );
-    const org = await manager.getRepository(OrganisationEntity).findOneByOrFail({ id: orgId });
-    return { row: Object.assign(saved, { invitedBy: actor }), organisation: org };
+    const organisation = await manager.getRepository(OrganisationEntity).findOneByOrFail({ id: orgId });
+    // Sent before the commit: an invitation nobody was told about would only wait to expire,
+    // so when the mail cannot go out, nothing is kept and the admin is told to try again.
+    try {
+      await sendMail(
+        input.email,
+        invitationMail({
+          organisationName: organisation.name,
+          invitedBy: actor.name,
+          role: input.role,
+          url: publicLink(`/invitations/${encodeURIComponent(token)}`),
+          validDays: INVITATION_DAYS,
+        }),
+      );
+    } catch (error) {
+      logger.warn({ err: error, invitationId: saved.id }, 'invitation e-mail could not be sent');
+      throw invitationMailFailed();
+    }
+    return { row: Object.assign(saved, { invitedBy: actor }) };
   });
-  await sendMail(
-    input.email,
-    invitationMail({
-      organisationName: organisation.name,
-      invitedBy: actor.name,
-      role: input.role,
-      url: publicLink(`/invitations/${encodeURIComponent(token)}`),
-      validDays: INVITATION_DAYS,
-    }),
-  );
   return toDto(row);
 }
 
