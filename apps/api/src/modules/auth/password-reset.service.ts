@@ -1,6 +1,7 @@
 import type { PasswordResetConfirm, PasswordResetRequest } from '@porestack/types';
 import { IsNull } from 'typeorm';
 import { dataSource } from '../../data-source.js';
+import { logger } from '../../http/logger.js';
 import { publicLink, sendMail } from '../../mail/mailer.js';
 import { passwordResetMail } from '../../mail/templates/password-reset.mail.js';
 import { audit } from '../audit/audit.service.js';
@@ -30,7 +31,12 @@ export async function requestPasswordReset(input: PasswordResetRequest): Promise
     objectId: user.id,
   });
   const url = publicLink(`/reset-password?token=${encodeURIComponent(token)}`);
-  await sendMail(user.email, passwordResetMail({ name: user.name, url, validMinutes: RESET_TOKEN_MINUTES }));
+  try {
+    await sendMail(user.email, passwordResetMail({ name: user.name, url, validMinutes: RESET_TOKEN_MINUTES }));
+  } catch (error) {
+    // Answering differently here would tell a stranger the account exists; the person asks again.
+    logger.error({ err: error, userId: user.id }, 'password-reset e-mail could not be sent');
+  }
 }
 
 /** Sets the new password, spends the token and ends every existing session of the account. */

@@ -3,6 +3,7 @@ import { createApp } from '../../../app.js';
 import { dataSource } from '../../../data-source.js';
 import { openBrowser, signUpAdmin, TEST_PASSWORD, uniqueEmail } from '../../../testing/browser.js';
 import { linkIn, mailsTo, waitForMail } from '../../../testing/mail-inbox.js';
+import { withRefusingMailServer } from '../../../testing/refusing-smtp.js';
 import { hashToken } from '../one-time-token.js';
 import { PasswordResetTokenEntity } from '../password-reset-token.entity.js';
 
@@ -77,5 +78,17 @@ describe('password reset', () => {
     expect(res.body.message).toMatch(/If an account uses this e-mail address/);
     await new Promise((resolve) => setTimeout(resolve, 300));
     expect(await mailsTo(email)).toEqual([]);
+  });
+
+  it('when the mail server refuses the reset e-mail of a real account, then 202 exactly as for an unknown address', async () => {
+    const admin = await signUpAdmin(app, 'reset-mail-down');
+    const stranger = await withRefusingMailServer(async () => {
+      const browser = await openBrowser(app);
+      const known = await browser.post('/api/auth/password-reset/request', { email: admin.email }).expect(202);
+      const unknown = await browser.post('/api/auth/password-reset/request', { email: uniqueEmail('nobody') }).expect(202);
+      expect(known.body).toEqual(unknown.body);
+      return unknown.body;
+    });
+    expect(stranger.message).toMatch(/If an account uses this e-mail address/);
   });
 });

@@ -1,12 +1,10 @@
 import type { Invitation, InvitationPreview, Session } from '@porestack/types';
-import { createServer, type Server } from 'node:net';
 import { describe, expect, it } from 'vitest';
-import { env } from '../../../config/env.js';
-import { closeMailer } from '../../../mail/mailer.js';
 import { createApp } from '../../../app.js';
 import { dataSource } from '../../../data-source.js';
 import { openBrowser, signUpAdmin, TEST_PASSWORD, uniqueEmail, type SignedUpAdmin } from '../../../testing/browser.js';
 import { linkIn, waitForMail } from '../../../testing/mail-inbox.js';
+import { withRefusingMailServer } from '../../../testing/refusing-smtp.js';
 import { UserEntity } from '../../users/user.entity.js';
 import { InvitationEntity } from '../invitation.entity.js';
 
@@ -117,22 +115,10 @@ describe('invitations', () => {
 
   it('when the mail server refuses the invitation e-mail, then 503 says so and no invitation is kept', async () => {
     const admin = await signUpAdmin(app, 'mail-down');
-    // A real SMTP peer on loopback that turns every client away (554), standing in for a mail server that is down.
-    const refusing: Server = createServer((socket) => socket.end('554 5.3.2 Service not available\r\n'));
-    await new Promise<void>((resolve) => refusing.listen(0, '127.0.0.1', resolve));
-    const settings = env() as { SMTP_URL: string };
-    const working = settings.SMTP_URL;
-    const address = refusing.address();
-    settings.SMTP_URL = `smtp://127.0.0.1:${typeof address === 'object' && address ? address.port : 0}`;
-    closeMailer();
-    try {
-      const res = await admin.browser.post(`/api/orgs/${admin.orgId}/invitations`, { email: uniqueEmail('unreached'), role: 'technician' }).expect(503);
-      expect(res.body).toMatchObject({ code: 'service_unavailable', message: expect.stringContaining('could not be sent, so no invitation was made') });
-    } finally {
-      settings.SMTP_URL = working;
-      closeMailer();
-      await new Promise<void>((resolve) => refusing.close(() => resolve()));
-    }
+    const res = await withRefusingMailServer(() =>
+      admin.browser.post(`/api/orgs/${admin.orgId}/invitations`, { email: uniqueEmail('unreached'), role: 'technician' }).expect(503),
+    );
+    expect(res.body).toMatchObject({ code: 'service_unavailable', message: expect.stringContaining('could not be sent, so no invitation was made') });
     expect(await dataSource.getRepository(InvitationEntity).countBy({ organisationId: admin.orgId })).toBe(0);
     expect((await admin.browser.get(`/api/orgs/${admin.orgId}/invitations`).expect(200)).body).toEqual([]);
   });
