@@ -3,8 +3,7 @@ import { linkFromMail } from './support/mail';
 import { newPerson, signIn, signUp } from './support/people';
 
 // Writes a PNG of every page to apps/web/screenshots/ for a visual check by a person.
-// Skipped unless SCREENSHOTS is set: it only serves that visual check, and the ordinary e2e run should not spend time on it.
-test.skip(!process.env['SCREENSHOTS'], 'Set SCREENSHOTS=1 to write page screenshots.');
+// Runs only with SCREENSHOTS=1 (see testIgnore in playwright.config.ts).
 
 const shot = (page: Page, name: string) => page.screenshot({ path: `screenshots/${name}.png`, fullPage: true });
 
