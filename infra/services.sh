@@ -6,7 +6,9 @@
 set -euo pipefail
 source "$(dirname "$0")/lib.sh"
 cd "$REPO"
-PG_PORT=54349 S3_PORT=4589 SMTP_PORT=1045 MAIL_WEB_PORT=1100
+# Ports can be moved (SERVICES_PG_PORT …) to run two checkouts side by side.
+PG_PORT=${SERVICES_PG_PORT:-54349} S3_PORT=${SERVICES_S3_PORT:-4589}
+SMTP_PORT=${SERVICES_SMTP_PORT:-1045} MAIL_WEB_PORT=${SERVICES_MAIL_WEB_PORT:-1100}
 DATA="$REPO/.data/services"
 
 if [ "${1:-}" = stop ]; then

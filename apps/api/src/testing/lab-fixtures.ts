@@ -83,8 +83,8 @@ export async function analysedTest(orgId: string, technicianId: string, options:
   return fixture;
 }
 
-export async function submittedTest(orgId: string, technicianId: string): Promise<LabFixture> {
-  const fixture = await analysedTest(orgId, technicianId);
+export async function submittedTest(orgId: string, technicianId: string, options: { designerIds?: string[] } = {}): Promise<LabFixture> {
+  const fixture = await analysedTest(orgId, technicianId, options);
   await submitTest(orgId, fixture.testId, { id: technicianId });
   return fixture;
 }

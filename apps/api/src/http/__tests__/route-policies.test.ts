@@ -208,11 +208,13 @@ async function userIdOf(email: string): Promise<string> {
 async function labContext(orgId: string, emails: Record<Persona, string>): Promise<Context['lab']> {
   const technicianId = await userIdOf(emails.technician);
   const managerId = await userIdOf(emails.lab_manager);
-  const draft = await draftTest(orgId, technicianId);
-  const analysed = await analysedTest(orgId, technicianId);
-  const withJob = await draftTest(orgId, technicianId);
+  // The designer is on every fixture project: the policy is about roles; scope has its own tests.
+  const onProject = { designerIds: [await userIdOf(emails.designer)] };
+  const draft = await draftTest(orgId, technicianId, onProject);
+  const analysed = await analysedTest(orgId, technicianId, onProject);
+  const withJob = await draftTest(orgId, technicianId, onProject);
   const { analysisJobId } = await uploadKnownReadings(orgId, withJob.testId, technicianId);
-  const approved = await submittedTest(orgId, technicianId);
+  const approved = await submittedTest(orgId, technicianId, onProject);
   const { recordId } = await approveTest(orgId, approved.testId, { id: managerId, name: 'Policy manager' }, null);
   return {
     technicianId,
@@ -220,8 +222,8 @@ async function labContext(orgId: string, emails: Record<Persona, string>): Promi
     analysed,
     jobId: analysisJobId,
     recordId,
-    newAnalysedTestId: async () => (await analysedTest(orgId, technicianId)).testId,
-    newSubmittedTestId: async () => (await submittedTest(orgId, technicianId)).testId,
+    newAnalysedTestId: async () => (await analysedTest(orgId, technicianId, onProject)).testId,
+    newSubmittedTestId: async () => (await submittedTest(orgId, technicianId, onProject)).testId,
   };
 }
 const PERSONAS: Persona[] = [...ROLES, 'outsider', 'anonymous'];

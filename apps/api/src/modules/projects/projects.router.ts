@@ -7,6 +7,7 @@ import { defineRoutes } from '../../http/routes.js';
 import { createBorehole, listBoreholes } from '../boreholes/boreholes.service.js';
 import { createSample, listSamples } from '../samples/samples.service.js';
 import { LAB_READERS, LAB_WORKERS, PROJECT_EDITORS } from './lab-roles.js';
+import { assertProjectInScope, projectScope } from './project-scope.js';
 import { createProject, getProject, listDesignerCandidates, listProjects, updateProject } from './projects.service.js';
 
 /** Projects, their boreholes and the boreholes' samples. */
@@ -18,7 +19,15 @@ export function projectsRouter(): Router {
       access: PROJECT_EDITORS,
       handler: async (req, res) => res.json(await listDesignerCandidates(currentTenant(req).orgId)),
     },
-    { method: 'get', path: '/projects', access: LAB_READERS, handler: async (req, res) => res.json(await listProjects(currentTenant(req).orgId)) },
+    {
+      method: 'get',
+      path: '/projects',
+      access: LAB_READERS,
+      handler: async (req, res) => {
+        const tenant = currentTenant(req);
+        res.json(await listProjects(tenant.orgId, await projectScope(tenant, currentUser(req).id)));
+      },
+    },
     {
       method: 'post',
       path: '/projects',
@@ -31,7 +40,12 @@ export function projectsRouter(): Router {
       method: 'get',
       path: '/projects/:projectId',
       access: LAB_READERS,
-      handler: async (req, res) => res.json(await getProject(currentTenant(req).orgId, uuidParam(req, 'projectId', 'project'))),
+      handler: async (req, res) => {
+        const tenant = currentTenant(req);
+        const projectId = uuidParam(req, 'projectId', 'project');
+        await assertProjectInScope(tenant, currentUser(req).id, projectId);
+        res.json(await getProject(tenant.orgId, projectId));
+      },
     },
     {
       method: 'patch',
@@ -46,7 +60,12 @@ export function projectsRouter(): Router {
       method: 'get',
       path: '/projects/:projectId/boreholes',
       access: LAB_READERS,
-      handler: async (req, res) => res.json(await listBoreholes(currentTenant(req).orgId, uuidParam(req, 'projectId', 'project'))),
+      handler: async (req, res) => {
+        const tenant = currentTenant(req);
+        const projectId = uuidParam(req, 'projectId', 'project');
+        await assertProjectInScope(tenant, currentUser(req).id, projectId);
+        res.json(await listBoreholes(tenant.orgId, projectId));
+      },
     },
     {
       method: 'post',

@@ -7,6 +7,7 @@ import { MembershipEntity } from '../organisations/membership.entity.js';
 import type { Actor } from '../consolidation-tests/consolidation-tests.service.js';
 import { ProjectMemberEntity } from './project-member.entity.js';
 import { ProjectEntity } from './project.entity.js';
+import type { ProjectScope } from './project-scope.js';
 
 const referenceTaken = (reference: string) =>
   new DomainError('validation_failed', `Project reference ${reference} is already used in this organisation. Choose another reference.`, [
@@ -30,14 +31,16 @@ async function setDesigners(manager: EntityManager, orgId: string, projectId: st
   if (designerIds.length > 0) await repo.insert([...new Set(designerIds)].map((userId) => ({ organisationId: orgId, projectId, userId, role: 'designer' })));
 }
 
-export async function listProjects(orgId: string): Promise<ProjectSummary[]> {
+/** The organisation's projects, newest first; only those in `scope` (default: all of them). */
+export async function listProjects(orgId: string, scope: ProjectScope = { kind: 'organisation' }): Promise<ProjectSummary[]> {
+  if (scope.kind === 'projects' && scope.projectIds.length === 0) return [];
   const rows = (await dataSource.query(
     `SELECT p.id, p.name, p.reference, p.client_name, p.site_name, p.created_at,
             COALESCE((SELECT array_agg(pm.user_id ORDER BY pm.created_at) FROM project_members pm WHERE pm.project_id = p.id), '{}') AS designer_ids,
             (SELECT count(*)::int FROM boreholes b WHERE b.project_id = p.id) AS borehole_count,
             (SELECT count(*)::int FROM consolidation_tests t JOIN samples s ON s.id = t.sample_id JOIN boreholes b ON b.id = s.borehole_id WHERE b.project_id = p.id) AS test_count
-       FROM projects p WHERE p.organisation_id = $1 ORDER BY p.created_at DESC, p.reference`,
-    [orgId],
+       FROM projects p WHERE p.organisation_id = $1 AND ($2::uuid[] IS NULL OR p.id = ANY($2::uuid[])) ORDER BY p.created_at DESC, p.reference`,
+    [orgId, scope.kind === 'projects' ? scope.projectIds : null],
   )) as Array<Record<string, unknown>>;
   return rows.map((row) => ({
     id: row['id'] as string,
@@ -62,7 +65,7 @@ export async function listDesignerCandidates(orgId: string): Promise<ProjectDesi
 }
 
 export async function getProject(orgId: string, projectId: string): Promise<ProjectDetail> {
-  const summary = (await listProjects(orgId)).find((p) => p.id === projectId);
+  const summary = (await listProjects(orgId, { kind: 'projects', projectIds: [projectId] }))[0];
   if (!summary) throw new NotFoundError('project');
   const designers = (await dataSource.query(
     'SELECT u.id AS user_id, u.name, u.email FROM project_members pm JOIN users u ON u.id = pm.user_id WHERE pm.organisation_id = $1 AND pm.project_id = $2 ORDER BY u.name',

@@ -29,4 +29,24 @@ describe('designers of a project', () => {
     expect(res.status).toBe(404);
     expect(JSON.stringify(res.body)).not.toMatch(/designers-a-designer/);
   });
+
+  it('when a designer lists projects, then only the projects they are assigned to come back; another project of the organisation answers 404', async () => {
+    const admin = await signUpAdmin(app, 'scope-admin');
+    const designer = await createMember(admin.orgId, 'designer', 'scope-designer');
+    const theirs = (await admin.browser.post(`/api/orgs/${admin.orgId}/projects`, { name: 'Assigned', reference: `SC-A-${Date.now()}`, clientName: 'Client', designerIds: [designer.userId] }).expect(201))
+      .body as ProjectDetail;
+    const other = (await admin.browser.post(`/api/orgs/${admin.orgId}/projects`, { name: 'Not assigned', reference: `SC-B-${Date.now()}`, clientName: 'Client' }).expect(201)).body as ProjectDetail;
+    const browser = await signedInBrowser(app, designer.email);
+
+    const listed = (await browser.get(`/api/orgs/${admin.orgId}/projects`).expect(200)).body as ProjectDetail[];
+    expect(listed.map((p) => p.id)).toEqual([theirs.id]);
+    await browser.get(`/api/orgs/${admin.orgId}/projects/${theirs.id}`).expect(200);
+    await browser.get(`/api/orgs/${admin.orgId}/projects/${theirs.id}/boreholes`).expect(200);
+    await browser.get(`/api/orgs/${admin.orgId}/projects/${other.id}`).expect(404);
+    await browser.get(`/api/orgs/${admin.orgId}/projects/${other.id}/boreholes`).expect(404);
+
+    // Lab staff keep the whole organisation.
+    const all = (await admin.browser.get(`/api/orgs/${admin.orgId}/projects`).expect(200)).body as ProjectDetail[];
+    expect(all.map((p) => p.id).sort()).toEqual([theirs.id, other.id].sort());
+  });
 });
