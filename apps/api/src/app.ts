@@ -18,8 +18,10 @@ import { invitationsRouter, orgInvitationsRouter } from './modules/invitations/i
 import { membersRouter } from './modules/organisations/members.router.js';
 import { consolidationTestsRouter } from './modules/consolidation-tests/consolidation-tests.router.js';
 import { jobRunsRouter } from './modules/job-runs/job-runs.router.js';
+import { projectClientsRouter } from './modules/projects/project-clients.router.js';
 import { projectsRouter } from './modules/projects/projects.router.js';
 import { reviewsRouter } from './modules/reviews/reviews.router.js';
+import { issuedResultsRouter } from './modules/soil-records/issued-results.router.js';
 import { soilRecordsRouter } from './modules/soil-records/soil-records.router.js';
 import { importProfilesRouter } from './modules/import-profiles/import-profiles.router.js';
 import { readingsRouter } from './modules/readings/readings.router.js';
@@ -74,9 +76,11 @@ export function createApp(options: AppOptions = {}): Express {
   app.use(membersRouter());
   app.use(auditRouter());
   app.use(projectsRouter());
+  app.use(projectClientsRouter());
   app.use(consolidationTestsRouter());
   app.use(reviewsRouter());
   app.use(soilRecordsRouter());
+  app.use(issuedResultsRouter());
   app.use(jobRunsRouter());
   app.use(uploadsRouter());
   app.use(importProfilesRouter());

@@ -4,6 +4,7 @@ import { databaseUrl } from './config/env.js';
 import { AuditEntryEntity } from './modules/audit/audit-entry.entity.js';
 import { PasswordResetTokenEntity } from './modules/auth/password-reset-token.entity.js';
 import { InvitationEntity } from './modules/invitations/invitation.entity.js';
+import { InvitationProjectEntity } from './modules/invitations/invitation-project.entity.js';
 import { MembershipEntity } from './modules/organisations/membership.entity.js';
 import { OrganisationEntity } from './modules/organisations/organisation.entity.js';
 import { UserEntity } from './modules/users/user.entity.js';
@@ -25,6 +26,7 @@ import { Init1796179339734 } from './migrations/1796179339734-init.js';
 import { LabRecords1796180920952 } from './migrations/1796180920952-lab-records.js';
 import { ReadingsImport1796181181337 } from './migrations/1796181181337-readings-import.js';
 import { ReadingsOneForeignKey1796181664432 } from './migrations/1796181664432-readings-one-foreign-key.js';
+import { ClientSharing1796314059512 } from './migrations/1796314059512-client-sharing.js';
 
 /**
  * The one DataSource (the TypeORM CLI requires exactly one export here). Entities and
@@ -37,8 +39,8 @@ export const dataSource = new DataSource({
   entities: [UserEntity, OrganisationEntity, MembershipEntity, InvitationEntity, PasswordResetTokenEntity, AuditEntryEntity,
     ProjectEntity, ProjectMemberEntity, BoreholeEntity, SampleEntity, ConsolidationTestEntity, AnalysisEntity, ReviewEventEntity,
     SoilRecordEntity, SoilRecordVersionEntity, SoilRecordSupersessionEntity, JobRunEntity,
-    UploadEntity, ReadingEntity, ImportProfileEntity],
-  migrations: [Init1796179339734, LabRecords1796180920952, ReadingsImport1796181181337, ReadingsOneForeignKey1796181664432],
+    UploadEntity, ReadingEntity, ImportProfileEntity, InvitationProjectEntity],
+  migrations: [Init1796179339734, LabRecords1796180920952, ReadingsImport1796181181337, ReadingsOneForeignKey1796181664432, ClientSharing1796314059512],
   // gen_random_uuid() is built into PostgreSQL 13+, so no extension is needed on a managed server.
   uuidExtension: 'pgcrypto',
   synchronize: false,

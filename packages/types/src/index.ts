@@ -133,3 +133,21 @@ export type {
   ReadingsPage,
   ReadingsPageQuery,
 } from './lab/import.js';
+export {
+  ProjectShareCreateSchema,
+  ProjectClientSchema,
+  ProjectClientInvitationSchema,
+  ProjectClientsSchema,
+  ProjectShareOutcomeSchema,
+} from './sharing.js';
+export type { ProjectShareCreate, ProjectClient, ProjectClientInvitation, ProjectClients, ProjectShareOutcome } from './sharing.js';
+export {
+  ResultsProjectSchema,
+  IssuedResultSchema,
+  ResultsSampleSchema,
+  ResultsBoreholeSchema,
+  ProjectResultsSchema,
+  IssuedSpecimenSchema,
+  IssuedTestSummarySchema,
+} from './lab/results.js';
+export type { ResultsProject, IssuedResult, ResultsBorehole, ProjectResults, IssuedSpecimen, IssuedTestSummary } from './lab/results.js';

@@ -23,6 +23,8 @@ export const InvitationSchema = z.object({
   invitedBy: z.string(),
   createdAt: z.iso.datetime({ offset: true }),
   expiresAt: z.iso.datetime({ offset: true }),
+  /** Projects shared with the invitee: accepting puts them on these as a client. */
+  projects: z.array(z.object({ id: z.uuid(), name: z.string(), reference: z.string() })),
 });
 export type Invitation = z.infer<typeof InvitationSchema>;
 
@@ -34,6 +36,8 @@ export const InvitationPreviewSchema = z.object({
   invitedBy: z.string(),
   accountExists: z.boolean(),
   expiresAt: z.iso.datetime({ offset: true }),
+  /** Names of the projects shared with the invitee, if any. */
+  projectNames: z.array(z.string()),
 });
 export type InvitationPreview = z.infer<typeof InvitationPreviewSchema>;
 

@@ -3,6 +3,7 @@ import type { EntityManager } from 'typeorm';
 import type { QueryDeepPartialEntity } from 'typeorm/query-builder/QueryPartialEntity.js';
 import { dataSource } from '../../data-source.js';
 import { NotFoundError } from '../../errors/domain-error.js';
+import { jobVisible, type Viewer } from '../projects/project-scope.js';
 import { JobRunEntity } from './job-run.entity.js';
 
 export interface NewJobRun {
@@ -61,6 +62,13 @@ export const jobRuns = {
     if (change.result !== undefined) patch.result = change.result as QueryDeepPartialEntity<Record<string, unknown>>;
     if (change.bossJobId !== undefined) patch.bossJobId = change.bossJobId;
     await manager.getRepository(JobRunEntity).update({ id }, patch);
+  },
+
+  /** A job as the viewer may follow it (project-scope.ts: lab staff every job, anyone else their own); 404 otherwise. */
+  async findFor(viewer: Viewer, id: string): Promise<JobRun> {
+    const row = await dataSource.getRepository(JobRunEntity).findOneBy({ organisationId: viewer.orgId, id });
+    if (!row || !jobVisible(viewer, row)) throw new NotFoundError('job');
+    return toJobRun(row);
   },
 
   async find(orgId: string, id: string): Promise<JobRun> {

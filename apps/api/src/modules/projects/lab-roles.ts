@@ -10,3 +10,5 @@ export const LAB_WORKERS: readonly Role[] = ['technician', 'lab_manager'];
 export const REVIEWERS: readonly Role[] = ['lab_manager'];
 /** Who reads approved soil records: designers and clients too. */
 export const RECORD_READERS: readonly Role[] = ['admin', 'technician', 'lab_manager', 'designer', 'client'];
+/** Who reads projects, their boreholes and samples: everyone, each within their project scope (project-scope.ts). */
+export const PROJECT_READERS: readonly Role[] = ['admin', 'technician', 'lab_manager', 'designer', 'client'];
