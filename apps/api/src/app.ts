@@ -14,6 +14,7 @@ import { isSecureOrigin } from './http/session-cookie.js';
 import { auditRouter } from './modules/audit/audit.router.js';
 import { authRouter } from './modules/auth/auth.router.js';
 import { healthRouter } from './modules/health/health.router.js';
+import { homeRouter } from './modules/home/home.router.js';
 import { invitationsRouter, orgInvitationsRouter } from './modules/invitations/invitations.router.js';
 import { membersRouter } from './modules/organisations/members.router.js';
 import { consolidationTestsRouter } from './modules/consolidation-tests/consolidation-tests.router.js';
@@ -75,6 +76,7 @@ export function createApp(options: AppOptions = {}): Express {
   app.use(orgInvitationsRouter());
   app.use(membersRouter());
   app.use(auditRouter());
+  app.use(homeRouter());
   app.use(projectsRouter());
   app.use(projectClientsRouter());
   app.use(consolidationTestsRouter());

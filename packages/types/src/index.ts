@@ -151,3 +151,13 @@ export {
   IssuedTestSummarySchema,
 } from './lab/results.js';
 export type { ResultsProject, IssuedResult, ResultsBorehole, ProjectResults, IssuedSpecimen, IssuedTestSummary } from './lab/results.js';
+export {
+  WAITING_REASONS,
+  WaitingReasonSchema,
+  HomeTestSchema,
+  WaitingTestSchema,
+  HomeApprovalSchema,
+  StuckTestSchema,
+  HomeOverviewSchema,
+} from './home.js';
+export type { WaitingReason, HomeTest, WaitingTest, HomeApproval, StuckTest, HomeOverview } from './home.js';

@@ -58,6 +58,8 @@ export const AuditEntrySchema = z.object({
   action: z.string(),
   objectType: z.string(),
   objectId: z.string().nullable(),
+  /** The object in words as it is now (a test's reference, a project's reference and name, a person's name); null once it is gone. */
+  objectLabel: z.string().nullable(),
   details: z.record(z.string(), z.unknown()),
 });
 export type AuditEntry = z.infer<typeof AuditEntrySchema>;

@@ -81,6 +81,7 @@ const SPEC: Record<string, { access: Access; sample: (ctx: Context) => Promise<S
     access: ADMIN,
     sample: async (c) => ({ path: `/api/orgs/${c.orgId}/members/${await c.newMemberId()}` }),
   },
+  'GET /api/orgs/:orgId/home': { access: ROLES, sample: (c) => ({ path: `/api/orgs/${c.orgId}/home` }) },
   'GET /api/orgs/:orgId/audit': { access: ADMIN, sample: (c) => ({ path: `/api/orgs/${c.orgId}/audit` }) },
   'GET /api/orgs/:orgId/designers': { access: PROJECT_EDITORS, sample: (c) => ({ path: `/api/orgs/${c.orgId}/designers` }) },
   'GET /api/orgs/:orgId/projects': { access: PROJECT_READERS, sample: (c) => ({ path: `/api/orgs/${c.orgId}/projects` }) },
