@@ -13,6 +13,8 @@ export const labPermissions = (role: Role) => ({
   importReadings: role === 'technician',
   /** Approve or ask for changes. */
   review: role === 'lab_manager',
+  /** Follow tests through the lab's own pages in any status (designers and clients read approved versions). */
+  readsLabWork: role === 'admin' || role === 'technician' || role === 'lab_manager',
 });
 
 /** Who may open a test page: the lab, and designers following a soil record back to its test. */

@@ -8,6 +8,7 @@ import { paths } from '../../config/paths';
 import { formatDate } from '../../lib/format';
 import { useSoilRecord } from '../../features/soil-records/api/get-soil-record';
 import { VersionView } from '../../features/soil-records/components/version-view';
+import { labPermissions } from '../lab-permissions';
 import { rolesFor } from '../nav-config';
 import { useCurrentOrg } from '../org-context';
 import { RoleGate } from '../role-gate';
@@ -21,7 +22,7 @@ export function SoilRecordRoute() {
 }
 
 function SoilRecordPage() {
-  const { orgId } = useCurrentOrg();
+  const { orgId, membership } = useCurrentOrg();
   const { recordId = '' } = useParams();
   const [search, setSearch] = useSearchParams();
   const record = useSoilRecord(orgId, recordId);
@@ -61,7 +62,7 @@ function SoilRecordPage() {
           <EngineeringCaution />
           {shown ? (
             <Panel title={`Version ${shown.version}`}>
-              <VersionView orgId={orgId} version={shown} isCurrent={shown.supersededAt === null} />
+              <VersionView orgId={orgId} version={shown} isCurrent={shown.supersededAt === null} labTestLink={labPermissions(membership.role).readsLabWork} />
             </Panel>
           ) : null}
         </div>
