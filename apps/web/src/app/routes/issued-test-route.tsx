@@ -68,7 +68,7 @@ function IssuedTestPage() {
         <Panel title="Report">
           <ReportDownload version={s.version.version} />
         </Panel>
-        <div className="grid items-start gap-6 lg:grid-cols-2">
+        <div className="grid grid-cols-1 items-start gap-6 lg:grid-cols-2">
           <Panel title="Sample and specimen" description={s.sample.description || undefined}>
             <SpecimenTable specimen={s.specimen} />
           </Panel>

@@ -22,7 +22,7 @@ function Sections({ orgId, home }: { orgId: string; home: HomeOverview }) {
       {home.technician ? <TechnicianHome orgId={orgId} section={home.technician} /> : null}
       {home.labManager ? <LabManagerHome orgId={orgId} section={home.labManager} /> : null}
       {home.designer ? (
-        <div className="grid items-start gap-6 lg:grid-cols-2">
+        <div className="grid grid-cols-1 items-start gap-6 lg:grid-cols-2">
           <ProjectsPanel
             orgId={orgId}
             title="Your projects"
@@ -38,7 +38,7 @@ function Sections({ orgId, home }: { orgId: string; home: HomeOverview }) {
         </div>
       ) : null}
       {home.client ? (
-        <div className="grid items-start gap-6 lg:grid-cols-[minmax(0,3fr)_minmax(0,2fr)]">
+        <div className="grid grid-cols-1 items-start gap-6 lg:grid-cols-[minmax(0,3fr)_minmax(0,2fr)]">
           <IssuedResultsPanel orgId={orgId} results={home.client.recentResults} />
           <ProjectsPanel
             orgId={orgId}
@@ -50,7 +50,7 @@ function Sections({ orgId, home }: { orgId: string; home: HomeOverview }) {
         </div>
       ) : null}
       {home.admin ? (
-        <div className="grid items-start gap-6 lg:grid-cols-[minmax(0,2fr)_minmax(0,3fr)]">
+        <div className="grid grid-cols-1 items-start gap-6 lg:grid-cols-[minmax(0,2fr)_minmax(0,3fr)]">
           <AdminMembersPanel orgId={orgId} section={home.admin} />
           <Panel title="Recent activity" flush>
             {home.admin.recentActivity.length === 0 ? (

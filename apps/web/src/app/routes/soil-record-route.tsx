@@ -39,7 +39,7 @@ function SoilRecordPage() {
         title={`${r.boreholeName} / ${r.sampleReference} at ${r.topDepthM.toFixed(2)} m`}
         description={`${r.projectName} · from test ${r.testReference} · current version v${r.currentVersion}`}
       />
-      <div className="grid items-start gap-6 lg:grid-cols-[14rem_minmax(0,1fr)]">
+      <div className="grid grid-cols-1 items-start gap-6 lg:grid-cols-[14rem_minmax(0,1fr)]">
         <nav aria-label="Versions" className="rounded-lg border border-slate-200 bg-white">
           <h2 className="border-b border-slate-200 px-4 py-2 text-sm font-semibold text-slate-900">Versions</h2>
           <ul>

@@ -42,7 +42,7 @@ export function IssuedCurves({ result }: { result: AnalysisResult }) {
     [],
   );
   return (
-    <div className="grid gap-6 xl:grid-cols-2">
+    <div className="grid grid-cols-1 gap-6 xl:grid-cols-2">
       <figure>
         <PlotlyChart label="Void ratio against effective stress on a log scale, with the adopted preconsolidation stress" data={compression} layout={layouts.compression} heightPx={400} />
         <figcaption className="mt-1 text-xs text-slate-600">

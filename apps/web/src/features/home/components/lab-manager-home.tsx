@@ -11,7 +11,7 @@ const JOB_WORDS: Record<string, string> = { 'analyse-test': 'analysis', 'import-
 export function LabManagerHome({ orgId, section }: { orgId: string; section: NonNullable<HomeOverview['labManager']> }) {
   const queue = section.reviewQueue;
   return (
-    <div className="grid items-start gap-6 lg:grid-cols-2">
+    <div className="grid grid-cols-1 items-start gap-6 lg:grid-cols-2">
       <Panel title="Review queue" description={queue.length === 0 ? 'Nothing to review.' : `${queue.length} ${queue.length === 1 ? 'test waits' : 'tests wait'} for a decision, oldest first.`}>
         <HomeList
           label="Tests to review"

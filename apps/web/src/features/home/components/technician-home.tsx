@@ -18,7 +18,7 @@ const WAITING: Record<WaitingTest['reason'], { words: string; section: string }>
 export function TechnicianHome({ orgId, section }: { orgId: string; section: NonNullable<HomeOverview['technician']> }) {
   const total = TEST_STATUSES.reduce((n, s) => n + section.countsByStatus[s], 0);
   return (
-    <div className="grid items-start gap-6 lg:grid-cols-[minmax(0,3fr)_minmax(0,2fr)]">
+    <div className="grid grid-cols-1 items-start gap-6 lg:grid-cols-[minmax(0,3fr)_minmax(0,2fr)]">
       <Panel title="Waiting on you" description="Your tests that need something from you, most urgent first.">
         <HomeList
           label="Tests waiting on you"

@@ -115,7 +115,10 @@ export function ResultsTable({ orgId, results }: { orgId: string; results: reado
       {shown === 0 ? (
         <p className="px-5 py-6 text-sm text-slate-600">No test matches. Clear the search or pick all boreholes.</p>
       ) : (
-        <DataTable table={table} caption="Approved tests and their key parameters; choose a column heading to sort" framed={false} />
+        <>
+          <p className="px-5 pt-2 text-xs text-slate-500 sm:hidden">The table scrolls sideways to the parameters.</p>
+          <DataTable table={table} caption="Approved tests and their key parameters; choose a column heading to sort" framed={false} />
+        </>
       )}
     </div>
   );

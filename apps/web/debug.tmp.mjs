@@ -1,0 +1,15 @@
+import { chromium } from '@playwright/test';
+const base = 'http://127.0.0.1:3112';
+const browser = await chromium.launch({ executablePath: '/usr/bin/chromium', args: ['--no-sandbox', '--disable-gpu'] });
+const page = await browser.newPage({ viewport: { width: 1400, height: 900 } });
+page.on('console', (m) => console.log('console', m.type(), m.text()));
+page.on('pageerror', (e) => console.log('pageerror', e.message));
+await page.goto(`${base}/sign-in`);
+await page.getByLabel('E-mail address').fill('client@demo.porestack.test');
+await page.getByLabel('Password').fill('porestack-demo');
+await page.getByRole('button', { name: 'Sign in' }).click();
+await page.waitForURL(/\/orgs\/[^/]+/);
+await page.getByRole('link', { name: /^Test PLM-OED-01/ }).click();
+const t0 = Date.now();
+await page.locator('[data-testid="plotly-chart"] .main-svg').first().waitFor({ timeout: 40000 }).then(() => console.log('plot after', Date.now() - t0), (e) => console.log('no plot', e.message.slice(0, 80)));
+await browser.close();
