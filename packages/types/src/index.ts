@@ -1,4 +1,4 @@
-export { ROLES, RoleSchema, ROLE_LABELS } from './roles.js';
+export { ROLES, RoleSchema, RolesSchema, ROLE_LABELS, LAB_STAFF_ROLES, canonicalRoles, holdsAnyRole, roleList } from './roles.js';
 export type { Role } from './roles.js';
 export { ApiErrorSchema, API_ERROR_CODES } from './errors.js';
 export type { ApiError, ApiErrorCode } from './errors.js';
@@ -19,7 +19,7 @@ export {
   InvitationSchema,
   InvitationPreviewSchema,
   InvitationAcceptSchema,
-  MemberRoleUpdateSchema,
+  MemberRolesUpdateSchema,
   AuditEntrySchema,
 } from './organisations.js';
 export type {
@@ -28,7 +28,7 @@ export type {
   Invitation,
   InvitationPreview,
   InvitationAccept,
-  MemberRoleUpdate,
+  MemberRolesUpdate,
   AuditEntry,
 } from './organisations.js';
 export {

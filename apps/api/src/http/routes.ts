@@ -13,10 +13,11 @@ import { authenticate, resolveTenant } from './authenticate.js';
  *
  *   access: 'public'       anyone, signed in or not
  *   access: 'signed-in'    any signed-in user          → req.user
- *   access: ['admin', …]   a member of `:orgId` holding one of these roles
- *                          → req.user and req.tenant; a non-member gets 404
- *                          (as for a missing organisation), a member with
- *                          another role 403. The path must contain `:orgId`.
+ *   access: ['admin', …]   a member of `:orgId` holding at least one of these
+ *                          roles (a membership may hold several) → req.user and
+ *                          req.tenant; a non-member gets 404 (as for a missing
+ *                          organisation), a member holding none of them 403.
+ *                          The path must contain `:orgId`.
  *
  * Adding a resource under an organisation:
  *

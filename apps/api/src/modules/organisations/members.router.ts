@@ -1,10 +1,10 @@
-import { MemberRoleUpdateSchema } from '@porestack/types';
+import { MemberRolesUpdateSchema } from '@porestack/types';
 import type { Router } from 'express';
 import { uuidParam } from '../../http/params.js';
 import { parse } from '../../http/parse.js';
 import { currentTenant, currentUser } from '../../http/request-context.js';
 import { defineRoutes } from '../../http/routes.js';
-import { changeMemberRole, listMembers, removeMember } from './members.service.js';
+import { changeMemberRoles, listMembers, removeMember } from './members.service.js';
 
 export function membersRouter(): Router {
   return defineRoutes('/api/orgs/:orgId/members', [
@@ -22,8 +22,8 @@ export function membersRouter(): Router {
       access: ['admin'],
       handler: async (req, res) => {
         const userId = uuidParam(req, 'userId', 'member');
-        const { role } = parse(MemberRoleUpdateSchema, req.body);
-        res.json(await changeMemberRole(currentTenant(req).orgId, userId, role, currentUser(req)));
+        const { roles } = parse(MemberRolesUpdateSchema, req.body);
+        res.json(await changeMemberRoles(currentTenant(req).orgId, userId, roles, currentUser(req)));
       },
     },
     {

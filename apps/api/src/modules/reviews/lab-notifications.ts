@@ -57,7 +57,7 @@ const testUrl = (ctx: TestContext) => publicLink(`/orgs/${ctx.orgId}/tests/${ctx
 
 export async function notifySubmitted(ctx: TestContext, warningCount: number): Promise<void> {
   const managers = (await dataSource.query(
-    `SELECT u.email FROM memberships m JOIN users u ON u.id = m.user_id WHERE m.organisation_id = $1 AND m.role = 'lab_manager'`,
+    `SELECT u.email FROM memberships m JOIN users u ON u.id = m.user_id WHERE m.organisation_id = $1 AND 'lab_manager' = ANY(m.roles)`,
     [ctx.orgId],
   )) as Array<{ email: string }>;
   await deliver(

@@ -58,7 +58,7 @@ function TestPage() {
   if (test.isPending) return <LoadingBlock label="Loading the test…" />;
   if (test.error) return <ErrorMessage error={test.error} title="The test could not be loaded" onRetry={() => void test.refetch()} />;
   const t = test.data;
-  const may = labPermissions(membership.role);
+  const may = labPermissions(membership.roles);
   const editable = may.benchWork && !LOCKED.has(t.status);
 
   return (
