@@ -1,4 +1,4 @@
-import { holdsAnyRole, type Role } from '@porestack/types';
+import { holdsAnyRole, ROLE_ACCESS, type Role } from '@porestack/types';
 
 /**
  * What a member may do in the laboratory pages, from every role they hold, mirroring the API's
@@ -6,14 +6,14 @@ import { holdsAnyRole, type Role } from '@porestack/types';
  */
 export const labPermissions = (roles: readonly Role[]) => ({
   /** Create and edit projects. */
-  editProjects: holdsAnyRole(roles, ['admin', 'lab_manager']),
+  editProjects: holdsAnyRole(roles, ROLE_ACCESS.projectEditors),
   /** Record boreholes, samples and tests; edit the set-up; override picks; re-run; submit. */
-  benchWork: holdsAnyRole(roles, ['technician', 'lab_manager']),
+  benchWork: holdsAnyRole(roles, ROLE_ACCESS.labWorkers),
   /** Send readings files and run imports: the technician who runs the test. */
-  importReadings: holdsAnyRole(roles, ['technician']),
+  importReadings: holdsAnyRole(roles, ROLE_ACCESS.importers),
   /** Approve or ask for changes (never a test one ran or submitted oneself: the server refuses that). */
-  review: holdsAnyRole(roles, ['lab_manager']),
+  review: holdsAnyRole(roles, ROLE_ACCESS.reviewers),
 });
 
 /** Who may open a test page: the lab, and designers following a soil record back to its test. */
-export const TEST_PAGE_ROLES: readonly Role[] = ['admin', 'technician', 'lab_manager', 'designer'];
+export const TEST_PAGE_ROLES: readonly Role[] = ROLE_ACCESS.labReaders;

@@ -1,4 +1,4 @@
-import { MemberRolesUpdateSchema } from '@porestack/types';
+import { MemberRolesUpdateSchema, ROLE_ACCESS } from '@porestack/types';
 import type { Router } from 'express';
 import { uuidParam } from '../../http/params.js';
 import { parse } from '../../http/parse.js';
@@ -11,7 +11,7 @@ export function membersRouter(): Router {
     {
       method: 'get',
       path: '/',
-      access: ['admin'],
+      access: ROLE_ACCESS.admins,
       handler: async (req, res) => {
         res.json(await listMembers(currentTenant(req).orgId));
       },
@@ -19,7 +19,7 @@ export function membersRouter(): Router {
     {
       method: 'patch',
       path: '/:userId',
-      access: ['admin'],
+      access: ROLE_ACCESS.admins,
       handler: async (req, res) => {
         const userId = uuidParam(req, 'userId', 'member');
         const { roles } = parse(MemberRolesUpdateSchema, req.body);
@@ -29,7 +29,7 @@ export function membersRouter(): Router {
     {
       method: 'delete',
       path: '/:userId',
-      access: ['admin'],
+      access: ROLE_ACCESS.admins,
       handler: async (req, res) => {
         await removeMember(currentTenant(req).orgId, uuidParam(req, 'userId', 'member'), currentUser(req));
         res.status(204).end();

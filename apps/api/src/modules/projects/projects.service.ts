@@ -1,4 +1,4 @@
-import type { ProjectCreate, ProjectDesigner, ProjectDetail, ProjectSummary, ProjectUpdate } from '@porestack/types';
+import type { ProjectCreate, ProjectDesigner, ProjectDetail, ProjectSummary, ProjectUpdate, Role } from '@porestack/types';
 import { ArrayContains, In, type EntityManager } from 'typeorm';
 import { dataSource } from '../../data-source.js';
 import { DomainError, NotFoundError } from '../../errors/domain-error.js';
@@ -58,8 +58,8 @@ export async function listProjects(orgId: string, scope: ProjectScope = { kind: 
 /** The organisation's members with the designer role: who can be attached to a project. */
 export async function listDesignerCandidates(orgId: string): Promise<ProjectDesigner[]> {
   const rows = (await dataSource.query(
-    "SELECT u.id AS user_id, u.name, u.email FROM memberships m JOIN users u ON u.id = m.user_id WHERE m.organisation_id = $1 AND 'designer' = ANY(m.roles) ORDER BY u.name",
-    [orgId],
+    'SELECT u.id AS user_id, u.name, u.email FROM memberships m JOIN users u ON u.id = m.user_id WHERE m.organisation_id = $1 AND $2 = ANY(m.roles) ORDER BY u.name',
+    [orgId, 'designer' satisfies Role],
   )) as Array<{ user_id: string; name: string; email: string }>;
   return rows.map((d) => ({ userId: d.user_id, name: d.name, email: d.email }));
 }

@@ -1,6 +1,6 @@
 import { createHash, randomUUID } from 'node:crypto';
 import type { Readable } from 'node:stream';
-import type { CsvDelimiter, ImportMapping, ImportRequest, JobRun, Upload, UploadPreview } from '@porestack/types';
+import { isFrozenTestStatus, type CsvDelimiter, type ImportMapping, type ImportRequest, type JobRun, type Upload, type UploadPreview } from '@porestack/types';
 import { dataSource } from '../../data-source.js';
 import { NotFoundError } from '../../errors/domain-error.js';
 import { logger } from '../../http/logger.js';
@@ -22,7 +22,6 @@ import { getUploadObject, putUploadObject, removeUploadObject, streamUploadObjec
 
 const CONTENT_TYPES = { csv: 'text/csv; charset=utf-8', xlsx: 'application/vnd.openxmlformats-officedocument.spreadsheetml.sheet' } as const;
 const PREVIEW_ROWS = 20;
-const LOCKED_STATUSES = new Set(['submitted', 'approved']);
 
 export interface Actor {
   id: string;
@@ -36,7 +35,7 @@ export interface ReceivedFile {
 
 async function assertReadingsMayChange(orgId: string, testId: string): Promise<void> {
   const test = await findTestOrThrow(orgId, testId);
-  if (LOCKED_STATUSES.has(test.status)) throw readingsLocked(test.status);
+  if (isFrozenTestStatus(test.status)) throw readingsLocked(test.status);
 }
 
 /**
