@@ -15,6 +15,8 @@ export default defineConfig({
       // The minimum the app allows: keeps the suite fast, still a real bcrypt cost.
       BCRYPT_COST: '10',
       SIGN_IN_RATE_LIMIT: '5',
+      // Damaged-file tests wait for the parse deadline: shorter than production's 20 s.
+      IMPORT_PARSE_SECONDS: '8',
     },
   },
 });
