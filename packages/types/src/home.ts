@@ -1,5 +1,6 @@
 import { z } from 'zod';
-import { TestStatusSchema, ProjectSummarySchema } from './lab/records.js';
+import { ProjectSummarySchema } from './lab/records.js';
+import { TestStatusSchema } from './lab/states.js';
 import { ReviewQueueItemSchema } from './lab/review.js';
 import { AuditEntrySchema, InvitationSchema } from './organisations.js';
 import { RoleSchema } from './roles.js';
@@ -81,7 +82,9 @@ export const HomeOverviewSchema = z.object({
   client: z.object({ projects: z.array(ProjectSummarySchema), recentResults: z.array(HomeApprovalSchema) }).nullable(),
   admin: z
     .object({
+      /** How many members hold each role (a member with two roles counts under both). */
       memberCounts: z.record(RoleSchema, z.number().int()),
+      memberTotal: z.number().int(),
       pendingInvitations: z.array(InvitationSchema),
       recentActivity: z.array(AuditEntrySchema),
     })

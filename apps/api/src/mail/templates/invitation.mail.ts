@@ -1,10 +1,10 @@
-import { ROLE_LABELS, type Role } from '@porestack/types';
+import { roleList, type Role } from '@porestack/types';
 import { renderMail, type MailContent } from './layout.js';
 
 export function invitationMail(input: {
   organisationName: string;
   invitedBy: string;
-  role: Role;
+  roles: readonly Role[];
   url: string;
   validDays: number;
   /** Projects shared with the invitee (a client invitation made by sharing). */
@@ -15,7 +15,7 @@ export function invitationMail(input: {
     subject: `${input.invitedBy} invited you to ${input.organisationName} on Porestack`,
     paragraphs: [
       'Hello,',
-      `${input.invitedBy} invited you to join ${input.organisationName} on Porestack as ${ROLE_LABELS[input.role]}.`,
+      `${input.invitedBy} invited you to join ${input.organisationName} on Porestack as ${roleList(input.roles)}.`,
       ...(projects.length > 0
         ? [`${projects.length === 1 ? 'The project' : 'The projects'} ${projects.join(', ')} ${projects.length === 1 ? 'is' : 'are'} shared with you: once you accept, you can read the approved test results and issued reports there.`]
         : []),

@@ -98,7 +98,23 @@ export async function recentApprovals(orgId: string, projectIds: readonly string
   }));
 }
 
-/** How many members hold each role. */
+/** How many members hold each role (a member holding two roles counts under both). */
 export async function memberCounts(orgId: string): Promise<Array<{ role: string; count: number }>> {
-  return (await dataSource.query('SELECT role, count(*)::int AS count FROM memberships WHERE organisation_id = $1 GROUP BY role', [orgId])) as Array<{ role: string; count: number }>;
+  return (await dataSource.query('SELECT role, count(*)::int AS count FROM memberships, unnest(roles) AS role WHERE organisation_id = $1 GROUP BY role', [orgId])) as Array<{
+    role: string;
+    count: number;
+  }>;
+}
+
+export async function memberTotal(orgId: string): Promise<number> {
+  const [row] = (await dataSource.query('SELECT count(*)::int AS n FROM memberships WHERE organisation_id = $1', [orgId])) as Array<{ n: number }>;
+  return row?.n ?? 0;
+}
+
+/** The projects a member holds a place on, as a designer or as a client. */
+export async function placedProjectIds(orgId: string, userId: string, place: 'designer' | 'client'): Promise<string[]> {
+  const rows = (await dataSource.query('SELECT project_id FROM project_members WHERE organisation_id = $1 AND user_id = $2 AND role = $3', [orgId, userId, place])) as Array<{
+    project_id: string;
+  }>;
+  return rows.map((row) => row.project_id);
 }

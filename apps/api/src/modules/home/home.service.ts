@@ -2,10 +2,10 @@ import { ROLES, TEST_STATUSES, type HomeOverview, type Role, type TestStatus, ty
 import type { TenantContext } from '../../http/request-context.js';
 import { audit } from '../audit/audit.service.js';
 import { listPendingInvitations } from '../invitations/invitations.service.js';
-import { projectView, tenantRoles, viewerOf, type Viewer } from '../projects/project-scope.js';
+import { viewerOf, type Viewer } from '../projects/project-scope.js';
 import { listProjects } from '../projects/projects.service.js';
 import { reviewQueue } from '../reviews/reviews.service.js';
-import { memberCounts, recentApprovals, stuckTests, technicianTests, type TechnicianTest } from './home-queries.js';
+import { memberCounts, memberTotal, placedProjectIds, recentApprovals, stuckTests, technicianTests, type TechnicianTest } from './home-queries.js';
 
 /** Most urgent first: a failure to deal with, the manager's request, then what is ready to send on, then what still needs readings. */
 const URGENCY: Record<WaitingTest['reason'], number> = { analysis_failed: 0, import_failed: 0, changes_requested: 1, ready_to_submit: 2, needs_readings: 3 };
@@ -43,8 +43,10 @@ async function countMembers(orgId: string): Promise<Record<Role, number>> {
   return counts;
 }
 
-async function projectsViewedAs(viewer: Viewer, view: 'designer' | 'client') {
-  return (await listProjects(viewer)).filter((project) => projectView(viewer, project.id) === view);
+/** The projects the member is on as a designer or as a client (a lab member holding that role too is listed on theirs). */
+async function placedProjects(viewer: Viewer, place: 'designer' | 'client') {
+  const ids = new Set(await placedProjectIds(viewer.orgId, viewer.userId, place));
+  return (await listProjects(viewer)).filter((project) => ids.has(project.id));
 }
 
 /**
@@ -52,10 +54,10 @@ async function projectsViewedAs(viewer: Viewer, view: 'designer' | 'client') {
  * role may read (clients and designers through their project scope).
  */
 export async function homeOverview(tenant: TenantContext, userId: string): Promise<HomeOverview> {
-  const roles = new Set<Role>(tenantRoles(tenant));
+  const roles = new Set<Role>(tenant.roles);
   const viewer = await viewerOf(tenant, userId);
   const orgId = tenant.orgId;
-  const clientProjects = roles.has('client') ? await projectsViewedAs(viewer, 'client') : [];
+  const clientProjects = roles.has('client') ? await placedProjects(viewer, 'client') : [];
   return {
     technician: roles.has('technician') ? await technicianSection(viewer) : null,
     labManager: roles.has('lab_manager')
@@ -65,13 +67,14 @@ export async function homeOverview(tenant: TenantContext, userId: string): Promi
           stuckTests: await stuckTests(orgId, 20),
         }
       : null,
-    designer: roles.has('designer') ? { projects: await projectsViewedAs(viewer, 'designer') } : null,
+    designer: roles.has('designer') ? { projects: await placedProjects(viewer, 'designer') } : null,
     client: roles.has('client')
       ? { projects: clientProjects, recentResults: await recentApprovals(orgId, clientProjects.map((p) => p.id), { limit: 10, currentOnly: true }) }
       : null,
     admin: roles.has('admin')
       ? {
           memberCounts: await countMembers(orgId),
+          memberTotal: await memberTotal(orgId),
           pendingInvitations: await listPendingInvitations(orgId),
           recentActivity: await audit.list(orgId, 8),
         }

@@ -33,7 +33,7 @@ function toDto(row: InvitationEntity, projects: SharedProject[]): Invitation {
   return {
     id: row.id,
     email: row.email,
-    role: row.role,
+    roles: row.roles,
     invitedBy: row.invitedBy.name,
     createdAt: row.createdAt.toISOString(),
     expiresAt: row.expiresAt.toISOString(),
@@ -69,13 +69,14 @@ async function isMember(manager: EntityManager, orgId: string, email: string): P
  * as a client on accepting; the projects of a replaced pending client invitation are kept too.
  */
 export async function createInvitation(orgId: string, actor: UserEntity, input: InvitationCreate, projectIds: readonly string[] = []): Promise<Invitation> {
-  if (projectIds.length > 0 && input.role !== 'client') throw new Error('createInvitation: projects are shared with clients only');
+  const asClient = input.roles.includes('client');
+  if (projectIds.length > 0 && !asClient) throw new Error('createInvitation: projects are shared with clients only');
   const { token, tokenHash } = createOneTimeToken();
   const { row, projects } = await dataSource.transaction(async (manager) => {
     if (await isMember(manager, orgId, input.email)) throw alreadyMember(input.email);
     const invitations = manager.getRepository(InvitationEntity);
     const pending = await invitations.findBy({ organisationId: orgId, email: input.email, acceptedAt: IsNull(), revokedAt: IsNull(), expiresAt: MoreThan(new Date()) });
-    const carried = input.role === 'client' ? [...(await sharedProjects(manager, pending.filter((p) => p.role === 'client').map((p) => p.id))).values()].flat().map((p) => p.id) : [];
+    const carried = asClient ? [...(await sharedProjects(manager, pending.filter((p) => p.roles.includes('client')).map((p) => p.id))).values()].flat().map((p) => p.id) : [];
     await invitations.update(
       { organisationId: orgId, email: input.email, acceptedAt: IsNull(), revokedAt: IsNull() },
       { revokedAt: new Date() },
@@ -84,7 +85,7 @@ export async function createInvitation(orgId: string, actor: UserEntity, input: 
       invitations.create({
         organisationId: orgId,
         email: input.email,
-        role: input.role,
+        roles: input.roles,
         tokenHash,
         invitedById: actor.id,
         expiresAt: new Date(Date.now() + INVITATION_DAYS * 24 * 3600_000),
@@ -102,7 +103,7 @@ export async function createInvitation(orgId: string, actor: UserEntity, input: 
         action: 'invitation.created',
         objectType: 'invitation',
         objectId: saved.id,
-        details: { email: input.email, role: input.role, ...(shared.length > 0 ? { projects: shared.map((p) => p.reference) } : {}) },
+        details: { email: input.email, roles: input.roles, ...(shared.length > 0 ? { projects: shared.map((p) => p.reference) } : {}) },
       },
       manager,
     );
@@ -121,7 +122,7 @@ export async function createInvitation(orgId: string, actor: UserEntity, input: 
         invitationMail({
           organisationName: organisation.name,
           invitedBy: actor.name,
-          role: input.role,
+          roles: input.roles,
           url: publicLink(`/invitations/${encodeURIComponent(token)}`),
           validDays: INVITATION_DAYS,
           projectNames: shared.map((p) => p.name),
@@ -160,7 +161,7 @@ export async function revokeInvitation(orgId: string, invitationId: string, acto
         action: 'invitation.revoked',
         objectType: 'invitation',
         objectId: row.id,
-        details: { email: row.email, role: row.role },
+        details: { email: row.email, roles: row.roles },
       },
       manager,
     );
@@ -188,7 +189,7 @@ export async function previewInvitation(token: string): Promise<InvitationPrevie
   return {
     organisationName: row.organisation.name,
     email: row.email,
-    role: row.role,
+    roles: row.roles,
     invitedBy: row.invitedBy.name,
     accountExists,
     expiresAt: row.expiresAt.toISOString(),
@@ -217,8 +218,8 @@ export async function acceptInvitation(token: string, input: InvitationAccept): 
         manager,
       );
     }
-    await manager.getRepository(MembershipEntity).insert({ organisationId: row.organisationId, userId: user.id, role: row.role });
-    if (row.role === 'client') {
+    await manager.getRepository(MembershipEntity).insert({ organisationId: row.organisationId, userId: user.id, roles: row.roles });
+    if (row.roles.includes('client')) {
       // The projects shared through the invitation: the new client's places.
       await manager.query(
         `INSERT INTO project_members (organisation_id, project_id, user_id, role, added_by_id)
@@ -235,7 +236,7 @@ export async function acceptInvitation(token: string, input: InvitationAccept): 
         action: 'invitation.accepted',
         objectType: 'invitation',
         objectId: row.id,
-        details: { email: row.email, role: row.role },
+        details: { email: row.email, roles: row.roles },
       },
       manager,
     );

@@ -1,4 +1,4 @@
-import { ROLE_LABELS, type ProjectClient, type ProjectClientInvitation, type ProjectClients, type ProjectShareOutcome } from '@porestack/types';
+import { holdsAnyRole, roleList, type ProjectClient, type ProjectClientInvitation, type ProjectClients, type ProjectShareOutcome } from '@porestack/types';
 import type { EntityManager } from 'typeorm';
 import { dataSource } from '../../data-source.js';
 import { DomainError, NotFoundError } from '../../errors/domain-error.js';
@@ -51,14 +51,21 @@ export async function listProjectClients(orgId: string, projectId: string): Prom
   return { clients: await clients(dataSource.manager, orgId, projectId), invitations: await pendingInvitations(dataSource.manager, orgId, projectId) };
 }
 
-/** Why a member of another role is not given a client's place (they already see more, or are placed another way). */
-function notAClient(email: string, role: MembershipEntity['role']): DomainError {
-  if (ORGANISATION_WIDE_ROLES.includes(role)) {
-    return emailIssue(`${email} is a member here as ${ROLE_LABELS[role]} and already sees every project; there is nothing to share.`);
+/**
+ * Why a member is not given a client's place: lab staff already see every project; a member
+ * without the client role gets it from an administrator first (lab managers share, they do not
+ * hand out roles).
+ */
+function notAClient(email: string, roles: MembershipEntity['roles']): DomainError | null {
+  if (holdsAnyRole(roles, ORGANISATION_WIDE_ROLES)) {
+    return emailIssue(`${email} is a member here as ${roleList(roles)} and already sees every project; there is nothing to share.`);
   }
-  return emailIssue(
-    `${email} is a member here as ${ROLE_LABELS[role]}. Designers are put on a project through its designers list; to give them a client's view instead, an administrator changes their role first.`,
-  );
+  if (!roles.includes('client')) {
+    return emailIssue(
+      `${email} is a member here as ${roleList(roles)}, not as a client. Designers are put on a project through its designers list; for a client's view, an administrator adds the client role to them first.`,
+    );
+  }
+  return null;
 }
 
 /**
@@ -77,11 +84,12 @@ export async function shareProject(orgId: string, projectId: string, email: stri
       .where('m.organisation_id = :orgId AND u.email = :email', { orgId, email })
       .getOne();
     if (!membership) return null;
-    if (membership.role !== 'client') throw notAClient(email, membership.role);
+    const refusal = notAClient(email, membership.roles);
+    if (refusal) throw refusal;
     const places = manager.getRepository(ProjectMemberEntity);
-    if (await places.existsBy({ organisationId: orgId, projectId, userId: membership.userId })) {
-      throw emailIssue(`${project.name} is already shared with ${email}.`);
-    }
+    const place = await places.findOneBy({ organisationId: orgId, projectId, userId: membership.userId });
+    if (place?.role === 'designer') throw emailIssue(`${email} is already on ${project.name} as one of its designers, who read all that a client reads and more.`);
+    if (place) throw emailIssue(`${project.name} is already shared with ${email}.`);
     await places.insert({ organisationId: orgId, projectId, userId: membership.userId, role: 'client', addedById: actor.id });
     await audit.record(
       { organisationId: orgId, actorUserId: actor.id, action: 'project.shared', objectType: 'project', objectId: projectId, details: { email, reference: project.reference, by: 'existing account' } },
@@ -102,7 +110,7 @@ export async function shareProject(orgId: string, projectId: string, email: stri
     return client;
   });
   if (member) return { outcome: 'shared', client: member };
-  const invitation = await createInvitation(orgId, actor, { email, role: 'client' }, [projectId]);
+  const invitation = await createInvitation(orgId, actor, { email, roles: ['client'] }, [projectId]);
   return {
     outcome: 'invited',
     invitation: { invitationId: invitation.id, email: invitation.email, invitedAt: invitation.createdAt, expiresAt: invitation.expiresAt, invitedByName: invitation.invitedBy },
@@ -141,7 +149,7 @@ export async function withdrawClientInvitation(orgId: string, projectId: string,
     if ((left?.n ?? 0) === 0) {
       await manager.query('UPDATE invitations SET revoked_at = now() WHERE organisation_id = $1 AND id = $2', [orgId, invitationId]);
       await audit.record(
-        { organisationId: orgId, actorUserId: actor.id, action: 'invitation.revoked', objectType: 'invitation', objectId: invitationId, details: { email: pending.email, role: 'client' } },
+        { organisationId: orgId, actorUserId: actor.id, action: 'invitation.revoked', objectType: 'invitation', objectId: invitationId, details: { email: pending.email, roles: ['client'] } },
         manager,
       );
     }

@@ -1,4 +1,4 @@
-import type { Role, TestStatus } from '@porestack/types';
+import { holdsAnyRole, LAB_STAFF_ROLES, type Role, type TestStatus } from '@porestack/types';
 import type { EntityManager } from 'typeorm';
 import { dataSource } from '../../data-source.js';
 import { NotFoundError } from '../../errors/domain-error.js';
@@ -29,14 +29,16 @@ import { currentTenant, currentUser, type TenantContext } from '../../http/reque
  */
 
 /** Roles that work across the whole organisation: the laboratory's own staff. */
-export const ORGANISATION_WIDE_ROLES: readonly Role[] = ['admin', 'technician', 'lab_manager'];
+export const ORGANISATION_WIDE_ROLES: readonly Role[] = LAB_STAFF_ROLES;
 
 /** How a member reads one project: the laboratory's whole view, a designer's, or a client's. */
 export type ProjectView = 'lab' | 'designer' | 'client';
 
 /**
- * Which projects a member may see. Lab staff: every project of the organisation; designers and
- * clients: the projects they are on, and in which of them they read as a designer.
+ * Which projects a member may see. Lab staff: every project of the organisation (a member holding
+ * any lab role beside designer or client too); designers and clients: the projects they are on,
+ * and in which of them they read as a designer (a designer-and-client reads each project by the
+ * place they hold on it).
  */
 export type ProjectScope =
   | { readonly kind: 'organisation' }
@@ -49,18 +51,13 @@ export interface Viewer {
   readonly scope: ProjectScope;
 }
 
-/** The roles the member holds in the request's organisation. */
-export function tenantRoles(tenant: TenantContext): readonly Role[] {
-  return [tenant.role];
-}
-
 export function seesWholeOrganisation(tenant: TenantContext): boolean {
-  return tenantRoles(tenant).some((role) => ORGANISATION_WIDE_ROLES.includes(role));
+  return holdsAnyRole(tenant.roles, ORGANISATION_WIDE_ROLES);
 }
 
 export async function projectScope(tenant: TenantContext, userId: string, manager: EntityManager = dataSource.manager): Promise<ProjectScope> {
   if (seesWholeOrganisation(tenant)) return { kind: 'organisation' };
-  const placeRoles = tenantRoles(tenant).filter((role) => role === 'designer' || role === 'client');
+  const placeRoles = tenant.roles.filter((role) => role === 'designer' || role === 'client');
   const rows = (await manager.query('SELECT project_id, role FROM project_members WHERE organisation_id = $1 AND user_id = $2 AND role = ANY($3::text[])', [
     tenant.orgId,
     userId,

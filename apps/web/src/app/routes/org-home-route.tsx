@@ -1,4 +1,4 @@
-import { ROLE_LABELS, type HomeOverview } from '@porestack/types';
+import { roleList, type HomeOverview } from '@porestack/types';
 import { EmptyState } from '../../components/empty-state';
 import { ErrorMessage } from '../../components/error-message';
 import { PageHeader } from '../../components/page-header';
@@ -79,7 +79,8 @@ export function OrgHomeRoute() {
         title={membership.organisationName}
         description={
           <>
-            You are <strong className="font-medium text-slate-800">{ROLE_LABELS[membership.role].toLowerCase()}</strong> here. {ROLE_SUMMARIES[membership.role]}
+            You are <strong className="font-medium text-slate-800">{roleList(membership.roles).toLowerCase()}</strong> here.{' '}
+            {membership.roles.map((role) => ROLE_SUMMARIES[role]).join(' ')}
           </>
         }
       />

@@ -30,10 +30,11 @@ export function ProjectRoute() {
   );
 }
 
-/** Clients read the project's issued results; the lab and designers work on it. */
+/** Clients read the project's issued results; the lab and designers work on it (a member holding a lab or designer role beside client gets theirs). */
 function ProjectPage() {
   const { membership } = useCurrentOrg();
-  return membership.role === 'client' ? <ClientProjectPage /> : <LabProjectPage />;
+  const onlyClient = membership.roles.every((role) => role === 'client');
+  return onlyClient ? <ClientProjectPage /> : <LabProjectPage />;
 }
 
 function BackToProjects({ orgId }: { orgId: string }) {
@@ -109,7 +110,7 @@ function LabProjectPage() {
   const project = useProject(orgId, projectId);
   const boreholes = useBoreholes(orgId, projectId);
   const tests = useProjectTests(orgId, projectId);
-  const may = labPermissions(membership.role);
+  const may = labPermissions(membership.roles);
 
   if (project.isPending) return <LoadingBlock label="Loading the project…" />;
   if (project.error) return <ErrorMessage error={project.error} title="The project could not be loaded" onRetry={() => void project.refetch()} />;

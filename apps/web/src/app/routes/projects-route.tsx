@@ -46,12 +46,13 @@ function ProjectsPage() {
   const { orgId, membership } = useCurrentOrg();
   const projects = useProjects(orgId);
   const navigate = useNavigate();
-  const words = WORDING[membership.role === 'client' || membership.role === 'designer' ? membership.role : 'lab'];
+  const may = labPermissions(membership.roles);
+  const words = WORDING[may.readsLabWork ? 'lab' : membership.roles.includes('designer') ? 'designer' : 'client'];
   return (
     <>
       <PageHeader title="Projects" description={words.description} />
       <div className="flex flex-col gap-6">
-        {labPermissions(membership.role).editProjects ? (
+        {labPermissions(membership.roles).editProjects ? (
           <DisclosureForm openLabel="New project" size="md">
             {(close) => <ProjectCreateForm orgId={orgId} onCancel={close} onCreated={(project) => navigate(paths.org.project.to(orgId, project.id))} />}
           </DisclosureForm>
@@ -64,7 +65,7 @@ function ProjectsPage() {
           ) : projects.data.length === 0 ? (
             <Padded><EmptyState title="No projects yet">{words.empty}</EmptyState></Padded>
           ) : (
-            <ProjectsTable orgId={orgId} projects={projects.data} {...(membership.role === 'client' ? { testsHeader: 'Approved tests' } : {})} />
+            <ProjectsTable orgId={orgId} projects={projects.data} {...(words === WORDING.client ? { testsHeader: 'Approved tests' } : {})} />
           )}
         </Panel>
       </div>

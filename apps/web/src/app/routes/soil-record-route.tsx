@@ -62,7 +62,7 @@ function SoilRecordPage() {
           <EngineeringCaution />
           {shown ? (
             <Panel title={`Version ${shown.version}`}>
-              <VersionView orgId={orgId} version={shown} isCurrent={shown.supersededAt === null} labTestLink={labPermissions(membership.role).readsLabWork} />
+              <VersionView orgId={orgId} version={shown} isCurrent={shown.supersededAt === null} labTestLink={labPermissions(membership.roles).readsLabWork} />
             </Panel>
           ) : null}
         </div>

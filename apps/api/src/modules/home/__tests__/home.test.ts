@@ -30,7 +30,9 @@ describe('home pages', () => {
     const notTheirs = await draftTest(orgId, otherTech.userId);
     const elsewhere = await approvedTest(orgId, otherTech.userId, manager.userId);
     await placeOnProject(orgId, approved.projectId, client.userId, 'client');
-    await admin.browser.post(`/api/orgs/${orgId}/invitations`, { email: uniqueEmail('home-pending'), role: 'technician' }).expect(201);
+    await admin.browser.post(`/api/orgs/${orgId}/invitations`, { email: uniqueEmail('home-pending'), roles: ['technician'] }).expect(201);
+    const both = await createMember(orgId, ['technician', 'designer'], 'home-both');
+    await placeOnProject(orgId, elsewhere.projectId, both.userId, 'designer');
     await admin.browser.patch(`/api/orgs/${orgId}/projects/${approved.projectId}`, { siteName: 'North yard' }).expect(200);
 
     const homeOf = async (email: string) => (await (await signedInBrowser(app, email)).get(`/api/orgs/${orgId}/home`).expect(200)).body as HomeOverview;
@@ -61,8 +63,16 @@ describe('home pages', () => {
     expect(JSON.stringify(clientHome)).not.toContain(elsewhere.testId);
 
     const adminHome = await homeOf(admin.email);
-    expect(adminHome.admin?.memberCounts).toEqual({ admin: 1, technician: 2, lab_manager: 1, designer: 1, client: 1 });
-    expect(adminHome.admin?.pendingInvitations.map((i) => i.role)).toEqual(['technician']);
+    // Seven members; the one holding technician and designer counts under both roles.
+    expect(adminHome.admin?.memberTotal).toBe(7);
+    expect(adminHome.admin?.memberCounts).toEqual({ admin: 1, technician: 3, lab_manager: 1, designer: 2, client: 1 });
+    expect(adminHome.admin?.pendingInvitations.map((i) => i.roles)).toEqual([['technician']]);
+
+    // A member holding two roles gets both sections: their own tests (none) and the project they design.
+    const bothHome = await homeOf(both.email);
+    expect(bothHome.technician?.waiting).toEqual([]);
+    expect(bothHome.designer?.projects.map((p) => p.id)).toEqual([elsewhere.projectId]);
+    expect([bothHome.labManager, bothHome.client, bothHome.admin]).toEqual([null, null, null]);
     const edit = adminHome.admin?.recentActivity.find((e) => e.action === 'project.updated') as AuditEntry;
     expect(edit.objectLabel).toMatch(/^FX-.* Fixture project/);
     expect(edit.details['changes']).toEqual([{ field: 'siteName', from: '', to: 'North yard' }]);

@@ -267,6 +267,32 @@ describe('a designer of a project', () => {
   });
 });
 
+describe('a member holding the designer and the client role', () => {
+  it('when they are a designer on one project and a client of another, then each project reads by the place held on it', async () => {
+    const both = await createMember(w.orgId, ['designer', 'client'], 'scope-both');
+    await placeOnProject(w.orgId, w.p1.projectId, both.userId, 'designer');
+    await placeOnProject(w.orgId, w.p2.projectId, both.userId, 'client');
+    const browser = await signedInBrowser(app, both.email);
+    const projects = (await browser.get(api('/projects')).expect(200)).body as ProjectSummary[];
+    expect(projects.map((p) => p.id).sort()).toEqual([w.p1.projectId, w.p2.projectId].sort());
+    // Designer on P1: its approved test opens; client of P2: its approved test does not, its record does, without the lab's status.
+    await browser.get(api(`/tests/${w.p1.testId}`)).expect(200);
+    await browser.get(api(`/tests/${w.p2.testId}`)).expect(404);
+    const records = (await browser.get(api('/soil-records')).expect(200)).body as SoilRecordSummary[];
+    const statusOf = Object.fromEntries(records.map((r) => [r.id, r.testStatus]));
+    expect([statusOf[w.p1.recordId], statusOf[w.p2.recordId]]).toEqual(['approved', null]);
+    expect(records.every((r) => r.projectId === w.p1.projectId || r.projectId === w.p2.projectId)).toBe(true);
+    expect(((await browser.get(api(`/projects/${w.p2.projectId}`)).expect(200)).body as ProjectDetail).designers).toEqual([]);
+  });
+
+  it('when a lab member also holds the designer role, then they see the whole laboratory', async () => {
+    const both = await createMember(w.orgId, ['technician', 'designer'], 'scope-tech-designer');
+    const browser = await signedInBrowser(app, both.email);
+    await browser.get(api(`/tests/${w.p1Draft.testId}`)).expect(200);
+    await browser.get(api(`/projects/${w.p2.projectId}`)).expect(200);
+  });
+});
+
 describe('lab staff', () => {
   it('when a technician lists tests and projects, then every project of the organisation, and only of it', async () => {
     const tests = (await w.technician.get(api('/tests')).expect(200)).body as TestSummary[];

@@ -78,14 +78,14 @@ describe('sharing a project with a client', () => {
     const token = decodeURIComponent(link.slice(`${publicUrl()}/invitations/`.length));
     const invitee = await openBrowser(app);
     const preview = (await invitee.get(`/api/invitations/${token}`).expect(200)).body as InvitationPreview;
-    expect(preview).toMatchObject({ role: 'client', accountExists: false, projectNames: [expect.stringMatching(/^Fixture project/)] });
+    expect(preview).toMatchObject({ roles: ['client'], accountExists: false, projectNames: [expect.stringMatching(/^Fixture project/)] });
     const listed = (await managerBrowser.get(clientsPath).expect(200)).body as ProjectClients;
     expect(listed.invitations.map((i) => i.email)).toEqual([email]);
     const pending = (await admin.browser.get(`/api/orgs/${admin.orgId}/invitations`).expect(200)).body as Invitation[];
-    expect(pending.map((i) => [i.email, i.role, i.projects.map((p) => p.id)])).toEqual([[email, 'client', [project.projectId]]]);
+    expect(pending.map((i) => [i.email, i.roles, i.projects.map((p) => p.id)])).toEqual([[email, ['client'], [project.projectId]]]);
 
     const session = (await invitee.post(`/api/invitations/${token}/accept`, { name: 'Nia Client', password: TEST_PASSWORD }).expect(200)).body as Session;
-    expect(session.memberships.map((m) => m.role)).toEqual(['client']);
+    expect(session.memberships.map((m) => m.roles)).toEqual([['client']]);
     const seen = ((await invitee.get(`/api/orgs/${admin.orgId}/projects`).expect(200)).body as ProjectSummary[]).map((p) => p.id);
     expect(seen).toEqual([project.projectId]);
     await invitee.get(`/api/orgs/${admin.orgId}/projects/${other.projectId}`).expect(404);

@@ -1,4 +1,4 @@
-import { ROLE_LABELS, ROLES, type HomeOverview } from '@porestack/types';
+import { ROLE_LABELS, roleList, ROLES, type HomeOverview } from '@porestack/types';
 import { Link } from 'react-router-dom';
 import { Panel } from '../../../components/panel';
 import { paths } from '../../../config/paths';
@@ -6,9 +6,9 @@ import { formatDate } from '../../../lib/format';
 
 /** The administrator's members and pending invitations at a glance (recent activity is composed beside it). */
 export function AdminMembersPanel({ orgId, section }: { orgId: string; section: NonNullable<HomeOverview['admin']> }) {
-  const total = ROLES.reduce((n, role) => n + section.memberCounts[role], 0);
+  const total = section.memberTotal;
   return (
-    <Panel title="Members" description={`${total} ${total === 1 ? 'member' : 'members'} in all.`}>
+    <Panel title="Members" description={`${total} ${total === 1 ? 'member' : 'members'} in all; one member may hold several roles.`}>
       <ul className="grid grid-cols-2 gap-x-6 gap-y-1 text-sm sm:grid-cols-3" aria-label="Members by role">
         {ROLES.map((role) => (
           <li key={role} className="flex justify-between gap-2">
@@ -25,7 +25,7 @@ export function AdminMembersPanel({ orgId, section }: { orgId: string; section: 
           {section.pendingInvitations.map((i) => (
             <li key={i.id} className="flex flex-wrap justify-between gap-x-4 py-1.5">
               <span>
-                <span className="font-medium text-slate-900">{i.email}</span> <span className="text-slate-600">as {ROLE_LABELS[i.role]}</span>
+                <span className="font-medium text-slate-900">{i.email}</span> <span className="text-slate-600">as {roleList(i.roles)}</span>
                 {i.projects.length > 0 ? <span className="block text-xs text-slate-600">with {i.projects.map((p) => p.reference).join(', ')}</span> : null}
               </span>
               <span className="text-xs text-slate-600">until {formatDate(i.expiresAt)}</span>

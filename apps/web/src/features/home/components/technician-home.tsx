@@ -1,7 +1,7 @@
-import { TEST_STATUSES, type HomeOverview, type WaitingTest } from '@porestack/types';
+import { TEST_STATUS_HINTS, TEST_STATUS_LABELS, TEST_STATUSES, type HomeOverview, type WaitingTest } from '@porestack/types';
 import { Link } from 'react-router-dom';
 import { Panel } from '../../../components/panel';
-import { TEST_STATUS_HINTS, TEST_STATUS_WORDS, TestStatusBadge } from '../../../components/test-status-badge';
+import { TestStatusBadge } from '../../../components/test-status-badge';
 import { paths } from '../../../config/paths';
 import { formatDateTime } from '../../../lib/format';
 import { HomeList } from './home-list';
@@ -42,7 +42,7 @@ export function TechnicianHome({ orgId, section }: { orgId: string; section: Non
           {TEST_STATUSES.map((status) => (
             <li key={status} className="flex items-center justify-between gap-3 text-sm" title={TEST_STATUS_HINTS[status]}>
               <TestStatusBadge status={status} />
-              <span className="tabular-nums font-medium text-slate-900" aria-label={`${TEST_STATUS_WORDS[status]}: ${section.countsByStatus[status]}`}>
+              <span className="tabular-nums font-medium text-slate-900" aria-label={`${TEST_STATUS_LABELS[status]}: ${section.countsByStatus[status]}`}>
                 {section.countsByStatus[status]}
               </span>
             </li>

@@ -36,9 +36,12 @@ describe('describeEntry(entry)', () => {
     );
   });
 
-  it('gives roles and statuses their labels', () => {
-    expect(describeEntry(entry({ action: 'member.role_changed', objectType: 'user', objectLabel: 'Tomas', details: { from: 'technician', to: 'lab_manager' } }))).toBe(
-      'Changed the role of Tomas: Technician → Lab manager',
+  it('gives roles their labels, a set of roles as a list', () => {
+    expect(describeEntry(entry({ action: 'member.role_changed', objectType: 'user', objectLabel: 'Tomas', details: { from: ['technician'], to: ['technician', 'lab_manager'] } }))).toBe(
+      'Changed the roles of Tomas: Technician → Technician and Lab manager',
+    );
+    expect(describeEntry(entry({ action: 'invitation.created', objectType: 'invitation', objectLabel: 'a@x.test', details: { email: 'a@x.test', roles: ['client'], projects: ['PLM-2041'] } }))).toBe(
+      'Invited a@x.test as Client, with project PLM-2041',
     );
   });
 

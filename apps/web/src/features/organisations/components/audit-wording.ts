@@ -1,4 +1,4 @@
-import { ROLE_LABELS, RoleSchema, TEST_STATUS_LABELS, TestStatusSchema, type AuditEntry } from '@porestack/types';
+import { ROLE_LABELS, RoleSchema, RolesSchema, roleList, TEST_STATUS_LABELS, TestStatusSchema, type AuditEntry } from '@porestack/types';
 
 /** Words for a field of an edited object, as the activity page names it. */
 const FIELD_WORDS: Record<string, string> = {
@@ -26,6 +26,8 @@ const FIELD_WORDS: Record<string, string> = {
 export function describeValue(value: unknown): string {
   const role = RoleSchema.safeParse(value);
   if (role.success) return ROLE_LABELS[role.data];
+  const roles = RolesSchema.safeParse(value);
+  if (roles.success) return roleList(roles.data);
   const status = TestStatusSchema.safeParse(value);
   if (status.success) return TEST_STATUS_LABELS[status.data];
   if (value === null || value === undefined || value === '') return '—';
@@ -49,6 +51,9 @@ export function describeChanges(changes: unknown): string | null {
   const parts = changes.filter(isChange).map((c) => `${FIELD_WORDS[c.field] ?? c.field.replace(/([a-z])([A-Z])/g, '$1 $2').toLowerCase()}: ${describeValue(c.from)} → ${describeValue(c.to)}`);
   return parts.length === 0 ? 'nothing changed' : parts.join('; ');
 }
+
+/** The roles an entry names: `roles` (a set, since memberships hold several) or the single `role` of older entries. */
+const rolesOf = (details: Record<string, unknown>) => describeValue(details['roles'] ?? details['role']);
 
 const text = (value: unknown) => (typeof value === 'string' && value !== '' ? value : null);
 
@@ -77,12 +82,12 @@ const SENTENCES: Record<string, Sentence> = {
   'organisation.created': (_e, o) => `Created the ${o}`,
   'invitation.created': (e) => {
     const projects = Array.isArray(e.details['projects']) ? (e.details['projects'] as unknown[]).map(String) : [];
-    return `Invited ${describeValue(e.details['email'])} as ${describeValue(e.details['role'])}${projects.length > 0 ? `, with project ${projects.join(', ')}` : ''}`;
+    return `Invited ${describeValue(e.details['email'])} as ${rolesOf(e.details)}${projects.length > 0 ? `, with project ${projects.join(', ')}` : ''}`;
   },
-  'invitation.revoked': (e) => `Withdrew the invitation of ${describeValue(e.details['email'])} (${describeValue(e.details['role'])})`,
-  'invitation.accepted': (e) => `Accepted the invitation and joined as ${describeValue(e.details['role'])}`,
-  'member.role_changed': (e, o) => `Changed the role of ${o}: ${describeValue(e.details['from'])} → ${describeValue(e.details['to'])}`,
-  'member.removed': (e, o) => `Removed ${o} (${describeValue(e.details['role'])}) from the organisation`,
+  'invitation.revoked': (e) => `Withdrew the invitation of ${describeValue(e.details['email'])} (${rolesOf(e.details)})`,
+  'invitation.accepted': (e) => `Accepted the invitation and joined as ${rolesOf(e.details)}`,
+  'member.role_changed': (e, o) => `Changed the roles of ${o}: ${describeValue(e.details['from'])} → ${describeValue(e.details['to'])}`,
+  'member.removed': (e, o) => `Removed ${o} (${rolesOf(e.details)}) from the organisation`,
   'project.created': (_e, o) => `Created ${o}`,
   'project.updated': (e, o) => `Edited ${o}: ${describeChanges(e.details['changes']) ?? 'details changed'}`,
   'project.shared': (e, o) => `Shared ${o} with ${describeValue(e.details['email'])}${e.details['by'] === 'invitation' ? ' (invited as a client)' : ''}`,

@@ -1,4 +1,4 @@
-import { ROLE_LABELS, type Invitation } from '@porestack/types';
+import { roleList, type Invitation } from '@porestack/types';
 import { createColumnHelper, getCoreRowModel, useReactTable } from '@tanstack/react-table';
 import { useMemo, useState } from 'react';
 import { Button } from '../../../components/button';
@@ -17,11 +17,11 @@ export function InvitationsTable({ orgId, invitations }: { orgId: string; invita
   const columns = useMemo(
     () => [
       column.accessor('email', { header: 'E-mail', cell: (info) => <span className="font-medium text-slate-900">{info.getValue()}</span> }),
-      column.accessor('role', {
-        header: 'Role',
+      column.accessor('roles', {
+        header: 'Roles',
         cell: (info) => (
           <>
-            {ROLE_LABELS[info.getValue()]}
+            {roleList(info.getValue())}
             {info.row.original.projects.length > 0 ? <span className="block text-xs text-slate-500">with {info.row.original.projects.map((p) => p.reference).join(', ')}</span> : null}
           </>
         ),
