@@ -1,6 +1,5 @@
 import type { Router } from 'express';
-import { NotFoundError } from '../../errors/domain-error.js';
-import { uuidParam } from '../../http/params.js';
+import { uuidParam, versionParam } from '../../http/params.js';
 import { defineRoutes } from '../../http/routes.js';
 import { RECORD_READERS } from '../projects/lab-roles.js';
 import { viewerFor } from '../projects/project-scope.js';
@@ -20,8 +19,7 @@ export function issuedResultsRouter(): Router {
       path: '/soil-records/:recordId/versions/:version/summary',
       access: RECORD_READERS,
       handler: async (req, res) => {
-        const version = Number(req.params['version']);
-        if (!Number.isInteger(version) || version < 1) throw new NotFoundError('soil record version');
+        const version = versionParam(req);
         res.json(await issuedTestSummary(await viewerFor(req), uuidParam(req, 'recordId', 'soil record'), version));
       },
     },

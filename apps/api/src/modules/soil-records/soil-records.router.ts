@@ -1,7 +1,6 @@
 import { SoilRecordListQuerySchema } from '@porestack/types';
 import type { Router } from 'express';
-import { NotFoundError } from '../../errors/domain-error.js';
-import { uuidParam } from '../../http/params.js';
+import { uuidParam, versionParam } from '../../http/params.js';
 import { parse } from '../../http/parse.js';
 import { defineRoutes } from '../../http/routes.js';
 import { RECORD_READERS } from '../projects/lab-roles.js';
@@ -27,8 +26,7 @@ export function soilRecordsRouter(): Router {
       path: '/:recordId/versions/:version',
       access: RECORD_READERS,
       handler: async (req, res) => {
-        const version = Number(req.params['version']);
-        if (!Number.isInteger(version) || version < 1) throw new NotFoundError('soil record version');
+        const version = versionParam(req);
         res.json(await getSoilRecordVersion(await viewerFor(req), uuidParam(req, 'recordId', 'soil record'), version));
       },
     },
