@@ -5,7 +5,7 @@ import { ANALYSE_TEST_QUEUE } from '../../jobs/analyse-test-queue.js';
 import { AnalysisEntity } from '../analyses/analysis.entity.js';
 import { toAnalysisSummary } from '../analyses/analyses.service.js';
 import { jobRuns } from '../job-runs/job-runs.service.js';
-import { assertTestOpenable, openableTestsSql, type Viewer } from '../projects/project-scope.js';
+import { assertProjectVisible, assertTestOpenable, openableTestsSql, type Viewer } from '../projects/project-scope.js';
 import { inSituStress } from '../samples/in-situ-stress.js';
 import { ConsolidationTestEntity } from './consolidation-test.entity.js';
 
@@ -43,6 +43,7 @@ function toSummary(row: Row): TestSummary {
 
 /** The tests the viewer may open (project-scope.ts: a designer, their projects' tests as approved), filtered. */
 export async function listTests(viewer: Viewer, filter: TestListQuery): Promise<TestSummary[]> {
+  if (filter.projectId) assertProjectVisible(viewer, filter.projectId);
   const values: unknown[] = [viewer.orgId];
   const clauses: string[] = [openableTestsSql(viewer, 'p.id', 't.status', values)];
   const add = (column: string, value: string | undefined) => {

@@ -215,6 +215,7 @@ describe('a designer of a project', () => {
 
   it('when the designer opens another project’s or another laboratory’s ids, then 404', async () => {
     await w.designer.get(api(`/projects/${w.p2.projectId}`)).expect(404);
+    await w.designer.get(api(`/tests?projectId=${w.p2.projectId}`)).expect(404);
     await w.designer.get(api(`/tests/${w.p2.testId}`)).expect(404);
     await w.designer.get(api(`/tests/${w.other.testId}`)).expect(404);
     await w.designer.get(api(`/soil-records/${w.p2.recordId}`)).expect(404);
