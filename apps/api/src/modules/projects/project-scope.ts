@@ -104,6 +104,14 @@ export function assertProjectVisible(viewer: Viewer, projectId: string): Project
 }
 
 /**
+ * The same 404 as a missing project when it is outside the caller's scope, for code holding a
+ * tenant rather than a viewer. Does not check that the project exists.
+ */
+export async function assertProjectInScope(tenant: TenantContext, userId: string, projectId: string, manager?: EntityManager): Promise<ProjectView> {
+  return assertProjectVisible(await viewerOf(tenant, userId, manager), projectId);
+}
+
+/**
  * An SQL condition keeping rows whose `projectColumn` is in the viewer's scope; appends its
  * parameter to `params`. 'TRUE' for lab staff.
  */
