@@ -53,6 +53,13 @@ export interface SoilProfile {
   readonly groundLevelM: number;
   /** Depth of the water table below ground level, m (≥ 0); hydrostatic pore pressure below it. */
   readonly waterTableDepthM: number;
+  /**
+   * Unit weight of the pore water γw, kN/m³ (9 ≤ γw ≤ 10.5). Default
+   * WATER_UNIT_WEIGHT_KN_PER_M3 = 9.81; some references and exam papers use 10.
+   * Every pore pressure and effective stress of the profile, the settlement
+   * check and the sizing functions is worked out with it.
+   */
+  readonly waterUnitWeightKnPerM3?: number;
   readonly layers: readonly SoilLayer[];
 }
 

@@ -1,8 +1,8 @@
-import { WATER_UNIT_WEIGHT_KN_PER_M3 } from '../constants/water-unit-weight.js';
 import { splitIntoSublayers, type SublayerSpacing } from '../profile/split-into-sublayers.js';
 import type { SoilProfile, Sublayer } from '../profile/soil-profile.types.js';
 import { validateSoilProfile } from '../profile/validate-soil-profile.js';
 import { verticalStressAtDepth } from '../profile/vertical-stress-at-depth.js';
+import { waterUnitWeightOf } from '../profile/water-unit-weight-of.js';
 import { timeFactorForDegree } from '../time-curves/time-factor-for-degree.js';
 import { drainagePathLengthM } from '../time-rate/drainage-path-length.js';
 import type { LayerParametersUsed, PrimaryMethod } from './settlement-check.types.js';
@@ -137,7 +137,7 @@ export function prepareSettlementModel(profile: SoilProfile, spacing: SublayerSp
     if (layer === undefined || used === undefined || used.primaryMethod === null) throw new RangeError(`${caller} requires a consistent profile`);
     const initialEffectiveStressKpa = verticalStressAtDepth(profile, sublayer.midDepthM).effectiveStressKpa;
     if (!(initialEffectiveStressKpa > 0)) {
-      throw new RangeError(`${caller} requires a positive effective stress in layer ${sublayer.layerIndex + 1} (${layer.name}); check that saturated unit weights exceed ${WATER_UNIT_WEIGHT_KN_PER_M3} kN/m³`);
+      throw new RangeError(`${caller} requires a positive effective stress in layer ${sublayer.layerIndex + 1} (${layer.name}); check that saturated unit weights exceed the unit weight of water, ${waterUnitWeightOf(profile)} kN/m³`);
     }
     const given = layer.preconsolidationKpa ?? (layer.ocr ?? 1) * initialEffectiveStressKpa;
     if (given < initialEffectiveStressKpa && used.primaryMethod === 'e-log-stress') clampedLayers.add(sublayer.layerIndex);

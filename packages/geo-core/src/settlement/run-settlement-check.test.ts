@@ -33,6 +33,27 @@ describe('runSettlementCheck({ profile, footings, options })', () => {
     expect(result.warnings.some((w) => /treated as normally consolidated/.test(w))).toBe(true);
   });
 
+  it('works out σ′0 with the profile’s γw and states it in the result (γw = 10 kN/m³)', () => {
+    // Hand calculation at 6 m with γw = 10: σ′0 = 2×18 + 2×(20 − 10) + 2×(19 − 10) = 74 kPa (74.76 with 9.81).
+    const profile = { ...sandOverClay(), waterUnitWeightKnPerM3: 10 };
+    const result = runSettlementCheck({ profile, footings: [footing], options: { sublayerCount: 1, evaluationPoints: 'centre' } });
+    expect(result.footings[0]?.sublayers[0]?.initialEffectiveStressKpa).toBeCloseTo(74, 9);
+    expect(result.method.waterUnitWeightKnPerM3).toBe(10);
+    expect(runSettlementCheck({ profile: sandOverClay(), footings: [footing] }).method.waterUnitWeightKnPerM3).toBe(9.81);
+  });
+
+  it('names γw in the message when a saturated unit weight does not exceed it', () => {
+    const profile: SoilProfile = {
+      groundLevelM: 0,
+      waterTableDepthM: 0,
+      waterUnitWeightKnPerM3: 10,
+      layers: [{ name: 'clay', thicknessM: 4, unitWeightKnPerM3: 10, saturatedUnitWeightKnPerM3: 10, e0: 1, cc: 0.35 }],
+    };
+    expect(() => runSettlementCheck({ profile, footings: [footing] })).toThrow(
+      new RangeError('runSettlementCheck requires a positive effective stress in layer 1 (clay); check that saturated unit weights exceed the unit weight of water, 10 kN/m³'),
+    );
+  });
+
   it('overconsolidated clay passing σ′p reproduces the hand calculation', () => {
     // Same loading with σ′p = 80 kPa: Sc = 0.06 × 2 × log10(80/74.76) + 0.35 × 2 × log10(89.08/80) = 0.0362 m (± 0.0001 from I's decimals).
     const result = runSettlementCheck({ profile: sandOverClay({ preconsolidationKpa: 80 }), footings: [footing], options: { sublayerCount: 1, evaluationPoints: 'centre' } });

@@ -1,3 +1,4 @@
+import { waterUnitWeightOf } from '../profile/water-unit-weight-of.js';
 import { footingPressureKpa } from '../stress/footing-pressure.js';
 import type { PreparedFooting } from '../stress/footing-stress-contribution.js';
 import type { Footing } from '../stress/footing.types.js';
@@ -64,7 +65,7 @@ export function runSettlementCheck(input: SettlementCheckInput): SettlementCheck
   );
   const pairs = footingPairResults(footings, designAngularDistortion, options.pairMaxDistanceM);
   return {
-    method: { stressMethod, includeNeighbours, sublayerSpacing: spacing, designLifeYears, endOfPrimaryShare, designAngularDistortion, applyFoxDepthFactor, notes },
+    method: { stressMethod, waterUnitWeightKnPerM3: waterUnitWeightOf(input.profile), includeNeighbours, sublayerSpacing: spacing, designLifeYears, endOfPrimaryShare, designAngularDistortion, applyFoxDepthFactor, notes },
     layers: model.layers,
     footings,
     pairs,

@@ -154,6 +154,8 @@ export interface FootingPairResult {
 export interface SettlementCheckResult {
   readonly method: {
     readonly stressMethod: StressMethod;
+    /** γw the pore pressures and effective stresses were worked out with, kN/m³. */
+    readonly waterUnitWeightKnPerM3: number;
     readonly includeNeighbours: boolean;
     readonly sublayerSpacing: { readonly count: number } | { readonly maxThicknessM: number };
     readonly designLifeYears: number;
