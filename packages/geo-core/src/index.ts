@@ -62,9 +62,13 @@ export type { DialGauge, DialReading } from './readings/dial-readings-to-deforma
 export { DAYS_PER_YEAR } from './constants/days-per-year.js';
 export { WATER_UNIT_WEIGHT_KN_PER_M3 } from './constants/water-unit-weight.js';
 
+export { carryPreconsolidationFromSample } from './profile/carry-preconsolidation-from-sample.js';
+export type { CarryPreconsolidationFromSampleInput, CarryPreconsolidationFromSampleResult } from './profile/carry-preconsolidation-from-sample.js';
+export { preconsolidationStressAtDepth } from './profile/preconsolidation-stress-at-depth.js';
+export type { PreconsolidationStressAtDepth } from './profile/preconsolidation-stress-at-depth.js';
 export { splitIntoSublayers } from './profile/split-into-sublayers.js';
 export type { SublayerSpacing } from './profile/split-into-sublayers.js';
-export type { DrainageBoundary, SoilLayer, SoilProfile, Sublayer, VerticalStressState } from './profile/soil-profile.types.js';
+export type { DrainageBoundary, PreconsolidationBasis, SoilLayer, SoilProfile, Sublayer, VerticalStressState } from './profile/soil-profile.types.js';
 export { validateSoilProfile } from './profile/validate-soil-profile.js';
 export { verticalStressAtDepth } from './profile/vertical-stress-at-depth.js';
 

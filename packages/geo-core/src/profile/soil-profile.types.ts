@@ -23,10 +23,20 @@ export interface SoilLayer {
   readonly cc?: number;
   /** Recompression (Cr) or swell (Cs) index used on the overconsolidated branch, dimensionless. */
   readonly cs?: number;
-  /** Preconsolidation stress σ′p, kPa, taken as constant through the layer. Give this or ocr. */
+  /**
+   * Preconsolidation stress σ′p, kPa, taken as constant through the layer.
+   * Give at most one of preconsolidationKpa, ocr and preOverburdenPressureKpa;
+   * none: normally consolidated (with a warning).
+   */
   readonly preconsolidationKpa?: number;
-  /** Overconsolidation ratio σ′p/σ′v0, applied at every depth of the layer. Give this or preconsolidationKpa. */
+  /** Overconsolidation ratio σ′p/σ′v0 (≥ 1), applied at every depth of the layer: σ′p = OCR·σ′v0. */
   readonly ocr?: number;
+  /**
+   * Pre-overburden pressure POP = σ′p − σ′v0, kPa (≥ 0), constant through the
+   * layer: σ′p = σ′v0 + POP at every depth — the usual picture of a crust or a
+   * layer once loaded by ground since removed, where σ′p runs parallel to σ′v0.
+   */
+  readonly preOverburdenPressureKpa?: number;
   /**
    * Coefficient of volume compressibility mv over the stress range the layer
    * will see, m²/kN (1 m²/MN = 0.001 m²/kN). Used only where cc is not given:
@@ -46,6 +56,13 @@ export interface SoilLayer {
   /** Drainage at the bottom of the layer (needed with cvM2PerYr). */
   readonly drainageBottom?: DrainageBoundary;
 }
+
+/**
+ * How σ′p is carried through a compressible layer: a constant stress, a
+ * constant OCR, a constant POP (σ′p − σ′v0), or — none given — the layer is
+ * taken as normally consolidated (σ′p = σ′v0), the cautious choice.
+ */
+export type PreconsolidationBasis = 'preconsolidation-stress' | 'ocr' | 'pre-overburden-pressure' | 'assumed-normally-consolidated';
 
 /** The ground model of one site: level, water table and layers from the top down. */
 export interface SoilProfile {

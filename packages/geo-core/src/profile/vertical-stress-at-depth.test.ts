@@ -83,7 +83,7 @@ describe('validateSoilProfile(profile, caller)', () => {
     [{ ...profile, waterUnitWeightKnPerM3: 62.4 }, 'test requires waterUnitWeightKnPerM3 between 9 and 10.5 kN/m³ (9.81 for fresh water, or 10 where the reference rounds it)'],
     [{ ...profile, layers: [{ ...profile.layers[0]!, thicknessM: 0 }] }, 'test requires thicknessM > 0 in layer 1 (sand)'],
     [{ ...profile, layers: [{ ...profile.layers[1]!, ocr: 0.8 }] }, 'test requires ocr >= 1 in layer 1 (clay)'],
-    [{ ...profile, layers: [{ ...profile.layers[1]!, ocr: 2, preconsolidationKpa: 100 }] }, 'test requires either ocr or preconsolidationKpa, not both, in layer 1 (clay)'],
+    [{ ...profile, layers: [{ ...profile.layers[1]!, ocr: 2, preconsolidationKpa: 100 }] }, 'test requires only one of preconsolidationKpa, ocr and preOverburdenPressureKpa in layer 1 (clay)'],
     [{ ...profile, layers: [{ ...profile.layers[1]!, cvM2PerYr: 2 }] }, 'test requires drainageTop and drainageBottom wherever cvM2PerYr is given, in layer 1 (clay)'],
     [{ ...profile, layers: [{ ...profile.layers[1]!, poissonRatio: 0.7 }] }, 'test requires 0 <= poissonRatio <= 0.5 in layer 1 (clay)'],
     [{ ...profile, layers: [{ ...profile.layers[0]!, cc: 0.3 }] }, 'test requires e0 wherever cc is given, in layer 1 (sand)'],

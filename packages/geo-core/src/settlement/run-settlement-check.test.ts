@@ -68,6 +68,30 @@ describe('runSettlementCheck({ profile, footings, options })', () => {
     expect(Math.abs((result.footings[0]?.primaryM ?? 0) - 0.00913)).toBeLessThanOrEqual(0.00003);
   });
 
+  it('POP carries σ′p = σ′0 + POP through the layer and the result states the basis', () => {
+    // Same loading with POP = 10 kPa: σ′p = 74.76 + 10 = 84.76 kPa < σ′1 = 89.08 kPa, so the sublayer crosses σ′p:
+    // Sc = 0.06 × 2 × log10(84.76/74.76) + 0.35 × 2 × log10(89.08/84.76) = 0.00654 + 0.01511 = 0.0217 m (± 0.0001 from I's decimals).
+    const result = runSettlementCheck({ profile: sandOverClay({ preOverburdenPressureKpa: 10 }), footings: [footing], options: { sublayerCount: 1, evaluationPoints: 'centre' } });
+    const row = result.footings[0]?.sublayers[0];
+    expect(row?.preconsolidationKpa).toBeCloseTo(84.76, 9);
+    expect(row?.consolidationCase).toBe('overconsolidated-crossing');
+    expect(Math.abs((result.footings[0]?.primaryM ?? 0) - 0.0217)).toBeLessThanOrEqual(0.0001);
+    expect(result.layers[1]).toMatchObject({ preconsolidationBasis: 'pre-overburden-pressure', preOverburdenPressureKpa: 10, ocr: null, preconsolidationKpa: null });
+  });
+
+  it('property: POP 0 gives the same settlements as OCR 1, and POP = (OCR − 1)·σ′0 the same as that OCR in one sublayer', () => {
+    fc.assert(
+      fc.property(fc.double({ min: 100, max: 3000, noNaN: true }), fc.double({ min: 1, max: 3, noNaN: true }), (loadKn, ocr) => {
+        const run = (clay: Partial<SoilProfile['layers'][number]>) =>
+          runSettlementCheck({ profile: sandOverClay(clay), footings: [{ ...footing, loadKn }], options: { sublayerCount: 1, evaluationPoints: 'centre' } }).footings[0]?.totalM ?? Number.NaN;
+        expect(run({ preOverburdenPressureKpa: 0 })).toBe(run({ ocr: 1 }));
+        // σ′0 = 74.76 kPa at the one mid-depth (hand calculation above).
+        expect(run({ preOverburdenPressureKpa: (ocr - 1) * 74.76 })).toBeCloseTo(run({ ocr }), 12);
+      }),
+      { numRuns: 30 },
+    );
+  });
+
   it('finer sublayers converge: 40 and 80 slices agree within 0.5 %', () => {
     const run = (count: number) => runSettlementCheck({ profile: sandOverClay(), footings: [footing], options: { sublayerCount: count, evaluationPoints: 'centre' } }).footings[0]?.primaryM ?? 0;
     expect(Math.abs(run(40) - run(80)) / run(80)).toBeLessThan(0.005);
@@ -194,7 +218,7 @@ describe('runSettlementCheck({ profile, footings, options })', () => {
     const profile = sandOverClay({ ocr: 1.5 });
     const { cs: _cs, ...clayWithoutCs } = profile.layers[1]!;
     expect(() => runSettlementCheck({ profile: { ...profile, layers: [profile.layers[0]!, clayWithoutCs] }, footings: [footing] })).toThrow(
-      new RangeError('runSettlementCheck requires cs wherever ocr or preconsolidationKpa is given, in layer 2 (clay)'),
+      new RangeError('runSettlementCheck requires cs wherever the layer is overconsolidated (ocr > 1, preconsolidationKpa or preOverburdenPressureKpa > 0), in layer 2 (clay)'),
     );
   });
 });

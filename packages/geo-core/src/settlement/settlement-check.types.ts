@@ -1,6 +1,6 @@
 import type { ConsolidationCase } from './primary-consolidation-settlement.js';
 import type { AngularDistortionVerdict } from './judge-angular-distortion.js';
-import type { DrainageBoundary, SoilProfile } from '../profile/soil-profile.types.js';
+import type { DrainageBoundary, PreconsolidationBasis, SoilProfile } from '../profile/soil-profile.types.js';
 import type { Footing, StressMethod } from '../stress/footing.types.js';
 
 /** Choices for a settlement check; every one has a stated default. */
@@ -67,10 +67,18 @@ export interface LayerParametersUsed {
   readonly mvM2PerKn: number | null;
   /** 'e-log-stress' where e0 and cc are given, 'mv' where only mv is; null for a layer that does not consolidate. */
   readonly primaryMethod: PrimaryMethod | null;
-  /** How σ′p was set: from σ′p, from OCR, or assumed normally consolidated. */
-  readonly preconsolidationBasis: 'preconsolidation-stress' | 'ocr' | 'assumed-normally-consolidated' | null;
+  /**
+   * How σ′p was carried through the layer: a constant σ′p, a constant OCR, a
+   * constant POP = σ′p − σ′v0, or assumed normally consolidated; null for a
+   * layer that does not consolidate, or an mv layer given no σ′p.
+   */
+  readonly preconsolidationBasis: PreconsolidationBasis | null;
+  /** The constant σ′p given, kPa (basis 'preconsolidation-stress'). */
   readonly preconsolidationKpa: number | null;
+  /** The OCR given (basis 'ocr'). */
   readonly ocr: number | null;
+  /** The POP given, kPa (basis 'pre-overburden-pressure'). */
+  readonly preOverburdenPressureKpa: number | null;
   readonly cvM2PerYr: number | null;
   readonly cAlpha: number | null;
   readonly elasticModulusKpa: number | null;
