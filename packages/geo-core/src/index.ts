@@ -74,9 +74,11 @@ export { verticalStressAtDepth } from './profile/vertical-stress-at-depth.js';
 
 export { cornerInfluenceFactor } from './stress/corner-influence-factor.js';
 export { footingPressureKpa } from './stress/footing-pressure.js';
-export type { Footing, FootingLoad, StressMethod } from './stress/footing.types.js';
+export type { Footing, FootingLoad, FootingPlan, FootingShape, StressMethod } from './stress/footing.types.js';
 export { stressIncrease2to1 } from './stress/stress-increase-2to1.js';
 export type { StressIncrease2to1Input } from './stress/stress-increase-2to1.js';
+export { stressIncrease2to1Circle } from './stress/stress-increase-2to1-circle.js';
+export type { StressIncrease2to1CircleInput } from './stress/stress-increase-2to1-circle.js';
 export { stressIncrease2to1Strip } from './stress/stress-increase-2to1-strip.js';
 export type { StressIncrease2to1StripInput } from './stress/stress-increase-2to1-strip.js';
 export { stressIncreaseCircle } from './stress/stress-increase-circle.js';
@@ -108,6 +110,7 @@ export { runSettlementCheck } from './settlement/run-settlement-check.js';
 export { secondaryCompressionSettlement } from './settlement/secondary-compression-settlement.js';
 export type { SecondaryCompressionSettlementInput } from './settlement/secondary-compression-settlement.js';
 export type {
+  EvaluationPointLabel,
   FootingPairResult,
   FootingSettlementResult,
   LayerParametersUsed,

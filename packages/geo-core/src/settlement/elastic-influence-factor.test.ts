@@ -42,6 +42,13 @@ describe('elasticInfluenceFactor(shape, lengthToWidthRatio, position)', () => {
     expect(elasticInfluenceFactor('circle', 1, 'rigid')).toBeCloseTo(0.7854, 4);
   });
 
+  it('a square is the rectangle with L/B = 1; a strip has no half-space factor (null)', () => {
+    for (const position of ['centre', 'corner', 'average', 'rigid'] as const) {
+      expect(elasticInfluenceFactor('square', 7, position)).toBe(elasticInfluenceFactor('rectangle', 1, position));
+      expect(elasticInfluenceFactor('strip', 1, position)).toBeNull();
+    }
+  });
+
   it('is null for a rigid rectangle beyond the table (L/B > 10)', () => {
     expect(elasticInfluenceFactor('rectangle', 12, 'rigid')).toBeNull();
   });
@@ -71,6 +78,18 @@ describe('immediateSettlement({ pressureKpa, widthM, lengthM, elasticModulusKpa,
     const result = immediateSettlement({ pressureKpa: 100, widthM: 1, lengthM: 20, elasticModulusKpa: 20_000, poissonRatio: 0.3, position: 'rigid' });
     expect(result.settlementM).toBeNull();
     expect(result.warnings[0]).toMatch(/No published rigid-footing factor/);
+  });
+
+  it('a strip answers null with a warning: on a half-space it settles without bound', () => {
+    const result = immediateSettlement({ pressureKpa: 100, widthM: 1, lengthM: 1, elasticModulusKpa: 20_000, poissonRatio: 0.3, position: 'centre', shape: 'strip' });
+    expect(result.settlementM).toBeNull();
+    expect(result.warnings[0]).toMatch(/^A strip on an elastic half-space settles without bound/);
+  });
+
+  it('a square is the rectangle with L = B, and must have L = B', () => {
+    const base = { pressureKpa: 100, widthM: 2, lengthM: 2, elasticModulusKpa: 10_000, poissonRatio: 0.3, position: 'centre' as const };
+    expect(immediateSettlement({ ...base, shape: 'square' })).toEqual(immediateSettlement(base));
+    expect(() => immediateSettlement({ ...base, shape: 'square', lengthM: 3 })).toThrow(new RangeError('immediateSettlement requires lengthM = widthM for a square'));
   });
 
   it('throws RangeError for L < B, ν above 0.5 or a non-positive modulus', () => {

@@ -1,3 +1,5 @@
+import type { FootingShape } from '../stress/footing.types.js';
+
 /** Where on the footing the settlement is wanted, or a rigid footing's uniform settlement. */
 export type ElasticSettlementPosition = 'centre' | 'corner' | 'average' | 'rigid';
 
@@ -22,20 +24,26 @@ const RIGID_FACTOR_TABLE: ReadonlyArray<readonly [number, number]> = [
  * - flexible, centre: twice the corner value (four corner rectangles of half size);
  * - flexible, average: (2/π)·[ln(m + √(1 + m²)) + m·ln((1 + √(1 + m²))/m) + (1 + m³ − (1 + m²)^1.5)/(3m)];
  * - rigid: the published table, interpolated linearly in L/B, 1 ≤ L/B ≤ 10.
- * For a circle (B the diameter) the exact values are centre 1, edge 2/π,
- * average 8/(3π) and rigid π/4 (Boussinesq's rigid punch).
+ * A square is the rectangle with L/B = 1. For a circle (B the diameter) the
+ * exact values are centre 1, edge 2/π, average 8/(3π) and rigid π/4
+ * (Boussinesq's rigid punch; Timoshenko & Goodier, *Theory of Elasticity*, the
+ * uniformly loaded circular area). A strip on a half-space settles without
+ * bound (the plane-strain displacement grows like the logarithm of depth), so
+ * it has no α: null — use a finite layer (immediateSettlementFiniteLayer).
  *
  * Published check values (square): centre 1.122, corner 0.561, average 0.946,
  * rigid 0.88 (Das, *Principles of Foundation Engineering*, from memory).
  *
- * @param shape 'rectangle' (then lengthToWidthRatio = L/B ≥ 1) or 'circle'
- * @param lengthToWidthRatio L/B, dimensionless (ignored for a circle)
+ * @param shape 'rectangle' (then lengthToWidthRatio = L/B ≥ 1), 'square', 'circle' or 'strip'
+ * @param lengthToWidthRatio L/B, dimensionless (read for a rectangle only)
  * @param position 'centre' | 'corner' (the edge for a circle) | 'average' | 'rigid'
- * @returns α, dimensionless; null for a rigid rectangle beyond L/B = 10, where the table stops
+ * @returns α, dimensionless; null for a rigid rectangle beyond L/B = 10, where the table stops, and for a strip
  * @throws RangeError when L/B < 1 or not finite for a rectangle
  * @example elasticInfluenceFactor('rectangle', 1, 'centre') // 1.1222
  */
-export function elasticInfluenceFactor(shape: 'rectangle' | 'circle', lengthToWidthRatio: number, position: ElasticSettlementPosition): number | null {
+export function elasticInfluenceFactor(shape: FootingShape, lengthToWidthRatio: number, position: ElasticSettlementPosition): number | null {
+  if (shape === 'strip') return null;
+  if (shape === 'square') return elasticInfluenceFactor('rectangle', 1, position);
   if (shape === 'circle') {
     const circle: Record<ElasticSettlementPosition, number> = { centre: 1, corner: 2 / Math.PI, average: 8 / (3 * Math.PI), rigid: Math.PI / 4 };
     return circle[position];

@@ -1,7 +1,7 @@
 import type { ConsolidationCase } from './primary-consolidation-settlement.js';
 import type { AngularDistortionVerdict } from './judge-angular-distortion.js';
 import type { DrainageBoundary, PreconsolidationBasis, SoilProfile } from '../profile/soil-profile.types.js';
-import type { Footing, StressMethod } from '../stress/footing.types.js';
+import type { Footing, FootingShape, StressMethod } from '../stress/footing.types.js';
 
 /** Choices for a settlement check; every one has a stated default. */
 export interface SettlementCheckOptions {
@@ -17,7 +17,11 @@ export interface SettlementCheckOptions {
   readonly designLifeYears?: number;
   /** Times for the settlement–time curve, years; default 41 points from 0.01 to 100 years on log t. */
   readonly timesYears?: readonly number[];
-  /** 'centre' or 'centre-and-corners'. Default 'centre-and-corners'. */
+  /**
+   * 'centre' or 'centre-and-corners' (the corners of a rectangle or square, the
+   * rim points on the axes of a circle, the two edges of a strip: see
+   * EvaluationPointLabel). Default 'centre-and-corners'.
+   */
   readonly evaluationPoints?: 'centre' | 'centre-and-corners';
   /** Share of primary consolidation taken as its end, where secondary compression starts (fraction). Default 0.95. */
   readonly endOfPrimaryShare?: number;
@@ -109,9 +113,27 @@ export interface SublayerSettlementRow {
   readonly secondarySettlementM: number | null;
 }
 
+/**
+ * Where on a footing a point lies: the centre; the four corners of a rectangle
+ * or square; for a circle, the four points of its rim on the x and y axes
+ * through its centre ('edge-x-' at x − D/2, and so on: the rim points nearest
+ * and farthest from neighbours set out on the plan's grid); for a strip, its
+ * two edges across the width at the footing's station ('edge-x-', 'edge-x+').
+ */
+export type EvaluationPointLabel =
+  | 'centre'
+  | 'corner-x-y-'
+  | 'corner-x+y-'
+  | 'corner-x-y+'
+  | 'corner-x+y+'
+  | 'edge-x-'
+  | 'edge-x+'
+  | 'edge-y-'
+  | 'edge-y+';
+
 /** Settlements at one point of a footing, m. */
 export interface PointSettlement {
-  readonly label: 'centre' | 'corner-x-y-' | 'corner-x+y-' | 'corner-x-y+' | 'corner-x+y+';
+  readonly label: EvaluationPointLabel;
   readonly xM: number;
   readonly yM: number;
   readonly immediateM: number;
@@ -123,13 +145,21 @@ export interface PointSettlement {
 /** One footing's results; the headline numbers are at its centre. */
 export interface FootingSettlementResult {
   readonly id: string;
+  /** The footing's shape as used ('rectangle' where none was given). */
+  readonly shape: FootingShape;
   readonly xM: number;
   readonly yM: number;
+  /** B, m: the diameter for a circle, the width across for a strip. */
   readonly widthM: number;
-  readonly lengthM: number;
+  /** L, m: a square's side again; null for a circle and a strip. */
+  readonly lengthM: number | null;
   readonly depthM: number;
+  /** Net pressure at founding level used for every stress and settlement, kPa. */
   readonly pressureKpa: number;
-  readonly loadKn: number;
+  /** Net total load, kN (pressure × plan area); null for a strip. */
+  readonly loadKn: number | null;
+  /** Net load per metre run, kN/m (pressure × width); null except for a strip. */
+  readonly loadKnPerM: number | null;
   /** Fox's depth factor applied to the footing's own immediate settlement (1 when the option is off). */
   readonly immediateDepthFactor: number;
   readonly immediateM: number;

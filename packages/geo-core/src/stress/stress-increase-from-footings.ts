@@ -1,6 +1,6 @@
-import { footingPressureKpa } from './footing-pressure.js';
 import type { Footing, StressMethod } from './footing.types.js';
 import { footingStressContributionKpa } from './footing-stress-contribution.js';
+import { prepareFooting } from './prepare-footing.js';
 
 /** A point in the ground and the footings that load it. */
 export interface StressIncreaseFromFootingsInput {
@@ -29,10 +29,13 @@ export interface StressIncreaseFromFootingsResult {
  * (linear elasticity makes the contributions add): Δσz = Σ over footings of each
  * footing's own Δσz, with z measured below that footing's base.
  *
- * Boussinesq: each footing by corner-rectangle superposition (Newmark 1935;
- * Fadum 1948), valid for points inside or outside its plan area. 2V:1H: a
- * footing adds Q/((B + z)(L + z)) where the point lies inside its spread area
- * (B + z) × (L + z) and nothing outside — the method's own crude picture.
+ * Boussinesq: a rectangle or square by corner-rectangle superposition
+ * (Newmark 1935; Fadum 1948), a circle by the point load integrated over it
+ * (circleStressInfluence), a strip by the plane-strain strip solution — each
+ * valid for points inside or outside its plan area. 2V:1H: a footing adds its
+ * load spread uniformly over its spread area — (B + z) × (L + z), a circle of
+ * diameter D + z, or a width B + z under a strip — and nothing outside, the
+ * method's own crude picture (footingStressContributionKpa).
  * A footing whose base is at or below the point adds nothing: its half-space
  * starts at its base.
  * Source: Das, *Principles of Geotechnical Engineering*, stress from several
@@ -58,8 +61,7 @@ export function stressIncreaseFromFootings(input: StressIncreaseFromFootingsInpu
   for (const footing of footings) {
     const isOwn = footing.id === ownFootingId;
     if (!isOwn && !includeNeighbours) continue;
-    const prepared = { ...footing, pressureKpa: footingPressureKpa(footing) };
-    const contributionKpa = footingStressContributionKpa(prepared, xM - footing.xM, yM - footing.yM, depthBelowGroundM - footing.depthM, method);
+    const contributionKpa = footingStressContributionKpa(prepareFooting(footing), xM - footing.xM, yM - footing.yM, depthBelowGroundM - footing.depthM, method);
     if (isOwn) ownKpa += contributionKpa;
     else neighboursKpa += contributionKpa;
   }

@@ -1,4 +1,6 @@
+import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
+import { stressIncreaseRectangle } from './stress-increase-rectangle.js';
 import { stressIncreaseStrip } from './stress-increase-strip.js';
 
 describe('stressIncreaseStrip({ pressureKpa, widthM, xM, depthM })', () => {
@@ -19,6 +21,17 @@ describe('stressIncreaseStrip({ pressureKpa, widthM, xM, depthM })', () => {
 
   it('is symmetric about the centre line', () => {
     expect(stressIncreaseStrip({ pressureKpa: 100, widthM: 3, xM: -2.2, depthM: 1.5 })).toBeCloseTo(stressIncreaseStrip({ pressureKpa: 100, widthM: 3, xM: 2.2, depthM: 1.5 }), 12);
+  });
+
+  it('property: a strip is the limit of a long rectangle (L = 10⁴·B, at its middle) to 1e-6 of q', () => {
+    // A rectangle's ends at ±L/2 take away about (2/π)(B/L)(z/L)… of q from the middle: below 1e-7 here.
+    fc.assert(
+      fc.property(fc.double({ min: 0.5, max: 4, noNaN: true }), fc.double({ min: -6, max: 6, noNaN: true }), fc.double({ min: 0.05, max: 10, noNaN: true }), (widthM, xM, depthM) => {
+        const strip = stressIncreaseStrip({ pressureKpa: 100, widthM, xM, depthM });
+        const rectangle = stressIncreaseRectangle({ pressureKpa: 100, widthM, lengthM: 1e4 * widthM, xM, yM: 0, depthM });
+        expect(Math.abs(strip - rectangle)).toBeLessThan(1e-4);
+      }),
+    );
   });
 
   it('throws RangeError for a non-positive width or depth, or non-finite offset', () => {
