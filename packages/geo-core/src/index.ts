@@ -74,7 +74,9 @@ export { verticalStressAtDepth } from './profile/vertical-stress-at-depth.js';
 
 export { cornerInfluenceFactor } from './stress/corner-influence-factor.js';
 export { footingPressureKpa } from './stress/footing-pressure.js';
-export type { Footing, FootingLoad, FootingPlan, FootingShape, StressMethod } from './stress/footing.types.js';
+export type { Footing, FootingLoad, FootingPlan, FootingShape, PressureBasis, StressMethod } from './stress/footing.types.js';
+export { netFootingPressure } from './stress/net-footing-pressure.js';
+export type { NetFootingPressure } from './stress/net-footing-pressure.js';
 export { stressIncrease2to1 } from './stress/stress-increase-2to1.js';
 export type { StressIncrease2to1Input } from './stress/stress-increase-2to1.js';
 export { stressIncrease2to1Circle } from './stress/stress-increase-2to1-circle.js';

@@ -1,7 +1,8 @@
 import { waterUnitWeightOf } from '../profile/water-unit-weight-of.js';
+import { footingPressureKpa } from '../stress/footing-pressure.js';
 import { prepareFooting } from '../stress/prepare-footing.js';
 import type { PreparedFooting } from '../stress/prepared-footing.js';
-import type { Footing, FootingShape } from '../stress/footing.types.js';
+import type { FootingShape } from '../stress/footing.types.js';
 import { footingPairResults } from './footing-pair-results.js';
 import { foxDepthFactor } from './fox-depth-factor.js';
 import { footingSettlementResult } from './footing-settlement-result.js';
@@ -29,7 +30,9 @@ const CAUTION =
  *
  * Footings may be rectangles, squares, circles (widthM the diameter) or strips
  * (plane strain, load per metre run or pressure); each footing's result names
- * its shape and the method names the stress method. Headline numbers are at
+ * its shape and the method names the stress method. A load or pressure is net
+ * unless marked gross; a gross one loses σv0 at the founding depth
+ * (netFootingPressure), and each footing's result states the net pressure used. Headline numbers are at
  * each footing's centre; the corners — or, for circles and strips, their
  * equivalents (EvaluationPointLabel) — are evaluated too unless
  * evaluationPoints is 'centre'. The result is plain data: it records the
@@ -62,7 +65,8 @@ export function runSettlementCheck(input: SettlementCheckInput): SettlementCheck
   if (stressMethod !== 'boussinesq' && stressMethod !== '2to1') throw new RangeError(`${caller} requires stressMethod 'boussinesq' or '2to1'`);
 
   const model = prepareSettlementModel(input.profile, spacing, endOfPrimaryShare, caller);
-  const prepared = prepareFootings(input.footings, model, caller, applyFoxDepthFactor);
+  const footingWarnings: string[] = [];
+  const prepared = prepareFootings(input, model, caller, applyFoxDepthFactor, footingWarnings);
   const notes = methodNotes(stressMethod, includeNeighbours, applyFoxDepthFactor, new Set(prepared.map((footing) => footing.shape)));
   const footings = prepared.map((footing, ownIndex) =>
     footingSettlementResult({ model, prepared, ownIndex, stressMethod, includeNeighbours, designLifeYears, options }),
@@ -73,12 +77,13 @@ export function runSettlementCheck(input: SettlementCheckInput): SettlementCheck
     layers: model.layers,
     footings,
     pairs,
-    warnings: [...model.warnings],
+    warnings: [...model.warnings, ...footingWarnings],
     caution: CAUTION,
   };
 }
 
-function prepareFootings(footings: readonly Footing[], model: SettlementModel, caller: string, applyFoxDepthFactor: boolean): PreparedFooting[] {
+function prepareFootings(input: SettlementCheckInput, model: SettlementModel, caller: string, applyFoxDepthFactor: boolean, warnings: string[]): PreparedFooting[] {
+  const footings = input.footings;
   if (footings.length === 0) throw new RangeError(`${caller} requires at least one footing`);
   const ids = new Set<string>();
   return footings.map((footing) => {
@@ -88,8 +93,8 @@ function prepareFootings(footings: readonly Footing[], model: SettlementModel, c
     if (!(footing.depthM >= 0) || !(footing.depthM < model.profileBottomM)) {
       throw new RangeError(`${caller} requires depthM >= 0 and above the bottom of the profile (footing ${footing.id})`);
     }
-    const prepared = prepareFooting(footing);
-    if (!(prepared.pressureKpa >= 0)) throw new RangeError(`${caller} requires a load or pressure >= 0 (footing ${footing.id}); uplift is outside this check`);
+    if (!(footingPressureKpa(footing) >= 0)) throw new RangeError(`${caller} requires a load or pressure >= 0 (footing ${footing.id}); uplift is outside this check`);
+    const prepared = prepareFooting(footing, input.profile, warnings);
     const foxApplies = applyFoxDepthFactor && (prepared.shape === 'rectangle' || prepared.shape === 'square');
     return foxApplies ? { ...prepared, immediateDepthFactor: footingFoxDepthFactor(prepared, model) } : prepared;
   });
@@ -105,7 +110,7 @@ function footingFoxDepthFactor(footing: PreparedFooting, model: SettlementModel)
 
 function methodNotes(stressMethod: 'boussinesq' | '2to1', includeNeighbours: boolean, applyFoxDepthFactor: boolean, shapes: ReadonlySet<FootingShape>): string[] {
   const notes = [
-    'Stresses below each footing base; footings are flexible and loaded by the given net pressure.',
+    'Stresses below each footing base; footings are flexible and loaded by their net pressure (a gross pressure less σv0 at the founding depth).',
     'Primary settlement per sublayer from Cc, Cs, e0 and σ′p at mid-depth (Terzaghi, e–log σ′), or from mv·Δσ′·H on a layer given mv and no Cc.',
     applyFoxDepthFactor
       ? 'Immediate settlement from Steinbrenner’s factors over the layers with E and ν; each footing’s own share reduced by Fox’s (1948) depth factor (ν of the layer below its base), its neighbours’ shares not.'

@@ -1,7 +1,7 @@
 import type { ConsolidationCase } from './primary-consolidation-settlement.js';
 import type { AngularDistortionVerdict } from './judge-angular-distortion.js';
 import type { DrainageBoundary, PreconsolidationBasis, SoilProfile } from '../profile/soil-profile.types.js';
-import type { Footing, FootingShape, StressMethod } from '../stress/footing.types.js';
+import type { Footing, FootingShape, PressureBasis, StressMethod } from '../stress/footing.types.js';
 
 /** Choices for a settlement check; every one has a stated default. */
 export interface SettlementCheckOptions {
@@ -154,11 +154,17 @@ export interface FootingSettlementResult {
   /** L, m: a square's side again; null for a circle and a strip. */
   readonly lengthM: number | null;
   readonly depthM: number;
+  /** Whether the load was given net or gross. */
+  readonly pressureBasis: PressureBasis;
   /** Net pressure at founding level used for every stress and settlement, kPa. */
   readonly pressureKpa: number;
-  /** Net total load, kN (pressure × plan area); null for a strip. */
+  /** The gross pressure given, kPa; null for a net load. */
+  readonly grossPressureKpa: number | null;
+  /** σv0 at the founding depth taken off the gross pressure, kPa; null for a net load. */
+  readonly overburdenRemovedKpa: number | null;
+  /** Net total load, kN (net pressure × plan area); null for a strip. */
   readonly loadKn: number | null;
-  /** Net load per metre run, kN/m (pressure × width); null except for a strip. */
+  /** Net load per metre run, kN/m (net pressure × width); null except for a strip. */
   readonly loadKnPerM: number | null;
   /** Fox's depth factor applied to the footing's own immediate settlement (1 when the option is off). */
   readonly immediateDepthFactor: number;

@@ -1,6 +1,8 @@
+import type { SoilProfile } from '../profile/soil-profile.types.js';
+import { verticalStressAtDepth } from '../profile/vertical-stress-at-depth.js';
 import type { SettlementModel } from '../settlement/prepare-settlement-model.js';
 import { settlementAtPoint } from '../settlement/settlement-at-point.js';
-import type { Footing, StressMethod } from '../stress/footing.types.js';
+import type { Footing, PressureBasis, StressMethod } from '../stress/footing.types.js';
 import { prepareFooting } from '../stress/prepare-footing.js';
 import type { PreparedFooting } from '../stress/prepared-footing.js';
 
@@ -15,6 +17,8 @@ export type FootingToSize = {
   readonly yM?: number;
   /** Founding depth below ground, m. */
   readonly depthM: number;
+  /** Default 'net'; 'gross': the net pressure at each trial width is the gross pressure less σv0 at the founding depth. */
+  readonly pressureBasis?: PressureBasis;
 } & (
   | {
       /** Omitted: a rectangle. */
@@ -37,6 +41,8 @@ export type FootingToSize = {
 
 /** What the trial settlement needs besides the width. */
 export interface FootingSettlementForWidthInput {
+  /** The ground model, for the overburden of gross loads. */
+  readonly profile: SoilProfile;
   readonly model: SettlementModel;
   readonly footing: FootingToSize;
   readonly neighbours: readonly Footing[];
@@ -47,19 +53,23 @@ export interface FootingSettlementForWidthInput {
 
 /**
  * The footing to size at a trial width, as the settlement sums take it: the
- * fixed load spread over the trial plan — Q/(B·L), Q/B², 4Q/(πB²) or Q′/B.
+ * fixed load spread over the trial plan — Q/(B·L), Q/B², 4Q/(πB²) or Q′/B —
+ * less the overburden removed where the load is gross (not below zero).
  *
  * @param footing the footing to size (m, kN or kN/m)
  * @param widthM trial width (diameter for a circle), m (> 0)
+ * @param overburdenRemovedKpa σv0 at the founding depth for a gross load, kPa; 0 for a net one
  * @returns the prepared footing
- * @example sizedFootingAtWidth({ shape: 'circle', depthM: 1, loadKn: 314.16 }, 2).pressureKpa // 100.0
+ * @example sizedFootingAtWidth({ shape: 'circle', depthM: 1, loadKn: 314.16 }, 2, 0).pressureKpa // 100.0
  */
-export function sizedFootingAtWidth(footing: FootingToSize, widthM: number): PreparedFooting {
+export function sizedFootingAtWidth(footing: FootingToSize, widthM: number, overburdenRemovedKpa: number): PreparedFooting {
   const shape = footing.shape ?? 'rectangle';
   const lengthM = shape === 'strip' ? Infinity : shape === 'rectangle' ? widthM * (footing.lengthToWidthRatio ?? 1) : widthM;
   const areaM2 = shape === 'circle' ? (Math.PI * widthM * widthM) / 4 : widthM * lengthM;
-  const pressureKpa = shape === 'strip' ? (footing.loadKnPerM ?? Number.NaN) / widthM : (footing.loadKn ?? Number.NaN) / areaM2;
-  return { id: footing.id ?? 'sized footing', shape, xM: footing.xM ?? 0, yM: footing.yM ?? 0, widthM, lengthM, depthM: footing.depthM, pressureKpa };
+  const appliedKpa = shape === 'strip' ? (footing.loadKnPerM ?? Number.NaN) / widthM : (footing.loadKn ?? Number.NaN) / areaM2;
+  const base = { id: footing.id ?? 'sized footing', shape, xM: footing.xM ?? 0, yM: footing.yM ?? 0, widthM, lengthM, depthM: footing.depthM };
+  if (footing.pressureBasis !== 'gross') return { ...base, pressureKpa: appliedKpa };
+  return { ...base, pressureKpa: Math.max(0, appliedKpa - overburdenRemovedKpa), grossPressureKpa: appliedKpa, overburdenRemovedKpa };
 }
 
 /**
@@ -75,8 +85,9 @@ export function sizedFootingAtWidth(footing: FootingToSize, widthM: number): Pre
  */
 export function footingSettlementForWidth(input: FootingSettlementForWidthInput, widthM: number): number {
   if (!(widthM > 0) || !Number.isFinite(widthM)) throw new RangeError('footingSettlementForWidth requires a finite widthM > 0');
-  const own = sizedFootingAtWidth(input.footing, widthM);
-  const others: PreparedFooting[] = input.includeNeighbours ? input.neighbours.map((neighbour) => prepareFooting(neighbour)) : [];
+  const overburdenRemovedKpa = input.footing.pressureBasis === 'gross' ? verticalStressAtDepth(input.profile, input.footing.depthM).totalStressKpa : 0;
+  const own = sizedFootingAtWidth(input.footing, widthM, overburdenRemovedKpa);
+  const others: PreparedFooting[] = input.includeNeighbours ? input.neighbours.map((neighbour) => prepareFooting(neighbour, input.profile)) : [];
   return settlementAtPoint({
     model: input.model,
     footings: [own, ...others],

@@ -50,7 +50,8 @@ export interface SizeFootingResult {
  * diameter or a strip's width) whose total settlement at the
  * centre — immediate + primary + secondary, as in runSettlementCheck — stays
  * within a target, for a fixed load. Settlement falls as a footing with a
- * fixed load (kN, or kN/m for a strip) widens (lower pressure, stress spread deeper), so the search is a
+ * fixed load (kN, or kN/m for a strip; net, or gross less the overburden
+ * removed) widens (lower pressure, stress spread deeper), so the search is a
  * bisection on the width bracket (findWidthByBisection), to 5 mm by default.
  *
  * @param input profile, footing (m, kN), target (m), bounds (m), neighbours, options
@@ -87,7 +88,8 @@ export function sizeFootingToTarget(input: SizeFootingForSettlementInput, caller
   const model = prepareSettlementModel(profile, spacing, options.endOfPrimaryShare ?? 0.95, caller);
   if (!(footing.depthM >= 0 && footing.depthM < model.profileBottomM)) throw new RangeError(`${caller} requires depthM >= 0 and above the bottom of the profile`);
   const neighbours = input.neighbours ?? [];
-  const trial = { model, footing, neighbours, method: options.stressMethod ?? 'boussinesq', includeNeighbours: neighbours.length > 0, designLifeYears: options.designLifeYears ?? 50 } as const;
+  if (footing.pressureBasis !== undefined && footing.pressureBasis !== 'net' && footing.pressureBasis !== 'gross') throw new RangeError(`${caller} requires pressureBasis 'net' or 'gross'`);
+  const trial = { profile, model, footing, neighbours, method: options.stressMethod ?? 'boussinesq', includeNeighbours: neighbours.length > 0, designLifeYears: options.designLifeYears ?? 50 } as const;
   const settlementOf = (widthM: number) => footingSettlementForWidth(trial, widthM);
   const outcome = findWidthByBisection(settlementOf, targetSettlementM, minWidthM, maxWidthM, options.widthToleranceM ?? 0.005);
   const mm = (m: number) => `${(m * 1000).toFixed(1)} mm`;

@@ -35,9 +35,9 @@ export function sizeFootingToMatchSettlement(input: SizeFootingToMatchSettlement
   const options = input.options ?? {};
   const spacing = options.sublayerCount !== undefined ? { count: options.sublayerCount } : { maxThicknessM: options.sublayerMaxThicknessM ?? 0.5 };
   const model = prepareSettlementModel(input.profile, spacing, options.endOfPrimaryShare ?? 0.95, caller);
-  const reference = prepareFooting(input.reference);
-  if (!(reference.pressureKpa > 0)) throw new RangeError(`${caller} requires the reference footing to carry a load > 0`);
-  if (!(reference.depthM >= 0 && reference.depthM < model.profileBottomM)) throw new RangeError(`${caller} requires the reference's depthM >= 0 and above the bottom of the profile`);
+  if (!(input.reference.depthM >= 0 && input.reference.depthM < model.profileBottomM)) throw new RangeError(`${caller} requires the reference's depthM >= 0 and above the bottom of the profile`);
+  const reference = prepareFooting(input.reference, input.profile);
+  if (!(reference.pressureKpa > 0)) throw new RangeError(`${caller} requires the reference footing to carry a net load > 0`);
   const targetSettlementM = settlementAtPoint({
     model,
     footings: [reference],

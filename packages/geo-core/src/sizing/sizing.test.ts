@@ -165,7 +165,7 @@ describe('sizeFootingToMatchSettlement({ profile, reference, footing, minWidthM,
     const reference = { id: 'C1', xM: 0, yM: 0, widthM: 2, lengthM: 2, depthM: 1, loadKn: 800 };
     const base = { profile, footing: { depthM: 1, loadKn: 1400 }, minWidthM: 1, maxWidthM: 10 };
     expect(() => sizeFootingToMatchSettlement({ ...base, reference: { ...reference, loadKn: 0 } })).toThrow(
-      new RangeError('sizeFootingToMatchSettlement requires the reference footing to carry a load > 0'),
+      new RangeError('sizeFootingToMatchSettlement requires the reference footing to carry a net load > 0'),
     );
     expect(() => sizeFootingToMatchSettlement({ ...base, reference: { ...reference, depthM: 9 } })).toThrow(
       new RangeError("sizeFootingToMatchSettlement requires the reference's depthM >= 0 and above the bottom of the profile"),

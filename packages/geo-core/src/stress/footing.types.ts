@@ -27,14 +27,23 @@ export type FootingPlan =
   | { readonly shape: 'strip'; readonly widthM: number; readonly lengthM?: never };
 
 /**
+ * Whether a footing's load or pressure is net — the increase of stress at
+ * founding level — or gross — everything the base carries, of which the
+ * overburden removed to found it (σv0 at the founding depth) is not new.
+ */
+export type PressureBasis = 'net' | 'gross';
+
+/**
  * A footing on plan. x runs along the width, y along the length; coordinates
- * and the founding depth are in metres. The load is the net increase at
- * founding level (gross load less the weight of soil removed, if the designer
- * means the excavation to count).
+ * and the founding depth are in metres. The load or pressure is net (the
+ * default) or gross (pressureBasis 'gross': the net increase is then the gross
+ * pressure less σv0 at the founding depth, from the soil profile).
  */
 export type Footing = FootingLoad &
   FootingPlan & {
     readonly id: string;
+    /** Default 'net'. */
+    readonly pressureBasis?: PressureBasis;
     /** Centre of the footing on plan, m (for a strip: its centre line's x, and the station along it). */
     readonly xM: number;
     readonly yM: number;

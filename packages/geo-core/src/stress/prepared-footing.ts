@@ -16,6 +16,9 @@ export interface PreparedFooting {
   readonly depthM: number;
   /** Net pressure at founding level, kPa. */
   readonly pressureKpa: number;
+  /** The gross pressure given and the overburden taken off it, kPa; absent for a net load. */
+  readonly grossPressureKpa?: number;
+  readonly overburdenRemovedKpa?: number;
   /** Fox's depth factor on this footing's immediate settlement under itself (the settlement check's option); absent: 1. */
   readonly immediateDepthFactor?: number;
 }

@@ -1,3 +1,4 @@
+import type { SoilProfile } from '../profile/soil-profile.types.js';
 import type { Footing, StressMethod } from './footing.types.js';
 import { footingStressContributionKpa } from './footing-stress-contribution.js';
 import { prepareFooting } from './prepare-footing.js';
@@ -15,6 +16,8 @@ export interface StressIncreaseFromFootingsInput {
   readonly ownFootingId?: string;
   /** false: only the own footing counts. Default true. */
   readonly includeNeighbours?: boolean;
+  /** The ground model, needed only where a footing's load is gross (σv0 at its founding depth is taken off). */
+  readonly profile?: SoilProfile;
 }
 
 /** The stress increase at the point, split into the own footing's share and the neighbours'. */
@@ -41,9 +44,10 @@ export interface StressIncreaseFromFootingsResult {
  * Source: Das, *Principles of Geotechnical Engineering*, stress from several
  * loads by superposition; Poulos & Davis (1974), ch. 3.
  *
- * @param input footings (m, kN or kPa), point position (m), depth below ground (m), method
+ * @param input footings (m, kN, kN/m or kPa; net, or gross with the profile), point position (m), depth below ground (m), method
  * @returns total, own and neighbours' Δσz in kPa
- * @throws RangeError when the depth is not positive, a footing is invalid, or neighbours are ignored without ownFootingId
+ * @throws RangeError when the depth is not positive, a footing is invalid, a load is gross and no profile is given,
+ *   or neighbours are ignored without ownFootingId
  * @example stressIncreaseFromFootings({ footings: [{ id: 'A', xM: 0, yM: 0, widthM: 2, lengthM: 2, depthM: 0, pressureKpa: 100 }], xM: 0, yM: 0, depthBelowGroundM: 1, method: 'boussinesq' }) // { totalKpa: 70.09, ownKpa: 70.09, neighboursKpa: 0 }
  */
 export function stressIncreaseFromFootings(input: StressIncreaseFromFootingsInput): StressIncreaseFromFootingsResult {
@@ -61,7 +65,7 @@ export function stressIncreaseFromFootings(input: StressIncreaseFromFootingsInpu
   for (const footing of footings) {
     const isOwn = footing.id === ownFootingId;
     if (!isOwn && !includeNeighbours) continue;
-    const contributionKpa = footingStressContributionKpa(prepareFooting(footing), xM - footing.xM, yM - footing.yM, depthBelowGroundM - footing.depthM, method);
+    const contributionKpa = footingStressContributionKpa(prepareFooting(footing, input.profile ?? null), xM - footing.xM, yM - footing.yM, depthBelowGroundM - footing.depthM, method);
     if (isOwn) ownKpa += contributionKpa;
     else neighboursKpa += contributionKpa;
   }
