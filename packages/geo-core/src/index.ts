@@ -134,6 +134,10 @@ export { settlementAtTime } from './time-rate/settlement-at-time.js';
 export type { SettlementAtTimeResult } from './time-rate/settlement-at-time.js';
 export { settlementTimeCurve } from './time-rate/settlement-time-curve.js';
 export type { SettlementTimePoint } from './time-rate/settlement-time-curve.js';
+export { cvAtStressRange, CV_AT_STRESS_RANGE_CONVENTION } from './time-rate/cv-at-stress-range.js';
+export type { CvAtStressRangeInput, CvAtStressRangeResult, CvStressPoint } from './time-rate/cv-at-stress-range.js';
+export { cvPointsFromTestResult } from './lab/cv-points-from-test-result.js';
+export type { CvIncrement } from './lab/cv-points-from-test-result.js';
 export { timeForPrimaryShare } from './time-rate/time-for-primary-share.js';
 export type { TimeForPrimaryShareResult } from './time-rate/time-for-primary-share.js';
 
