@@ -65,6 +65,7 @@ export { WATER_UNIT_WEIGHT_KN_PER_M3 } from './constants/water-unit-weight.js';
 export { carryPreconsolidationFromSample } from './profile/carry-preconsolidation-from-sample.js';
 export type { CarryPreconsolidationFromSampleInput, CarryPreconsolidationFromSampleResult } from './profile/carry-preconsolidation-from-sample.js';
 export { preconsolidationStressAtDepth } from './profile/preconsolidation-stress-at-depth.js';
+export { soilProfileWarnings } from './profile/soil-profile-warnings.js';
 export type { PreconsolidationStressAtDepth } from './profile/preconsolidation-stress-at-depth.js';
 export { splitIntoSublayers } from './profile/split-into-sublayers.js';
 export type { SublayerSpacing } from './profile/split-into-sublayers.js';
@@ -76,6 +77,7 @@ export { cornerInfluenceFactor } from './stress/corner-influence-factor.js';
 export { footingPressureKpa } from './stress/footing-pressure.js';
 export type { Footing, FootingLoad, FootingPlan, FootingShape, PressureBasis, StressMethod } from './stress/footing.types.js';
 export { netFootingPressure } from './stress/net-footing-pressure.js';
+export { overlappingFootingPairs } from './stress/overlapping-footing-pairs.js';
 export type { NetFootingPressure } from './stress/net-footing-pressure.js';
 export { stressIncrease2to1 } from './stress/stress-increase-2to1.js';
 export type { StressIncrease2to1Input } from './stress/stress-increase-2to1.js';
@@ -94,6 +96,8 @@ export type { StressIncreaseStripInput } from './stress/stress-increase-strip.js
 
 export { ANGULAR_DISTORTION_LIMITS } from './settlement/angular-distortion-limits.js';
 export type { AngularDistortionLimit } from './settlement/angular-distortion-limits.js';
+export { TOTAL_SETTLEMENT_LIMITS } from './settlement/total-settlement-limits.js';
+export type { TotalSettlementLimit } from './settlement/total-settlement-limits.js';
 export { elasticInfluenceFactor } from './settlement/elastic-influence-factor.js';
 export type { ElasticSettlementPosition } from './settlement/elastic-influence-factor.js';
 export { footingPairResults } from './settlement/footing-pair-results.js';

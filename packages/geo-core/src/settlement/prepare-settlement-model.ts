@@ -1,6 +1,7 @@
 import { splitIntoSublayers, type SublayerSpacing } from '../profile/split-into-sublayers.js';
 import { layerPreconsolidation } from '../profile/layer-preconsolidation.js';
 import type { PreconsolidationBasis, SoilProfile, Sublayer } from '../profile/soil-profile.types.js';
+import { soilProfileWarnings } from '../profile/soil-profile-warnings.js';
 import { validateSoilProfile } from '../profile/validate-soil-profile.js';
 import { verticalStressAtDepth } from '../profile/vertical-stress-at-depth.js';
 import { waterUnitWeightOf } from '../profile/water-unit-weight-of.js';
@@ -65,7 +66,7 @@ export interface SettlementModel {
  */
 export function prepareSettlementModel(profile: SoilProfile, spacing: SublayerSpacing, endOfPrimaryShare: number, caller: string): SettlementModel {
   validateSoilProfile(profile, caller);
-  const warnings: string[] = [];
+  const warnings: string[] = soilProfileWarnings(profile);
   const timeFactorAtEnd = timeFactorForDegree(endOfPrimaryShare);
   let topDepthM = 0;
   const layers: LayerParametersUsed[] = profile.layers.map((layer, layerIndex) => {

@@ -1,5 +1,6 @@
 import { waterUnitWeightOf } from '../profile/water-unit-weight-of.js';
 import { footingPressureKpa } from '../stress/footing-pressure.js';
+import { overlappingFootingPairs } from '../stress/overlapping-footing-pairs.js';
 import { prepareFooting } from '../stress/prepare-footing.js';
 import type { PreparedFooting } from '../stress/prepared-footing.js';
 import type { FootingShape } from '../stress/footing.types.js';
@@ -77,7 +78,7 @@ export function runSettlementCheck(input: SettlementCheckInput): SettlementCheck
     layers: model.layers,
     footings,
     pairs,
-    warnings: [...model.warnings, ...footingWarnings],
+    warnings: [...model.warnings, ...footingWarnings, ...overlapWarnings(input.footings)],
     caution: CAUTION,
   };
 }
@@ -135,4 +136,10 @@ function methodNotes(stressMethod: 'boussinesq' | '2to1', includeNeighbours: boo
   if (stressMethod === '2to1') notes.push('The 2V:1H method spreads the load uniformly, so corner and centre values of a footing alone do not differ; use Boussinesq for differential settlement within a footing.');
   if (!includeNeighbours) notes.push('Neighbouring footings are ignored: each footing is checked alone.');
   return notes;
+}
+
+function overlapWarnings(footings: SettlementCheckInput['footings']): string[] {
+  return overlappingFootingPairs(footings).map(
+    ([a, b]) => `Footings ${a} and ${b} overlap on plan. Both loads are added where they overlap, which is rarely meant: check their positions and sizes in the schedule.`,
+  );
 }
