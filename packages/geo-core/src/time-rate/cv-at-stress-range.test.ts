@@ -65,13 +65,14 @@ describe('cvAtStressRange({ points, initialEffectiveStressKpa, finalEffectiveStr
           expect(cv).toBeGreaterThanOrEqual(Math.min(...values) * (1 - 1e-12));
           expect(cv).toBeLessThanOrEqual(Math.max(...values) * (1 + 1e-12));
           expect(cvAtStressRange({ points: random.map((p) => ({ ...p, cvM2PerYr: 1.7 })), ...range }).cvM2PerYr).toBeCloseTo(1.7, 12);
-          // kPa → kgf/cm² for every stress: the same cv.
+          // kPa → kgf/cm² for every stress: the same cv (to 1e-9: two points 1e-15 apart in stress, which fast-check
+          // finds, interpolate across a gap the division by 98.0665 rounds differently).
           const scaled = cvAtStressRange({
             points: random.map((p) => ({ ...p, stressKpa: p.stressKpa / 98.0665 })),
             initialEffectiveStressKpa: from / 98.0665,
             finalEffectiveStressKpa: (from * ratio) / 98.0665,
           }).cvM2PerYr;
-          expect(scaled / cv).toBeCloseTo(1, 10);
+          expect(scaled / cv).toBeCloseTo(1, 9);
         },
       ),
     );
