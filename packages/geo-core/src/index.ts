@@ -24,6 +24,9 @@ export type {
 export type { ConsolidationWarning, ConsolidationWarningCode } from './lab/consolidation-warning.js';
 export type { CompressionLine, StressVoidRatioLine, StressVoidRatioPoint } from './lab/compression-curve-types.js';
 export { heightOfSolidsMm } from './lab/height-of-solids.js';
+export { coefficientOfVolumeCompressibilityM2PerKn } from './lab/volume-compressibility.js';
+export type { VolumeCompressibilityInput } from './lab/volume-compressibility.js';
+export { hydraulicConductivityMPerS } from './lab/hydraulic-conductivity.js';
 export { voidRatioFromHeight } from './lab/void-ratio-from-height.js';
 export { apparatusDeflectionAtStress } from './lab/apparatus-deflection-at-stress.js';
 export { loadingKinds } from './lab/loading-kinds.js';

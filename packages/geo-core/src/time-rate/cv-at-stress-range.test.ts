@@ -3,7 +3,7 @@ import { describe, expect, it } from 'vitest';
 import { analyzeConsolidationTest } from '../lab/analyze-consolidation-test.js';
 import { cvPointsFromTestResult, type CvIncrement } from '../lab/cv-points-from-test-result.js';
 import { generateSyntheticConsolidationTest } from '../lab/synthetic/generate-synthetic-consolidation-test.js';
-import { cvAtStressRange } from './cv-at-stress-range.js';
+import { CV_AT_STRESS_RANGE_CONVENTION, cvAtStressRange } from './cv-at-stress-range.js';
 
 // Hand-calculation points (invented): cv falls from 4 to 1 m²/yr between 50 and 200 kPa, straight on log–log
 // axes (log cv = log 4 − (log σ′ − log 50), i.e. cv = 200/σ′), then stays at 1 m²/yr to 800 kPa.
@@ -19,6 +19,7 @@ describe('cvAtStressRange({ points, initialEffectiveStressKpa, finalEffectiveStr
     expect(result.cvM2PerYr).toBeCloseTo(2, 12);
     expect(result.pointsUsedStressKpa).toEqual([50, 200]);
     expect(result.heldBeyondTestedStresses).toBe(false);
+    expect(result.convention).toBe(CV_AT_STRESS_RANGE_CONVENTION);
   });
 
   it('inside a segment gives the value at the range’s log-middle (hand calculation: 200/√(70 × 140) = 2.0203 m²/yr)', () => {

@@ -13,6 +13,7 @@ const PRINTED_FACTORS: ReadonlyArray<readonly [UnitName, UnitName, number, numbe
   ['tsf', 'kPa', 95.76052, 5e-6, 'NIST SP 811 psf × 2000 (tsf = 2000 lbf/ft²); domain.md prints 95.7605'],
   ['MPa', 'kPa', 1000, 0, 'SI prefix, exact'],
   ['in', 'mm', 25.4, 0, 'NIST SP 811: in = 2.54 E-02 m, exact'],
+  ['ft', 'mm', 304.8, 0, 'NIST SP 811: ft = 3.048 E-01 m, exact'],
   ['cm', 'mm', 10, 0, 'SI prefix, exact'],
   ['cm2PerS', 'm2PerYr', 3155.76, 1e-9, 'exact with the 365.25-day year (1e-4 m² × 31 557 600 s)'],
   ['m2PerS', 'm2PerYr', 31_557_600, 0, 'exact with the 365.25-day year'],
