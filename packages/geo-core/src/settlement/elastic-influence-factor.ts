@@ -3,10 +3,12 @@ import type { FootingShape } from '../stress/footing.types.js';
 /** Where on the footing the settlement is wanted, or a rigid footing's uniform settlement. */
 export type ElasticSettlementPosition = 'centre' | 'corner' | 'average' | 'rigid';
 
-// Rigid-footing factors αr against L/B from the published table (Das, *Principles
+// Rigid-footing factors αr against L/B as the textbooks tabulate them (Das, *Principles
 // of Foundation Engineering*, table of α, αav and αr for shallow foundations on
-// an elastic half-space; values from memory). No closed form exists for a rigid
-// rectangle; beyond the last row the function answers null rather than extrapolate.
+// an elastic half-space), quoted without the book at hand: they are not checked
+// against it here, only against the bounds every rigid factor must keep (between
+// the flexible corner and average values, tested). No closed form exists for a
+// rigid rectangle; beyond the last row the function answers null rather than extrapolate.
 const RIGID_FACTOR_TABLE: ReadonlyArray<readonly [number, number]> = [
   [1, 0.88],
   [1.5, 1.08],
@@ -31,8 +33,8 @@ const RIGID_FACTOR_TABLE: ReadonlyArray<readonly [number, number]> = [
  * bound (the plane-strain displacement grows like the logarithm of depth), so
  * it has no α: null — use a finite layer (immediateSettlementFiniteLayer).
  *
- * Published check values (square): centre 1.122, corner 0.561, average 0.946,
- * rigid 0.88 (Das, *Principles of Foundation Engineering*, from memory).
+ * Values for a square: centre 1.1222, corner 0.5611, average 0.9464 (the
+ * closed forms, worked by hand in the tests); rigid 0.88 (the table).
  *
  * @param shape 'rectangle' (then lengthToWidthRatio = L/B ≥ 1), 'square', 'circle' or 'strip'
  * @param lengthToWidthRatio L/B, dimensionless (read for a rectangle only)

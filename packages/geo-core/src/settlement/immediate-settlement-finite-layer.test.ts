@@ -2,15 +2,45 @@ import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { elasticInfluenceFactor } from './elastic-influence-factor.js';
 import { foxDepthFactor } from './fox-depth-factor.js';
+import { gaussLegendreRule } from './gauss-legendre-rule.js';
 import { immediateSettlementFiniteLayer } from './immediate-settlement-finite-layer.js';
 import { steinbrennerFactors } from './steinbrenner-factors.js';
 import { steinbrennerFactorsInto } from './steinbrenner-factors-into.js';
 
 describe('steinbrennerFactors(lengthRatio, depthRatio)', () => {
-  it('m′ = n′ = 1 gives the published F1 = 0.142 and F2 = 0.083 (Das, Principles of Foundation Engineering, F1/F2 tables, from memory)', () => {
-    const { f1, f2 } = steinbrennerFactors(1, 1);
-    expect(Math.abs(f1 - 0.142)).toBeLessThanOrEqual(0.0005);
-    expect(Math.abs(f2 - 0.083)).toBeLessThanOrEqual(0.0005);
+  it('m′ = n′ = 1 and m′ = 2, n′ = 10 give the hand calculations written out (six decimals)', () => {
+    // m′ = n′ = 1: A0 = A1 = ln(2.414214 × 1.414214/2.732051) = ln 1.249689 = 0.222895; F1 = 0.445789/π = 0.141899;
+    // A2 = 1/√3, F2 = (1/2π)(π/6) = 0.083333.
+    // m′ = 2, n′ = 10: A0 = 2 ln(3.236068 × 10.198039/(2 × 11.246951)) = 2 × 0.383310 = 0.766620;
+    // A1 = ln(4.236068 × 10.049876/12.246951) = 1.245919; F1 = 2.012539/π = 0.640611;
+    // F2 = (10/2π)·atan(2/(10 × 10.246951)) = 1.591549 × 0.019516 = 0.031060.
+    expect(Math.abs(steinbrennerFactors(1, 1).f1 - 0.141899)).toBeLessThanOrEqual(0.000001);
+    expect(Math.abs(steinbrennerFactors(1, 1).f2 - 0.083333)).toBeLessThanOrEqual(0.000001);
+    expect(Math.abs(steinbrennerFactors(2, 10).f1 - 0.640611)).toBeLessThanOrEqual(0.000001);
+    expect(Math.abs(steinbrennerFactors(2, 10).f2 - 0.03106)).toBeLessThanOrEqual(0.000001);
+  });
+
+  it('is the half-space corner displacement at the surface less that at depth H (the route Steinbrenner took; independent quadrature)', () => {
+    // Boussinesq's point-load displacement (1 + ν)/(2πE)·[2(1 − ν)/R + z²/R³] summed over the B × L corner rectangle,
+    // in closed form along each ray from the corner: F(ρ) = 2(1 − ν)(√(ρ² + z²) − z) + z − z²/√(ρ² + z²); then
+    // 48-point Gauss–Legendre over the angle on each side of the diagonal. B = 1, ν = 0.3.
+    const { nodes, weights } = gaussLegendreRule(48);
+    const nu = 0.3;
+    const cornerDisplacement = (lengthM: number, depthM: number) => {
+      const radial = (rho: number) => {
+        const slant = Math.hypot(rho, depthM);
+        return 2 * (1 - nu) * (slant - depthM) + depthM - (depthM * depthM) / slant;
+      };
+      const diagonal = Math.atan2(lengthM, 1);
+      const part = (from: number, to: number, reach: (theta: number) => number) =>
+        nodes.reduce((sum, u, i) => sum + (weights[i] ?? 0) * ((to - from) / 2) * radial(reach(from + ((to - from) / 2) * (1 + u))), 0);
+      return ((1 + nu) / (2 * Math.PI)) * (part(0, diagonal, (t) => 1 / Math.cos(t)) + part(diagonal, Math.PI / 2, (t) => lengthM / Math.sin(t)));
+    };
+    for (const [m, n] of [[1, 1], [2, 3], [5, 0.5]] as const) {
+      const { f1, f2 } = steinbrennerFactors(m, n);
+      const steinbrenner = (1 - nu * nu) * (f1 + ((1 - 2 * nu) / (1 - nu)) * f2);
+      expect(Math.abs(steinbrenner - (cornerDisplacement(m, 0) - cornerDisplacement(m, n)))).toBeLessThan(1e-9);
+    }
   });
 
   it('F2 at m′ = n′ = 1 is exactly 1/12: (1/2π)·atan(1/√3) = (1/2π)(π/6)', () => {
@@ -47,6 +77,14 @@ describe('immediateSettlementFiniteLayer({ pressureKpa, widthM, lengthM, layerTh
     // Hand calculation: Is = F1 + (1 − 0.6)/(0.7)·F2 = 0.14189 + 0.57143 × 0.08333 = 0.18951;
     // Se = 100 × 4 × 1 × 0.91/10 000 × 0.18951 = 0.0068982 m.
     expect(immediateSettlementFiniteLayer(base).settlementM).toBeCloseTo(0.0068982, 6);
+  });
+
+  it('centre of a 1 m × 2 m footing on a 5 m layer: m′ = 2, n′ = 10 (hand calculation)', () => {
+    // α = 4, B′ = 0.5 m; F1 = 0.640611, F2 = 0.031060 (worked out above); Is = 0.640611 + (0.4/0.7) × 0.031060 = 0.658360;
+    // Se = 150 × 4 × 0.5 × 0.91/10 400 × 0.658360 = 0.017282 m. With the founding depth 1 m, Fox's If multiplies it.
+    const layered = { pressureKpa: 150, widthM: 1, lengthM: 2, layerThicknessM: 5, elasticModulusKpa: 10_400, poissonRatio: 0.3, position: 'centre' as const };
+    expect(immediateSettlementFiniteLayer(layered).settlementM).toBeCloseTo(0.017282, 6);
+    expect(immediateSettlementFiniteLayer({ ...layered, foundationDepthM: 1 }).settlementM).toBeCloseTo(0.017282 * foxDepthFactor(2, 1, 0.3), 6);
   });
 
   it('on a very deep layer equals the half-space value q·B·(1 − ν²)/E·α', () => {

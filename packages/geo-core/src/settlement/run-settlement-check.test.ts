@@ -5,8 +5,8 @@ import type { Footing } from '../stress/footing.types.js';
 import { foxDepthFactor } from './fox-depth-factor.js';
 import { runSettlementCheck } from './run-settlement-check.js';
 
-// Hand-calculation profile (invented; no textbook example is recalled precisely enough
-// to cite, so the checks below are worked by hand in the comments): 4 m of sand over
+// Hand-calculation profile (invented; the checks below are worked by hand in the comments; the published
+// settlement examples are in published-settlement-checks.test.ts): 4 m of sand over
 // 4 m of clay, water table 2 m below ground.
 const sandOverClay = (clay: Partial<SoilProfile['layers'][number]> = {}): SoilProfile => ({
   groundLevelM: 10,
@@ -98,7 +98,7 @@ describe('runSettlementCheck({ profile, footings, options })', () => {
   });
 
   it('immediate settlement on a very deep elastic layer equals the half-space formula q·B·(1 − ν²)/E·1.122', () => {
-    // Published α = 1.122 for the centre of a flexible square (Das, Principles of Foundation Engineering, from memory);
+    // α = 1.1222 for the centre of a flexible square (the closed form, worked by hand in elastic-influence-factor.test.ts);
     // a 2 km layer under a 2 m footing differs from the half-space by F2 ≈ 1e-3 of F1 — tolerance 0.2 %.
     const profile: SoilProfile = { groundLevelM: 0, waterTableDepthM: 0, layers: [{ name: 'stiff clay', thicknessM: 2000, unitWeightKnPerM3: 20, saturatedUnitWeightKnPerM3: 20, elasticModulusKpa: 20_000, poissonRatio: 0.3 }] };
     const result = runSettlementCheck({ profile, footings: [{ ...footing, depthM: 0 }] });

@@ -16,9 +16,11 @@ export interface SteinbrennerFactors {
  * A0 → 0, so F1 = ln(1 + n′²)/(2π) and F2 = (n′/2π)·atan(1/n′) — finite for a
  * finite layer; a strip on a half-space (both infinite) settles without bound.
  *
- * Source: Steinbrenner (1934), *Die Strasse* 1:121–124; as printed in Das,
- * *Principles of Foundation Engineering*, elastic settlement (equations and the
- * F1/F2 tables; m′ = n′ = 1 → F1 0.142, F2 0.083, from memory).
+ * Source: Steinbrenner (1934), *Die Strasse* 1:121–124; the equations as printed
+ * in Das, *Principles of Foundation Engineering*, elastic settlement, and in
+ * Bowles, *Foundation Analysis and Design*, ch. 5. m′ = n′ = 1 gives F1 = 0.1419 and
+ * F2 = 1/12 (worked by hand in the tests); F1 and F2 equal the half-space corner
+ * displacement at the surface less that at depth H (tested by quadrature).
  *
  * @param lengthRatio m′ = L′/B′, dimensionless (> 0; Infinity for a strip)
  * @param depthRatio n′ = H/B′, dimensionless (≥ 0; Infinity for a half-space)

@@ -24,15 +24,14 @@ const bruteForceInfluence = (radiusM: number, offsetM: number, depthM: number): 
 };
 
 describe('stressIncreaseCircle({ pressureKpa, radiusM, depthM })', () => {
-  // Published table of Δσz/q on the axis of a circle (Das, Principles of Geotechnical
-  // Engineering): z/R = 2 → 0.2845 (also printed in domain.md); z/R = 1 → 0.6465 and
-  // z/R = 0.5 → 0.9106 from memory. Four printed decimals: tolerance 0.00005 (+ rounding).
+  // Hand calculations of q·[1 − (1 + (R/z)²)^−1.5]: z/R = 2 → 1 − 0.8^1.5 = 1 − 0.715542 = 0.284458;
+  // z/R = 1 → 1 − 0.5^1.5 = 1 − 0.353553 = 0.646447; z/R = 0.5 → 1 − 0.2^1.5 = 1 − 0.089443 = 0.910557.
   it.each([
-    [2, 0.2845],
-    [1, 0.6465],
-    [0.5, 0.9106],
-  ])('at z/R = %s the ratio Δσz/q is the published %s', (depthOverRadius, expected) => {
-    expect(Math.abs(stressIncreaseCircle({ pressureKpa: 1, radiusM: 1, depthM: depthOverRadius }) - expected)).toBeLessThanOrEqual(0.00006);
+    [2, 0.284458],
+    [1, 0.646447],
+    [0.5, 0.910557],
+  ])('at z/R = %s the ratio Δσz/q is %s (hand calculation, six decimals)', (depthOverRadius, expected) => {
+    expect(Math.abs(stressIncreaseCircle({ pressureKpa: 1, radiusM: 1, depthM: depthOverRadius }) - expected)).toBeLessThanOrEqual(0.0000005);
   });
 
   it('property: falls as depth grows and never exceeds q', () => {
