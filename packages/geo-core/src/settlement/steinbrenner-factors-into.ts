@@ -3,10 +3,9 @@
  * to out[1]. The settlement check calls it some half a million times, and an
  * object per call was a fifth of the check's garbage-collection time. Same
  * formulas, same source (Steinbrenner 1934; see steinbrennerFactors); inputs
- * are validated by the callers (m′ > 0, n′ ≥ 0, not both infinite). m′ = Infinity
- * (the corner of a semi-infinite strip) takes the limit, as steinbrennerFactors.
+ * are validated by the callers (m′ > 0 finite, n′ ≥ 0).
  *
- * @param lengthRatio m′ = L′/B′, dimensionless (Infinity for a strip)
+ * @param lengthRatio m′ = L′/B′, dimensionless
  * @param depthRatio n′ = H/B′, dimensionless (Infinity for a half-space)
  * @param out two slots, overwritten with F1 and F2
  * @example steinbrennerFactorsInto(1, 1, out) // out = [0.1419, 0.0833]
@@ -17,12 +16,6 @@ export function steinbrennerFactorsInto(lengthRatio: number, depthRatio: number,
   if (n === 0) {
     out[0] = 0;
     out[1] = 0;
-    return;
-  }
-  if (m === Infinity) {
-    // A semi-infinite strip's corner: A0 → 0, A1 → ln√(1 + n²), atan(A2) → atan(1/n).
-    out[0] = Math.log1p(n * n) / (2 * Math.PI);
-    out[1] = (n / (2 * Math.PI)) * Math.atan(1 / n);
     return;
   }
   const rootM = Math.sqrt(m * m + 1);

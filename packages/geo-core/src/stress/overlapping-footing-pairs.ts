@@ -28,9 +28,9 @@ export function overlappingFootingPairs(footings: readonly Footing[]): Array<[st
   return pairs;
 }
 
-/** Half extents along x and y of a box, a band (infinite along y) or a disc's bounding box. */
-function halfExtents(footing: PreparedFooting): [number, number] {
-  return [footing.widthM / 2, footing.shape === 'strip' ? Infinity : footing.lengthM / 2];
+/** Half extent along y of a box (a band is infinite along y; a disc is handled apart). */
+function halfLengthM(footing: PreparedFooting): number {
+  return footing.shape === 'strip' ? Infinity : footing.lengthM / 2;
 }
 
 function overlap(a: PreparedFooting, b: PreparedFooting): boolean {
@@ -40,13 +40,10 @@ function overlap(a: PreparedFooting, b: PreparedFooting): boolean {
   if (a.shape === 'circle' || b.shape === 'circle') {
     const disc = a.shape === 'circle' ? a : b;
     const other = a.shape === 'circle' ? b : a;
-    const [halfX, halfY] = halfExtents(other);
     // Distance from the disc's centre to the nearest point of the box or band.
-    const gapX = Math.max(0, dx - halfX);
-    const gapY = Math.max(0, dy - halfY);
+    const gapX = Math.max(0, dx - other.widthM / 2);
+    const gapY = Math.max(0, dy - halfLengthM(other));
     return Math.hypot(gapX, gapY) < disc.widthM / 2;
   }
-  const [aHalfX, aHalfY] = halfExtents(a);
-  const [bHalfX, bHalfY] = halfExtents(b);
-  return dx < aHalfX + bHalfX && dy < aHalfY + bHalfY;
+  return dx < (a.widthM + b.widthM) / 2 && dy < halfLengthM(a) + halfLengthM(b);
 }
