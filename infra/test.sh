@@ -1,8 +1,9 @@
 #!/usr/bin/env bash
-# npm test: the same set-up as npm start, on separate throw-away test services, then every
+# npm test: the same set-up as npm start, on separate throw-away test services, then the
+# type check (tsc -b over every package and app, tests included) and the lint (ESLint), then every
 # suite: unit (geo-core, types, web), API integration (real PostgreSQL, S3 fake, mail fake,
 # job worker) and browser end-to-end (Playwright driving Debian's Chromium).
-# Every suite runs even when an earlier one fails; the exit code is non-zero if any failed.
+# Every step runs even when an earlier one fails; the exit code is non-zero if any failed.
 set -uo pipefail
 source "$(dirname "$0")/lib.sh"
 cd "$REPO"
@@ -44,9 +45,14 @@ build_packages
 failed=()
 suite() {
   local name=$1; shift
+  local started=$SECONDS
   log "── $name"
-  if "$@"; then log "$name: passed"; else log "$name: FAILED"; failed+=("$name"); fi
+  if "$@"; then log "$name: passed ($((SECONDS - started)) s)"; else log "$name: FAILED ($((SECONDS - started)) s)"; failed+=("$name"); fi
 }
+
+# vitest strips types without checking them, so the compiler and the lint run first.
+suite "type check (tsc -b)" pnpm run --silent typecheck
+suite "lint (ESLint)" pnpm run --silent lint
 
 suite "geo-core unit tests" pnpm --filter @porestack/geo-core run test
 suite "types unit tests" pnpm --filter @porestack/types run test

@@ -1,6 +1,40 @@
 export { ROLES, RoleSchema, RolesSchema, ROLE_LABELS, LAB_STAFF_ROLES, canonicalRoles, holdsAnyRole, roleList } from './roles.js';
 export type { Role } from './roles.js';
 export { ROLE_ACCESS } from './role-access.js';
+export type { Assert, DeepWritable, MatchesSource, SameShape, ShapeDifference } from './type-contract.js';
+export {
+  ConsolidationTestResultSchema,
+  ConsolidationIncrementResultSchema,
+  TaylorIncrementResultSchema,
+  CasagrandeIncrementResultSchema,
+  CompressionIndexFitSchema,
+  RecompressionIndexFitSchema,
+  CasagrandePreconsolidationConstructionSchema,
+  PachecoSilvaPreconsolidationConstructionSchema,
+  AppliedPickSchema,
+  ConsolidationWarningSchema,
+  CONSOLIDATION_WARNING_CODES,
+  StressVoidRatioPointSchema,
+  StressVoidRatioLineSchema,
+  TimeCurvePointSchema,
+  TimeCurveLineSchema,
+} from './lab/consolidation-result.js';
+export type {
+  ConsolidationTestResult,
+  ConsolidationIncrementResult,
+  TaylorIncrementResult,
+  CasagrandeIncrementResult,
+  CompressionIndexFit,
+  RecompressionIndexFit,
+  CasagrandePreconsolidationConstruction,
+  PachecoSilvaPreconsolidationConstruction,
+  AppliedPick,
+  ConsolidationWarning,
+  StressVoidRatioPoint,
+  StressVoidRatioLine,
+  TimeCurvePoint,
+  TimeCurveLine,
+} from './lab/consolidation-result.js';
 export {
   TEST_STATUSES,
   TestStatusSchema,

@@ -1,5 +1,4 @@
-import type { ConsolidationTestResult } from '@porestack/geo-core';
-import type { ReviewEvent, ReviewQueueItem, TestStatus } from '@porestack/types';
+import type { ConsolidationTestResult, ReviewEvent, ReviewQueueItem, TestStatus } from '@porestack/types';
 import type { EntityManager } from 'typeorm';
 import { dataSource } from '../../data-source.js';
 import { NotFoundError } from '../../errors/domain-error.js';
@@ -126,6 +125,7 @@ export async function reviewQueue(orgId: string): Promise<ReviewQueueItem[]> {
     technicianId: row['technician_id'] as string,
     technicianName: row['technician_name'] as string,
     submittedAt: (row['submitted_at'] as Date).toISOString(),
+    // analyses.result is stored only after ConsolidationTestResultSchema has checked it (runAnalysis).
     keyParameters: keyParametersFrom((row['result'] as ConsolidationTestResult | null) ?? null),
     warningCount: (row['warning_count'] as number | null) ?? 0,
   }));

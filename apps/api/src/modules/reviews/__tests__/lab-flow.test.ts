@@ -6,11 +6,11 @@ import { createApp } from '../../../app.js';
 import { env } from '../../../config/env.js';
 import { dataSource } from '../../../data-source.js';
 import { analyseTestJob } from '../../../jobs/analyse-test.job.js';
-import { createBoss, stopJobQueue } from '../../../jobs/boss.js';
-import { registerJobs } from '../../../jobs/register-jobs.js';
+import { stopJobQueue } from '../../../jobs/boss.js';
 import { createMember, signedInBrowser, signUpAdmin, type Browser } from '../../../testing/browser.js';
 import { draftTest, KNOWN_SOIL, KNOWN_TEST, submittedTest, uploadKnownReadings } from '../../../testing/lab-fixtures.js';
 import { linkIn, waitForMail } from '../../../testing/mail-inbox.js';
+import { startTestWorker } from '../../../testing/test-worker.js';
 
 const app = createApp();
 let boss: PgBoss;
@@ -50,10 +50,7 @@ describe('lab workflow: readings → analysis → review → soil record version
 
   beforeAll(async () => {
     // The real worker, in this process, on the real queue.
-    boss = createBoss();
-    boss.on('error', () => undefined);
-    await boss.start();
-    await registerJobs(boss, [analyseTestJob]);
+    boss = await startTestWorker([analyseTestJob]);
     const signedUp = await signUpAdmin(app, 'lab-admin');
     orgId = signedUp.orgId;
     admin = signedUp.browser;
