@@ -51,15 +51,18 @@ export { ApiErrorSchema, API_ERROR_CODES } from './errors.js';
 export type { ApiError, ApiErrorCode } from './errors.js';
 export {
   SignUpSchema,
+  SignUpConfirmSchema,
+  SignUpSentSchema,
   SignInSchema,
   PasswordResetRequestSchema,
   PasswordResetConfirmSchema,
+  PASSWORD_MAX_BYTES,
   UserSchema,
   MembershipSchema,
   SessionSchema,
   CsrfTokenSchema,
 } from './auth.js';
-export type { SignUp, SignIn, PasswordResetRequest, PasswordResetConfirm, User, Membership, Session, CsrfToken } from './auth.js';
+export type { SignUp, SignUpConfirm, SignUpSent, SignIn, PasswordResetRequest, PasswordResetConfirm, User, Membership, Session, CsrfToken } from './auth.js';
 export {
   MemberSchema,
   InvitationCreateSchema,
