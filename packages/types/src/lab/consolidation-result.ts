@@ -147,6 +147,7 @@ export const CONSOLIDATION_WARNING_CODES = [
   'no-unload-branch',
   'no-recompression-branch',
   'primary-not-reached',
+  'short-secondary-line',
   'time-curve-not-drawn',
   'time-curves-not-applied',
   'non-monotonic-time',
