@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { ConsolidationTestResultSchema } from './consolidation-result.js';
 import { SoilRecordVersionSchema } from './review.js';
 
 const isoDate = z.iso.date();
@@ -90,6 +91,6 @@ export const IssuedTestSummarySchema = z.object({
   /** The reviewer's reason when an automatic choice (σ′p, a time-curve point) was overridden. */
   overrideReason: z.string().nullable(),
   /** geo-core's ConsolidationTestResult of the approved analysis: the curves and constructions to draw. */
-  result: z.record(z.string(), z.unknown()),
+  result: ConsolidationTestResultSchema,
 });
 export type IssuedTestSummary = z.infer<typeof IssuedTestSummarySchema>;

@@ -8,14 +8,13 @@ import { Panel } from '../../components/panel';
 import { LoadingBlock } from '../../components/spinner';
 import { paths } from '../../config/paths';
 import { formatDate } from '../../lib/format';
-import type { AnalysisResult } from '../../features/analysis/components/analysis-result';
 import { IssuedCurves } from '../../features/analysis/components/issued-curves';
 import { ParametersTable, WarningsList } from '../../features/analysis/components/parameters-table';
 import { useIssuedTest } from '../../features/results/api/get-issued-test';
 import { IssuedProvenance } from '../../features/results/components/issued-provenance';
 import { depthRange } from '../../features/results/components/parameter-format';
 import { ReportDownload } from '../../features/results/components/report-download';
-import { sampleQualityInWords, type SampleQualityResult } from '../../features/results/components/sample-quality-words';
+import { sampleQualityInWords } from '../../features/results/components/sample-quality-words';
 import { SpecimenTable } from '../../features/results/components/specimen-table';
 import { useCurrentOrg } from '../org-context';
 import { RoleGate } from '../role-gate';
@@ -36,8 +35,8 @@ function IssuedTestPage() {
   if (summary.isPending) return <LoadingBlock label="Loading the test summary…" />;
   if (summary.error) return <ErrorMessage error={summary.error} title="The test summary could not be loaded" onRetry={() => void summary.refetch()} />;
   const s = summary.data;
-  const result = s.result as unknown as AnalysisResult;
-  const quality = sampleQualityInWords(s.result['sampleQuality'] as SampleQualityResult);
+  const result = s.result;
+  const quality = sampleQualityInWords(result.sampleQuality);
   const isCurrent = s.version.supersededAt === null;
   const overridden = result.picksApplied.some((pick) => pick.applied);
   return (

@@ -82,14 +82,15 @@ describe('home pages', () => {
     const admin = await signUpAdmin(app, 'home-audit');
     const tech = await createMember(admin.orgId, 'technician', 'home-audit-tech');
     const manager = await createMember(admin.orgId, 'lab_manager', 'home-audit-manager');
+    const colleague = await createMember(admin.orgId, 'technician', 'home-audit-colleague');
     const fixture = await draftTest(admin.orgId, tech.userId);
     const browser = await signedInBrowser(app, manager.email);
-    await browser.patch(`/api/orgs/${admin.orgId}/tests/${fixture.testId}`, { apparatusName: 'Frame 3', technicianId: manager.userId }).expect(200);
+    await browser.patch(`/api/orgs/${admin.orgId}/tests/${fixture.testId}`, { apparatusName: 'Frame 3', technicianId: colleague.userId }).expect(200);
     const log = (await admin.browser.get(`/api/orgs/${admin.orgId}/audit`).expect(200)).body as AuditEntry[];
     const edit = log.find((e) => e.action === 'test.updated');
     expect(edit?.objectLabel).toMatch(/^T-/);
     expect(edit?.details['changes']).toEqual([
-      { field: 'technician', from: 'Test home-audit-tech', to: 'Test home-audit-manager' },
+      { field: 'technician', from: 'Test home-audit-tech', to: 'Test home-audit-colleague' },
       { field: 'apparatusName', from: 'Frame 2', to: 'Frame 3' },
     ]);
   });

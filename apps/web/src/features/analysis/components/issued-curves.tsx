@@ -1,6 +1,6 @@
+import type { ConsolidationTestResult } from '@porestack/types';
 import { useMemo } from 'react';
 import { PlotlyChart, type PlotLayout } from '../../../components/plot/plotly-chart';
-import type { AnalysisResult } from './analysis-result';
 import { coefficientTraces, compressionTraces, PLOT_COLOURS } from './plot-traces';
 
 const LOG_STRESS = { title: { text: 'Effective vertical stress σ′ (kPa)' }, type: 'log' as const };
@@ -9,7 +9,7 @@ const LOG_STRESS = { title: { text: 'Effective vertical stress σ′ (kPa)' }, t
  * The two plots of an issued result, read-only: e–log σ′ with where each method put σ′p and the
  * adopted σ′p drawn, and cv against stress by both time-curve methods (loading increments).
  */
-export function IssuedCurves({ result }: { result: AnalysisResult }) {
+export function IssuedCurves({ result }: { result: ConsolidationTestResult }) {
   const compression = useMemo(() => compressionTraces(result, 'voidRatio', { summary: true }), [result]);
   const cv = useMemo(
     () =>

@@ -1,7 +1,7 @@
 import type { MigrationInterface, QueryRunner } from "typeorm";
 
-export class ClientSharing1796314059512 implements MigrationInterface {
-    name = 'ClientSharing1796314059512'
+export class ClientSharing1796322759129 implements MigrationInterface {
+    name = 'ClientSharing1796322759129'
 
     public async up(queryRunner: QueryRunner): Promise<void> {
         await queryRunner.query(`CREATE TABLE "invitation_projects" ("id" uuid NOT NULL DEFAULT gen_random_uuid(), "organisation_id" uuid NOT NULL, "invitation_id" uuid NOT NULL, "project_id" uuid NOT NULL, "created_at" TIMESTAMP WITH TIME ZONE NOT NULL DEFAULT now(), CONSTRAINT "PK_8eefbbdffd76934d19eb751b6c3" PRIMARY KEY ("id"))`);
