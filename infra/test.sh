@@ -18,7 +18,9 @@ trap stop_started EXIT
 trap 'exit 130' INT TERM
 
 ensure_node_deps
-apt_install chromium
+# chromium: the browser tests, and the worker printing reports to PDF (fonts-dejavu-core for its
+# page margins and fallback glyphs); poppler-utils: the report tests read the PDFs back (pdftotext, pdfinfo).
+apt_install chromium fonts-dejavu-core poppler-utils
 
 # Test data is thrown away on every run, so every run starts clean.
 rm -rf "$DATA" "$(pg_root test)"

@@ -20,6 +20,7 @@ import { consolidationTestsRouter } from './modules/consolidation-tests/consolid
 import { jobRunsRouter } from './modules/job-runs/job-runs.router.js';
 import { projectsRouter } from './modules/projects/projects.router.js';
 import { reviewsRouter } from './modules/reviews/reviews.router.js';
+import { reportsRouter } from './modules/reports/reports.router.js';
 import { soilRecordsRouter } from './modules/soil-records/soil-records.router.js';
 import { importProfilesRouter } from './modules/import-profiles/import-profiles.router.js';
 import { readingsRouter } from './modules/readings/readings.router.js';
@@ -77,6 +78,7 @@ export function createApp(options: AppOptions = {}): Express {
   app.use(consolidationTestsRouter());
   app.use(reviewsRouter());
   app.use(soilRecordsRouter());
+  app.use(reportsRouter());
   app.use(jobRunsRouter());
   app.use(uploadsRouter());
   app.use(importProfilesRouter());

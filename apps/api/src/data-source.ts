@@ -21,10 +21,12 @@ import { SoilRecordEntity } from './modules/soil-records/soil-record.entity.js';
 import { ImportProfileEntity } from './modules/import-profiles/import-profile.entity.js';
 import { ReadingEntity } from './modules/readings/reading.entity.js';
 import { UploadEntity } from './modules/uploads/upload.entity.js';
+import { IssuedReportEntity } from './modules/reports/issued-report.entity.js';
 import { Init1796179339734 } from './migrations/1796179339734-init.js';
 import { LabRecords1796180920952 } from './migrations/1796180920952-lab-records.js';
 import { ReadingsImport1796181181337 } from './migrations/1796181181337-readings-import.js';
 import { ReadingsOneForeignKey1796181664432 } from './migrations/1796181664432-readings-one-foreign-key.js';
+import { IssuedReports1796313882857 } from './migrations/1796313882857-issued-reports.js';
 
 /**
  * The one DataSource (the TypeORM CLI requires exactly one export here). Entities and
@@ -37,8 +39,8 @@ export const dataSource = new DataSource({
   entities: [UserEntity, OrganisationEntity, MembershipEntity, InvitationEntity, PasswordResetTokenEntity, AuditEntryEntity,
     ProjectEntity, ProjectMemberEntity, BoreholeEntity, SampleEntity, ConsolidationTestEntity, AnalysisEntity, ReviewEventEntity,
     SoilRecordEntity, SoilRecordVersionEntity, SoilRecordSupersessionEntity, JobRunEntity,
-    UploadEntity, ReadingEntity, ImportProfileEntity],
-  migrations: [Init1796179339734, LabRecords1796180920952, ReadingsImport1796181181337, ReadingsOneForeignKey1796181664432],
+    UploadEntity, ReadingEntity, ImportProfileEntity, IssuedReportEntity],
+  migrations: [Init1796179339734, LabRecords1796180920952, ReadingsImport1796181181337, ReadingsOneForeignKey1796181664432, IssuedReports1796313882857],
   // gen_random_uuid() is built into PostgreSQL 13+, so no extension is needed on a managed server.
   uuidExtension: 'pgcrypto',
   synchronize: false,

@@ -32,6 +32,8 @@ const EnvSchema = z.object({
   IMPORT_MAX_FILE_MB: z.coerce.number().positive().default(40),
   /** Most rows of readings one file may hold. */
   IMPORT_MAX_ROWS: z.coerce.number().int().positive().default(500_000),
+  /** The Chromium that prints reports to PDF (Debian's package, installed by infra/lib.sh). */
+  CHROMIUM_PATH: z.string().default('/usr/bin/chromium'),
   /** Folder of the built web app served in production. */
   WEB_DIST: z.string().optional(),
 });

@@ -1,0 +1,155 @@
+import { createHash } from 'node:crypto';
+import type { IssuedReport, JobRun } from '@porestack/types';
+import type PgBoss from 'pg-boss';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { createApp } from '../../../app.js';
+import { dataSource } from '../../../data-source.js';
+import { createBoss, stopJobQueue } from '../../../jobs/boss.js';
+import { GENERATE_REPORT_QUEUE } from '../../../jobs/generate-report-queue.js';
+import { generateReportJob } from '../../../jobs/generate-report.job.js';
+import { registerJobs } from '../../../jobs/register-jobs.js';
+import { createMember, signedInBrowser, signUpAdmin, type Browser } from '../../../testing/browser.js';
+import { download } from '../../../testing/downloads.js';
+import { submittedTest, type LabFixture } from '../../../testing/lab-fixtures.js';
+import { pdfInfo, pdfText } from '../../../testing/pdf-reader.js';
+
+const app = createApp();
+let boss: PgBoss;
+
+/** Follows the report's state the way the soil record page does, until it has settled. */
+async function settledReport(browser: Browser, url: string): Promise<IssuedReport> {
+  const deadline = Date.now() + 30_000;
+  for (;;) {
+    const report = (await browser.get(url).expect(200)).body as IssuedReport;
+    if (report.state === 'ready' || report.state === 'failed') return report;
+    if (Date.now() > deadline) throw new Error(`report still ${report.state} after 30 s`);
+    await new Promise((resolve) => setTimeout(resolve, 200));
+  }
+}
+
+/** Works the report queue with the given job definition (the real one, or one with a broken printer). */
+async function workReportsWith(job: ReturnType<typeof generateReportJob>): Promise<void> {
+  await boss.offWork(GENERATE_REPORT_QUEUE);
+  await registerJobs(boss, [job]);
+}
+
+describe('the PDF test report of an approved soil record version', () => {
+  let orgId: string;
+  let manager: Browser;
+  let tech: Browser;
+  let fixture: LabFixture;
+  let base: string;
+  let first: { bytes: Buffer; headers: Record<string, string> };
+  let report: IssuedReport;
+
+  beforeAll(async () => {
+    boss = createBoss();
+    boss.on('error', () => undefined);
+    await boss.start();
+    await registerJobs(boss, [generateReportJob()]);
+    const signedUp = await signUpAdmin(app, 'report-admin');
+    orgId = signedUp.orgId;
+    const t = await createMember(orgId, 'technician', 'report-tech');
+    const m = await createMember(orgId, 'lab_manager', 'report-manager');
+    tech = await signedInBrowser(app, t.email);
+    manager = await signedInBrowser(app, m.email);
+    fixture = await submittedTest(orgId, t.userId);
+  });
+
+  afterAll(async () => {
+    await boss.stop({ graceful: true, wait: true });
+    await stopJobQueue();
+  });
+
+  it('when a lab manager approves the test, then the report is generated once by a job whose state is visible, and it is ready with its SHA-256', async () => {
+    const approval = await manager.post(`/api/orgs/${orgId}/tests/${fixture.testId}/approve`, { comment: 'Constructions checked.' }).expect(200);
+    base = `/api/orgs/${orgId}/soil-records/${approval.body.soilRecord.recordId}/versions/1/report`;
+    report = await settledReport(manager, base);
+    expect(report).toMatchObject({ kind: 'test-report', state: 'ready', message: null });
+    expect(report.sha256).toMatch(/^[0-9a-f]{64}$/);
+    const job = (await manager.get(`/api/orgs/${orgId}/jobs/${report.jobId}`).expect(200)).body as JobRun;
+    expect(job).toMatchObject({ kind: 'generate-report', state: 'succeeded', testId: fixture.testId });
+    expect(job.result).toMatchObject({ reportId: report.id, sha256: report.sha256 });
+  });
+
+  it('when the report is downloaded twice, then both downloads are the same file with the hash recorded at issue', async () => {
+    first = await download(manager, `${base}/pdf`);
+    const second = await download(tech, `${base}/pdf`);
+    const hash = (bytes: Buffer) => createHash('sha256').update(bytes).digest('hex');
+    expect(first.headers['content-type']).toBe('application/pdf');
+    expect(first.headers['content-disposition']).toMatch(/^attachment; filename="oedometer-report-T-.+-v1\.pdf"$/);
+    expect(hash(first.bytes)).toBe(report.sha256);
+    expect(hash(second.bytes)).toBe(report.sha256);
+    expect(first.headers['x-content-sha256']).toBe(report.sha256);
+    expect(first.bytes.subarray(0, 5).toString()).toBe('%PDF-');
+    expect(report.byteSize).toBe(first.bytes.length);
+  });
+
+  it('when the PDF is opened, then it has its pages, the sample, both σ′p, the adopted one, the method, the approver, page numbers and the caution as selectable text', async () => {
+    const info = await pdfInfo(first.bytes);
+    // Text pages (identification, increments), compression plots, coefficient plots, time curves of 11 increments.
+    expect(Number(info['Pages'])).toBeGreaterThanOrEqual(6);
+    expect(info['Page size']).toMatch(/\(A4\)$/);
+    const text = await pdfText(first.bytes);
+    const record = (await manager.get(base.replace(/\/report$/, '')).expect(200)).body as { preconsolidationAdoptedKpa: number; preconsolidationCasagrandeKpa: number; preconsolidationPachecoSilvaKpa: number; approvedByName: string };
+    const flat = text.replace(/\s+/g, ' ');
+    expect(flat).toContain('Sample U1');
+    expect(flat).toContain(`Preconsolidation stress, adopted σ′p ${record.preconsolidationAdoptedKpa.toFixed(0)} kPa`);
+    expect(flat).toContain(`Preconsolidation stress, Casagrande σ′p ${record.preconsolidationCasagrandeKpa.toFixed(0)} kPa`);
+    expect(flat).toContain(`Preconsolidation stress, Pacheco Silva σ′p ${record.preconsolidationPachecoSilvaKpa.toFixed(0)} kPa`);
+    expect(flat).toContain('ASTM D2435/D2435M');
+    expect(flat).toContain(`Approved for issue by ${record.approvedByName}`);
+    expect(flat).toContain('Constructions checked.');
+    expect(flat).toContain(`Page 1 of ${info['Pages']}`);
+    expect(flat).toContain('for review by a qualified geotechnical engineer');
+    expect(flat).toMatch(/Soil record version 1/);
+  });
+
+  it('when a lab manager asks to generate an issued report again, then 409: an issued report is final', async () => {
+    const res = await manager.post(`${base}/retry`).expect(409);
+    expect(res.body.message).toMatch(/already been issued/);
+  });
+
+  it('when anyone changes or deletes an issued report row with SQL, then the database refuses', async () => {
+    await expect(dataSource.query(`UPDATE issued_reports SET sha256 = repeat('0', 64) WHERE id = $1`, [report.id])).rejects.toThrow(/final/);
+    await expect(dataSource.query('DELETE FROM issued_reports WHERE id = $1', [report.id])).rejects.toThrow(/final/);
+  });
+});
+
+describe('a report whose generation failed', () => {
+  it('when the printer cannot start, then the report and its job say failed, the download answers 409, and a lab manager (not a technician) can retry it to a ready report', async () => {
+    const { orgId } = await signUpAdmin(app, 'report-retry-admin');
+    const t = await createMember(orgId, 'technician', 'report-retry-tech');
+    const m = await createMember(orgId, 'lab_manager', 'report-retry-manager');
+    const tech = await signedInBrowser(app, t.email);
+    const manager = await signedInBrowser(app, m.email);
+    const fixture = await submittedTest(orgId, t.userId);
+    boss = createBoss();
+    boss.on('error', () => undefined);
+    await boss.start();
+    try {
+      await registerJobs(boss, [generateReportJob({ executablePath: '/nonexistent/chromium' })]);
+      const approval = await manager.post(`/api/orgs/${orgId}/tests/${fixture.testId}/approve`, {}).expect(200);
+      const base = `/api/orgs/${orgId}/soil-records/${approval.body.soilRecord.recordId}/versions/1/report`;
+      const failed = await settledReport(manager, base);
+      expect(failed.state).toBe('failed');
+      expect(failed.message).toMatch(/A lab manager can try again/);
+      expect(((await manager.get(`/api/orgs/${orgId}/jobs/${failed.jobId}`).expect(200)).body as JobRun).state).toBe('failed');
+      const refused = await download(manager, `${base}/pdf`, 409);
+      expect(JSON.parse(refused.bytes.toString()).code).toBe('report_not_ready');
+      await tech.post(`${base}/retry`).expect(403);
+
+      await workReportsWith(generateReportJob());
+      const retried = (await manager.post(`${base}/retry`).expect(202)).body as IssuedReport;
+      expect(retried.state).toBe('queued');
+      expect(retried.jobId).not.toBe(failed.jobId);
+      const ready = await settledReport(manager, base);
+      expect(ready.state).toBe('ready');
+      const file = await download(manager, `${base}/pdf`);
+      expect(createHash('sha256').update(file.bytes).digest('hex')).toBe(ready.sha256);
+    } finally {
+      await boss.stop({ graceful: true, wait: true });
+      await stopJobQueue();
+    }
+  });
+});
