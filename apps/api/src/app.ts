@@ -21,6 +21,7 @@ import { jobRunsRouter } from './modules/job-runs/job-runs.router.js';
 import { projectsRouter } from './modules/projects/projects.router.js';
 import { reviewsRouter } from './modules/reviews/reviews.router.js';
 import { exportsRouter } from './modules/exports/exports.router.js';
+import { reportSettingsRouter } from './modules/organisations/report-settings.router.js';
 import { reportsRouter } from './modules/reports/reports.router.js';
 import { soilRecordsRouter } from './modules/soil-records/soil-records.router.js';
 import { importProfilesRouter } from './modules/import-profiles/import-profiles.router.js';
@@ -74,6 +75,7 @@ export function createApp(options: AppOptions = {}): Express {
   app.use(invitationsRouter());
   app.use(orgInvitationsRouter());
   app.use(membersRouter());
+  app.use(reportSettingsRouter());
   app.use(auditRouter());
   app.use(projectsRouter());
   app.use(consolidationTestsRouter());

@@ -13,6 +13,8 @@ export const labPermissions = (role: Role) => ({
   importReadings: role === 'technician',
   /** Approve or ask for changes. */
   review: role === 'lab_manager',
+  /** Ask again for an issued report whose printing failed. */
+  retryReports: role === 'lab_manager',
 });
 
 /** Who may open a test page: the lab, and designers following a soil record back to its test. */

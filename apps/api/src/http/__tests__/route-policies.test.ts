@@ -84,6 +84,11 @@ const SPEC: Record<string, { access: Access; sample: (ctx: Context) => Promise<S
     sample: async (c) => ({ path: `/api/orgs/${c.orgId}/members/${await c.newMemberId()}` }),
   },
   'GET /api/orgs/:orgId/audit': { access: ADMIN, sample: (c) => ({ path: `/api/orgs/${c.orgId}/audit` }) },
+  'GET /api/orgs/:orgId/report-settings': { access: ['admin', 'lab_manager'], sample: (c) => ({ path: `/api/orgs/${c.orgId}/report-settings` }) },
+  'PUT /api/orgs/:orgId/report-settings': {
+    access: ['admin'],
+    sample: (c) => ({ path: `/api/orgs/${c.orgId}/report-settings`, body: { address: '1 Invented Road, Nowhere', testMethodStatement: null } }),
+  },
   'GET /api/orgs/:orgId/designers': { access: PROJECT_EDITORS, sample: (c) => ({ path: `/api/orgs/${c.orgId}/designers` }) },
   'GET /api/orgs/:orgId/projects': { access: LAB_READERS, sample: (c) => ({ path: `/api/orgs/${c.orgId}/projects` }) },
   'POST /api/orgs/:orgId/projects': {

@@ -42,8 +42,8 @@ export function reportsRouter(): Router {
       path: '/retry',
       access: REVIEWERS,
       handler: async (req, res) => {
-        const { orgId, versionId } = await versionInScope(req);
-        res.status(202).json(await retryReport(orgId, 'test-report', versionId, currentUser(req)));
+        const { orgId, versionId, testId } = await versionInScope(req);
+        res.status(202).json(await retryReport(orgId, 'test-report', versionId, currentUser(req), testId));
       },
     },
   ]);

@@ -2,7 +2,7 @@ import { createHash } from 'node:crypto';
 import type { IssuedReport, ReportKind } from '@porestack/types';
 import type { EntityManager } from 'typeorm';
 import { dataSource } from '../../data-source.js';
-import { NotFoundError } from '../../errors/domain-error.js';
+import { DomainError, NotFoundError } from '../../errors/domain-error.js';
 import { enqueueReportGeneration } from '../../jobs/generate-report-queue.js';
 import { logger } from '../../http/logger.js';
 import { objectBytes } from '../../storage/storage.js';
@@ -43,7 +43,7 @@ export async function queueReport(
 
 export async function findReport(orgId: string, kind: ReportKind, subjectId: string): Promise<IssuedReportEntity> {
   const row = await dataSource.getRepository(IssuedReportEntity).findOneBy({ organisationId: orgId, kind, subjectId });
-  if (!row) throw new NotFoundError('report');
+  if (!row) throw new DomainError('not_found', 'No report has been issued for this version: it was approved before reports were printed. A lab manager can print it from the soil record page.');
   return row;
 }
 
@@ -63,12 +63,19 @@ export async function reportFile(orgId: string, kind: ReportKind, subjectId: str
   return { bytes, fileName: row.fileName ?? `${row.id}.pdf`, sha256 };
 }
 
-/** A lab manager asks again for a report whose generation failed. */
-export async function retryReport(orgId: string, kind: ReportKind, subjectId: string, actor: { id: string }): Promise<IssuedReport> {
+/**
+ * A lab manager asks again for a report whose generation failed — or, for a version approved
+ * before reports were issued (it has none), for its first one.
+ */
+export async function retryReport(orgId: string, kind: ReportKind, subjectId: string, actor: { id: string }, testId: string | null): Promise<IssuedReport> {
   return dataSource.transaction(async (manager) => {
     const reports = manager.getRepository(IssuedReportEntity);
     const row = await reports.findOne({ where: { organisationId: orgId, kind, subjectId }, lock: { mode: 'pessimistic_write' } });
-    if (!row) throw new NotFoundError('report');
+    if (!row) {
+      const created = await queueReport(manager, { orgId, kind, subjectId, testId, requestedById: actor.id });
+      await audit.record({ organisationId: orgId, actorUserId: actor.id, action: 'report.requested', objectType: 'issued_report', objectId: created.id, details: { kind, subjectId } }, manager);
+      return toIssuedReport(created);
+    }
     if (row.state !== 'failed') throw reportNotFailed(row.state);
     const jobRunId = await enqueueReportGeneration({ orgId, reportId: row.id, testId: row.testId, requestedById: actor.id }, manager);
     await reports.update({ id: row.id }, { state: 'queued', message: null, jobRunId });

@@ -49,6 +49,11 @@ describe('the PDF test report of an approved soil record version', () => {
     await registerJobs(boss, [generateReportJob()]);
     const signedUp = await signUpAdmin(app, 'report-admin');
     orgId = signedUp.orgId;
+    await signedUp.browser.agent
+      .put(`/api/orgs/${orgId}/report-settings`)
+      .set('x-csrf-token', signedUp.browser.csrfToken)
+      .send({ address: '14 Kiln Yard, Westerby\nsoils@westerby-lab.invalid', testMethodStatement: 'Incremental loading to ASTM D2435/D2435M, Method B, specimens trimmed from the tube centre.' })
+      .expect(200);
     const t = await createMember(orgId, 'technician', 'report-tech');
     const m = await createMember(orgId, 'lab_manager', 'report-manager');
     tech = await signedInBrowser(app, t.email);
@@ -97,7 +102,8 @@ describe('the PDF test report of an approved soil record version', () => {
     expect(flat).toContain(`Preconsolidation stress, adopted σ′p ${record.preconsolidationAdoptedKpa.toFixed(0)} kPa`);
     expect(flat).toContain(`Preconsolidation stress, Casagrande σ′p ${record.preconsolidationCasagrandeKpa.toFixed(0)} kPa`);
     expect(flat).toContain(`Preconsolidation stress, Pacheco Silva σ′p ${record.preconsolidationPachecoSilvaKpa.toFixed(0)} kPa`);
-    expect(flat).toContain('ASTM D2435/D2435M');
+    expect(flat).toContain('Incremental loading to ASTM D2435/D2435M, Method B, specimens trimmed from the tube centre.');
+    expect(flat).toContain('14 Kiln Yard, Westerby');
     expect(flat).toContain(`Approved for issue by ${record.approvedByName}`);
     expect(flat).toContain('Constructions checked.');
     expect(flat).toContain(`Page 1 of ${info['Pages']}`);
@@ -113,6 +119,33 @@ describe('the PDF test report of an approved soil record version', () => {
   it('when anyone changes or deletes an issued report row with SQL, then the database refuses', async () => {
     await expect(dataSource.query(`UPDATE issued_reports SET sha256 = repeat('0', 64) WHERE id = $1`, [report.id])).rejects.toThrow(/final/);
     await expect(dataSource.query('DELETE FROM issued_reports WHERE id = $1', [report.id])).rejects.toThrow(/final/);
+  });
+});
+
+describe('a version approved before reports were printed', () => {
+  it('when its report is asked for, then 404 says a lab manager can print it, and the lab manager’s request prints it', async () => {
+    const { orgId } = await signUpAdmin(app, 'report-legacy-admin');
+    const t = await createMember(orgId, 'technician', 'report-legacy-tech');
+    const m = await createMember(orgId, 'lab_manager', 'report-legacy-manager');
+    const manager = await signedInBrowser(app, m.email);
+    const fixture = await submittedTest(orgId, t.userId);
+    const approval = await manager.post(`/api/orgs/${orgId}/tests/${fixture.testId}/approve`, {}).expect(200);
+    // A version without a report, as every version approved before this feature: its queued row removed.
+    await dataSource.query('DELETE FROM issued_reports WHERE test_id = $1', [fixture.testId]);
+    const base = `/api/orgs/${orgId}/soil-records/${approval.body.soilRecord.recordId}/versions/1/report`;
+    const missing = await manager.get(base).expect(404);
+    expect(missing.body.message).toMatch(/A lab manager can print it/);
+    boss = createBoss();
+    boss.on('error', () => undefined);
+    await boss.start();
+    try {
+      await registerJobs(boss, [generateReportJob()]);
+      expect((await manager.post(`${base}/retry`).expect(202)).body.state).toBe('queued');
+      expect((await settledReport(manager, base)).state).toBe('ready');
+    } finally {
+      await boss.stop({ graceful: true, wait: true });
+      await stopJobQueue();
+    }
   });
 });
 
