@@ -70,6 +70,7 @@ export const apiPaths = {
   soilRecords: (orgId: string) => `/api/orgs/${orgId}/soil-records`,
   soilRecord: (orgId: string, recordId: string) => `/api/orgs/${orgId}/soil-records/${recordId}`,
   soilRecordVersion: (orgId: string, recordId: string, version: number) => `/api/orgs/${orgId}/soil-records/${recordId}/versions/${version}`,
+  reportSettings: (orgId: string) => `/api/orgs/${orgId}/report-settings`,
   versionReport: (orgId: string, recordId: string, version: number) => `/api/orgs/${orgId}/soil-records/${recordId}/versions/${version}/report`,
   versionReportPdf: (orgId: string, recordId: string, version: number) => `/api/orgs/${orgId}/soil-records/${recordId}/versions/${version}/report/pdf`,
   versionReportRetry: (orgId: string, recordId: string, version: number) => `/api/orgs/${orgId}/soil-records/${recordId}/versions/${version}/report/retry`,
