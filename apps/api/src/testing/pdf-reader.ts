@@ -33,3 +33,12 @@ export function pdfInfo(bytes: Buffer): Promise<Record<string, string>> {
     }));
   });
 }
+
+/** How many raster images the PDF holds (pdfimages -list): zero when every plot is vector. */
+export function pdfImageCount(bytes: Buffer): Promise<number> {
+  return withPdfFile(bytes, async (path) => {
+    const { stdout } = await run('pdfimages', ['-list', path]);
+    // Two header lines, then one line per image.
+    return stdout.trim().split('\n').slice(2).filter((line) => line.trim() !== '').length;
+  });
+}
