@@ -3,4 +3,4 @@
  * standard the reduction follows, as laboratories usually state it.
  */
 export const DEFAULT_TEST_METHOD_STATEMENT =
-  'One-dimensional consolidation by incremental loading, following ASTM D2435/D2435M (Test Method A: each increment held for at least 24 hours or to the end of primary consolidation).';
+  'One-dimensional consolidation by incremental loading, following ASTM D2435/D2435M.';
