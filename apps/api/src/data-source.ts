@@ -26,6 +26,7 @@ import { Init1796179339734 } from './migrations/1796179339734-init.js';
 import { LabRecords1796180920952 } from './migrations/1796180920952-lab-records.js';
 import { ReadingsImport1796181181337 } from './migrations/1796181181337-readings-import.js';
 import { ReadingsOneForeignKey1796181664432 } from './migrations/1796181664432-readings-one-foreign-key.js';
+import { MembershipRoles1796313749156 } from './migrations/1796313749156-membership-roles.js';
 import { IssuedReports1796313882857 } from './migrations/1796313882857-issued-reports.js';
 
 /**
@@ -40,7 +41,8 @@ export const dataSource = new DataSource({
     ProjectEntity, ProjectMemberEntity, BoreholeEntity, SampleEntity, ConsolidationTestEntity, AnalysisEntity, ReviewEventEntity,
     SoilRecordEntity, SoilRecordVersionEntity, SoilRecordSupersessionEntity, JobRunEntity,
     UploadEntity, ReadingEntity, ImportProfileEntity, IssuedReportEntity],
-  migrations: [Init1796179339734, LabRecords1796180920952, ReadingsImport1796181181337, ReadingsOneForeignKey1796181664432, IssuedReports1796313882857],
+  migrations: [Init1796179339734, LabRecords1796180920952, ReadingsImport1796181181337, ReadingsOneForeignKey1796181664432, MembershipRoles1796313749156,
+    IssuedReports1796313882857],
   // gen_random_uuid() is built into PostgreSQL 13+, so no extension is needed on a managed server.
   uuidExtension: 'pgcrypto',
   synchronize: false,

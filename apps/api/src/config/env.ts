@@ -34,6 +34,11 @@ const EnvSchema = z.object({
   IMPORT_MAX_ROWS: z.coerce.number().int().positive().default(500_000),
   /** The Chromium that prints reports to PDF (Debian's package, installed by infra/lib.sh). */
   CHROMIUM_PATH: z.string().default('/usr/bin/chromium'),
+  /**
+   * Seconds a file's parse may take, plus 4 s per MB (a tenth and 0.5 s per MB for a
+   * preview, which reads only the first rows); a parse past it is stopped as unreadable.
+   */
+  IMPORT_PARSE_SECONDS: z.coerce.number().positive().default(20),
   /** Folder of the built web app served in production. */
   WEB_DIST: z.string().optional(),
 });

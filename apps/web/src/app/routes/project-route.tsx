@@ -50,7 +50,7 @@ function ProjectPage() {
         }
         actions={<DownloadLink href={apiPaths.projectParametersXlsx(orgId, projectId)}>Approved parameters (XLSX)</DownloadLink>}
       />
-      {labPermissions(membership.role).editProjects ? (
+      {labPermissions(membership.roles).editProjects ? (
         <div className="mb-6">
           <DisclosureForm openLabel="Edit project and designers">
             {(close) => <ProjectEditForm orgId={orgId} project={p} onDone={close} />}
@@ -65,7 +65,7 @@ function ProjectPage() {
         ) : tests.error ? (
           <ErrorMessage error={tests.error} title="The tests could not be loaded" onRetry={() => void tests.refetch()} />
         ) : (
-          <BoreholesSection orgId={orgId} projectId={projectId} boreholes={boreholes.data} tests={tests.data} canEdit={labPermissions(membership.role).benchWork} />
+          <BoreholesSection orgId={orgId} projectId={projectId} boreholes={boreholes.data} tests={tests.data} canEdit={labPermissions(membership.roles).benchWork} />
         )}
       </Panel>
     </>

@@ -68,7 +68,7 @@ function SoilRecordPage() {
           ) : null}
           {shown ? (
             <Panel title="Report and data" description="The issued test report of this version, the same file on every download, and its reduced data.">
-              <VersionDownloads key={shown.version} orgId={orgId} recordId={r.id} version={shown.version} canRetry={labPermissions(membership.role).retryReports} />
+              <VersionDownloads key={shown.version} orgId={orgId} recordId={r.id} version={shown.version} canRetry={labPermissions(membership.roles).retryReports} />
             </Panel>
           ) : null}
         </div>
