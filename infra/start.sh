@@ -18,6 +18,8 @@ trap 'log "Stopping"; stop_started' EXIT
 trap 'exit 130' INT TERM
 
 ensure_node_deps
+# The job worker prints the issued reports to PDF with Debian's Chromium (CHROMIUM_PATH to use another).
+[ -n "${CHROMIUM_PATH:-}" ] || apt_install chromium fonts-dejavu-core
 
 if [ -z "${DATABASE_URL:-}" ]; then
   # Durable settings here: this cluster holds the data a person works with.

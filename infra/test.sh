@@ -19,7 +19,9 @@ trap stop_started EXIT
 trap 'exit 130' INT TERM
 
 ensure_node_deps
-apt_install chromium
+# chromium: the browser tests, and the worker printing reports to PDF (fonts-dejavu-core for its
+# page margins and fallback glyphs); poppler-utils: the report tests read the PDFs back (pdftotext, pdfinfo).
+apt_install chromium fonts-dejavu-core poppler-utils
 
 # Test data is thrown away on every run, so every run starts clean.
 rm -rf "$DATA" "$(pg_root test)"
@@ -70,7 +72,8 @@ e2e() {
   pnpm --filter @porestack/api run --silent seed >/dev/null || return 1
   start_bg "$REPO/.run/e2e-worker.pid" "$REPO/.run/e2e-worker.log" pnpm --filter @porestack/api run --silent worker
   start_bg "$REPO/.run/e2e-api.pid" "$REPO/.run/e2e-api.log" pnpm --filter @porestack/api run --silent start
-  wait_port "$E2E_PORT" "The portal (e2e)"
+  # The API compiles its TypeScript as it starts (tsx): on a busy machine that takes well over 10 s.
+  wait_port "$E2E_PORT" "The portal (e2e)" 90
   E2E_BASE_URL="http://127.0.0.1:$E2E_PORT" pnpm --filter @porestack/web run e2e
 }
 suite "browser end-to-end tests" e2e

@@ -20,6 +20,9 @@ import { consolidationTestsRouter } from './modules/consolidation-tests/consolid
 import { jobRunsRouter } from './modules/job-runs/job-runs.router.js';
 import { projectsRouter } from './modules/projects/projects.router.js';
 import { reviewsRouter } from './modules/reviews/reviews.router.js';
+import { exportsRouter } from './modules/exports/exports.router.js';
+import { reportSettingsRouter } from './modules/organisations/report-settings.router.js';
+import { reportsRouter } from './modules/reports/reports.router.js';
 import { soilRecordsRouter } from './modules/soil-records/soil-records.router.js';
 import { importProfilesRouter } from './modules/import-profiles/import-profiles.router.js';
 import { readingsRouter } from './modules/readings/readings.router.js';
@@ -75,11 +78,14 @@ export function createApp(options: AppOptions = {}): Express {
   app.use(invitationsRouter());
   app.use(orgInvitationsRouter());
   app.use(membersRouter());
+  app.use(reportSettingsRouter());
   app.use(auditRouter());
   app.use(projectsRouter());
   app.use(consolidationTestsRouter());
   app.use(reviewsRouter());
   app.use(soilRecordsRouter());
+  app.use(reportsRouter());
+  app.use(exportsRouter());
   app.use(jobRunsRouter());
   app.use(uploadsRouter());
   app.use(importProfilesRouter());

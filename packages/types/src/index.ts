@@ -178,3 +178,5 @@ export type {
   ReadingsPage,
   ReadingsPageQuery,
 } from './lab/import.js';
+export { REPORT_KINDS, ReportKindSchema, REPORT_STATES, ReportStateSchema, IssuedReportSchema, ReportSettingsSchema, ReportSettingsViewSchema } from './lab/reports.js';
+export type { ReportKind, ReportState, IssuedReport, ReportSettings, ReportSettingsView } from './lab/reports.js';

@@ -21,6 +21,7 @@ const STATUS_BY_CODE: Record<ErrorCode, number> = {
   unsupported_file: 415,
   invalid_file: 422,
   profile_name_taken: 409,
+  report_not_ready: 409,
   rate_limited: 429,
   token_invalid: 400,
   token_used: 410,

@@ -34,3 +34,11 @@ export async function ensureBucket(): Promise<void> {
   const bucket = bucketName();
   if (!(await s3.bucketExists(bucket))) await s3.makeBucket(bucket, env().S3_REGION);
 }
+
+/** The whole object as bytes (uploads and reports are small enough to hold in memory). */
+export async function objectBytes(key: string): Promise<Buffer> {
+  const stream = await storage().getObject(bucketName(), key);
+  const chunks: Buffer[] = [];
+  for await (const chunk of stream) chunks.push(chunk as Buffer);
+  return Buffer.concat(chunks);
+}

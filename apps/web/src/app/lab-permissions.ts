@@ -13,6 +13,8 @@ export const labPermissions = (roles: readonly Role[]) => ({
   importReadings: holdsAnyRole(roles, ROLE_ACCESS.importers),
   /** Approve or ask for changes (never a test one ran or submitted oneself: the server refuses that). */
   review: holdsAnyRole(roles, ROLE_ACCESS.reviewers),
+  /** Ask again for an issued report whose printing failed. */
+  retryReports: holdsAnyRole(roles, ROLE_ACCESS.reviewers),
 });
 
 /** Who may open a test page: the lab, and designers following a soil record back to its test. */

@@ -73,4 +73,11 @@ export const apiPaths = {
   soilRecords: (orgId: string) => `/api/orgs/${orgId}/soil-records`,
   soilRecord: (orgId: string, recordId: string) => `/api/orgs/${orgId}/soil-records/${recordId}`,
   soilRecordVersion: (orgId: string, recordId: string, version: number) => `/api/orgs/${orgId}/soil-records/${recordId}/versions/${version}`,
+  reportSettings: (orgId: string) => `/api/orgs/${orgId}/report-settings`,
+  versionReport: (orgId: string, recordId: string, version: number) => `/api/orgs/${orgId}/soil-records/${recordId}/versions/${version}/report`,
+  versionReportPdf: (orgId: string, recordId: string, version: number) => `/api/orgs/${orgId}/soil-records/${recordId}/versions/${version}/report/pdf`,
+  versionReportRetry: (orgId: string, recordId: string, version: number) => `/api/orgs/${orgId}/soil-records/${recordId}/versions/${version}/report/retry`,
+  versionDataXlsx: (orgId: string, recordId: string, version: number) => `/api/orgs/${orgId}/soil-records/${recordId}/versions/${version}/data.xlsx`,
+  testDataXlsx: (orgId: string, testId: string) => `/api/orgs/${orgId}/tests/${testId}/data.xlsx`,
+  projectParametersXlsx: (orgId: string, projectId: string) => `/api/orgs/${orgId}/projects/${projectId}/parameters.xlsx`,
 } as const;

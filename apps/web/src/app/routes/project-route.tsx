@@ -3,13 +3,14 @@ import { ErrorMessage } from '../../components/error-message';
 import { PageHeader } from '../../components/page-header';
 import { Panel } from '../../components/panel';
 import { LoadingBlock } from '../../components/spinner';
-import { paths } from '../../config/paths';
+import { apiPaths, paths } from '../../config/paths';
 import { useBoreholes } from '../../features/projects/api/get-boreholes';
 import { useProject } from '../../features/projects/api/get-project';
 import { useProjectTests } from '../../features/projects/api/get-project-tests';
 import { BoreholesSection } from '../../features/projects/components/boreholes-section';
 import { ProjectEditForm } from '../../features/projects/components/project-edit-form';
 import { DisclosureForm } from '../../components/disclosure-form';
+import { DownloadLink } from '../../features/reports/components/download-link';
 import { labPermissions } from '../lab-permissions';
 import { rolesFor } from '../nav-config';
 import { useCurrentOrg } from '../org-context';
@@ -47,6 +48,7 @@ function ProjectPage() {
             {p.designers.length > 0 ? ` · designers: ${p.designers.map((d) => d.name).join(', ')}` : ''}
           </>
         }
+        actions={<DownloadLink href={apiPaths.projectParametersXlsx(orgId, projectId)}>Approved parameters (XLSX)</DownloadLink>}
       />
       {labPermissions(membership.roles).editProjects ? (
         <div className="mb-6">

@@ -11,6 +11,9 @@ const ACTION_WORDS: Record<string, string> = {
   'membership.created': 'Joined the organisation',
   'auth.signed_in': 'Signed in',
   'auth.signed_out': 'Signed out',
+  'organisation.report_settings_changed': 'Changed what the reports print',
+  'report.retried': 'Asked again for a report that could not be printed',
+  'report.requested': 'Asked for the report of a version approved before reports were printed',
 };
 
 /** 'invitation.created' → "Sent an invitation"; an unknown 'sample.moved_to_store' → "Sample: moved to store". */
