@@ -1,4 +1,4 @@
-import type { ConsolidationIncrementResult } from '@porestack/geo-core';
+import type { ConsolidationIncrementResult } from '@porestack/types';
 import ExcelJS from 'exceljs';
 import { cvRange, representativeSecondaryIndex } from '../analyses/key-parameters.js';
 import { REPORT_CAUTION } from '../reports/report-caution.js';

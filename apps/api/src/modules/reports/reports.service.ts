@@ -2,7 +2,7 @@ import { createHash } from 'node:crypto';
 import type { IssuedReport, ReportKind } from '@porestack/types';
 import type { EntityManager } from 'typeorm';
 import { dataSource } from '../../data-source.js';
-import { DomainError, NotFoundError } from '../../errors/domain-error.js';
+import { DomainError } from '../../errors/domain-error.js';
 import { enqueueReportGeneration } from '../../jobs/generate-report-queue.js';
 import { logger } from '../../http/logger.js';
 import { objectBytes } from '../../storage/storage.js';

@@ -1,5 +1,4 @@
-import type { ConsolidationTestResult } from '@porestack/geo-core';
-import type { Picks, Specimen } from '@porestack/types';
+import type { ConsolidationTestResult, Picks, Specimen } from '@porestack/types';
 import { dataSource } from '../../../data-source.js';
 import { DomainError, NotFoundError } from '../../../errors/domain-error.js';
 import { DEFAULT_TEST_METHOD_STATEMENT } from './test-method.js';

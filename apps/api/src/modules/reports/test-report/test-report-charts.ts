@@ -1,4 +1,5 @@
-import type { ConsolidationIncrementResult, ConsolidationTestResult, StressVoidRatioLine, TimeDeformationReading } from '@porestack/geo-core';
+import type { TimeDeformationReading } from '@porestack/geo-core';
+import type { ConsolidationIncrementResult, ConsolidationTestResult, StressVoidRatioLine } from '@porestack/types';
 import { renderChart, type ChartPoint, type ChartSeries } from '../charts/svg-chart.js';
 
 /**

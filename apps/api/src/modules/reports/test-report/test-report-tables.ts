@@ -1,4 +1,4 @@
-import type { ConsolidationTestResult } from '@porestack/geo-core';
+import type { ConsolidationTestResult } from '@porestack/types';
 import { representativeSecondaryIndex } from '../../analyses/key-parameters.js';
 import { html, type Html } from '../pdf/html.js';
 import { fixed, percent, scientific, significant, NOT_DETERMINED } from '../report-format.js';
