@@ -60,9 +60,14 @@ export async function requeueImport(data: ImportReadingsJobData): Promise<void> 
   });
 }
 
+/**
+ * Retried on our failures only (storage or database down), with a growing pause — 5 s, then
+ * 10, 20 … about eleven minutes in all — so an import that met a service being restarted goes
+ * through once it is back. The import replaces the readings in one transaction, so a retry
+ * never duplicates.
+ */
 function sendOptions(data: ImportReadingsJobData) {
-  // Retried on our failures only (storage or database down): the import replaces the readings in one transaction, so a retry never duplicates.
-  return { retryLimit: 2, retryDelay: 2, expireInSeconds: importExpirySeconds(data.sizeBytes) };
+  return { retryLimit: 7, retryDelay: 5, retryBackoff: true, expireInSeconds: importExpirySeconds(data.sizeBytes) };
 }
 
 /** Imports one worker process works at once; below the parse threads of a process (PARSE_THREADS). */
