@@ -80,8 +80,12 @@ export const IMPORT_CONCURRENCY = 3;
  */
 export const IMPORTS_PER_ORGANISATION = 2;
 
-/** A running import whose row has not moved for this long is taken to be dead (its worker stopped). */
-const STALE_RUNNING_MINUTES = 15;
+/**
+ * A running import whose row has not moved for this long is taken to be dead (its worker
+ * stopped) and does not count against its organisation's slots: longer than the slowest
+ * parse of the largest file allowed (pg-boss retries the job itself after its expiry).
+ */
+const STALE_RUNNING_MINUTES = 5;
 
 /**
  * pg-boss picks the highest priority first, then the oldest. An import is sent at minus the
@@ -96,10 +100,15 @@ export async function importPriority(manager: EntityManager, orgId: string): Pro
   return -(row?.pending ?? 0);
 }
 
-/** How long pg-boss lets an import run before it is failed and retried: the parse deadline and the write, with a margin. */
+/**
+ * How long pg-boss lets an import run before it takes its worker for dead and retries it:
+ * the parse deadline and the write (COPY of 500,000 readings takes about 3 s), with a margin.
+ * A small file's import is retried within about 40 s of its worker dying (with the 10 s
+ * maintenance of boss.ts).
+ */
 export function importExpirySeconds(sizeBytes: number): number {
   const megabytes = sizeBytes / (1024 * 1024);
-  return Math.ceil(parseDeadlineMs(sizeBytes, 'import') / 1000 + 30 + 3 * megabytes);
+  return Math.ceil(parseDeadlineMs(sizeBytes, 'import') / 1000 + 10 + 3 * megabytes);
 }
 
 /**
