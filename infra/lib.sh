@@ -43,6 +43,12 @@ build_packages() {
   (cd "$REPO" && pnpm --filter @porestack/types --filter @porestack/geo-core run build) || die "Building the shared packages failed."
 }
 
+build_api() {
+  # The portal runs compiled JavaScript with node (apps/api/dist), not the TypeScript sources.
+  log "Building the API"
+  (cd "$REPO" && pnpm --filter @porestack/api run build >/dev/null) || die "Building the API failed: run 'pnpm --filter @porestack/api run build' to see why."
+}
+
 # ── PostgreSQL ────────────────────────────────────────────────────────────────
 # pg_root <name>: where a cluster lives. PostgreSQL runs as the postgres user, which
 # must be able to traverse every parent folder; fall back to /tmp when it cannot.

@@ -66,7 +66,20 @@ export function createApp(options: AppOptions = {}): Express {
       strictTransportSecurity: isSecureOrigin(),
     }),
   );
-  app.use(pinoHttp({ logger, autoLogging: config.NODE_ENV !== 'test' }));
+  // One short line per request: method, path, status and time — no headers, no cookies.
+  app.use(
+    pinoHttp({
+      logger,
+      autoLogging: config.NODE_ENV !== 'test',
+      quietReqLogger: true,
+      serializers: {
+        req: (req: { method: string; url: string }) => ({ method: req.method, url: req.url }),
+        res: (res: { statusCode: number }) => ({ status: res.statusCode }),
+      },
+      customSuccessMessage: (req, res, responseTime) => `${req.method} ${req.url} ${res.statusCode} ${Math.round(responseTime)} ms`,
+      customErrorMessage: (req, res) => `${req.method} ${req.url} ${res.statusCode}`,
+    }),
+  );
   app.use(express.json({ limit: '1mb' }));
   app.use(cookieParser());
 

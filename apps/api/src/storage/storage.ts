@@ -24,6 +24,11 @@ export function storage(): Minio.Client {
   return client;
 }
 
+/** Drops the client, so the next call connects anew from the environment (tests that move the endpoint). */
+export function forgetStorageClient(): void {
+  client = undefined;
+}
+
 export function bucketName(): string {
   return env().S3_BUCKET;
 }
