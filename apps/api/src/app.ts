@@ -23,6 +23,9 @@ import { projectClientsRouter } from './modules/projects/project-clients.router.
 import { projectsRouter } from './modules/projects/projects.router.js';
 import { reviewsRouter } from './modules/reviews/reviews.router.js';
 import { issuedResultsRouter } from './modules/soil-records/issued-results.router.js';
+import { exportsRouter } from './modules/exports/exports.router.js';
+import { reportSettingsRouter } from './modules/organisations/report-settings.router.js';
+import { reportsRouter } from './modules/reports/reports.router.js';
 import { soilRecordsRouter } from './modules/soil-records/soil-records.router.js';
 import { importProfilesRouter } from './modules/import-profiles/import-profiles.router.js';
 import { readingsRouter } from './modules/readings/readings.router.js';
@@ -66,7 +69,20 @@ export function createApp(options: AppOptions = {}): Express {
       strictTransportSecurity: isSecureOrigin(),
     }),
   );
-  app.use(pinoHttp({ logger, autoLogging: config.NODE_ENV !== 'test' }));
+  // One short line per request: method, path, status and time — no headers, no cookies.
+  app.use(
+    pinoHttp({
+      logger,
+      autoLogging: config.NODE_ENV !== 'test',
+      quietReqLogger: true,
+      serializers: {
+        req: (req: { method: string; url: string }) => ({ method: req.method, url: req.url }),
+        res: (res: { statusCode: number }) => ({ status: res.statusCode }),
+      },
+      customSuccessMessage: (req, res, responseTime) => `${req.method} ${req.url} ${res.statusCode} ${Math.round(responseTime)} ms`,
+      customErrorMessage: (req, res) => `${req.method} ${req.url} ${res.statusCode}`,
+    }),
+  );
   app.use(express.json({ limit: '1mb' }));
   app.use(cookieParser());
 
@@ -78,6 +94,7 @@ export function createApp(options: AppOptions = {}): Express {
   app.use(invitationsRouter());
   app.use(orgInvitationsRouter());
   app.use(membersRouter());
+  app.use(reportSettingsRouter());
   app.use(auditRouter());
   app.use(homeRouter());
   app.use(projectsRouter());
@@ -86,6 +103,8 @@ export function createApp(options: AppOptions = {}): Express {
   app.use(reviewsRouter());
   app.use(soilRecordsRouter());
   app.use(issuedResultsRouter());
+  app.use(reportsRouter());
+  app.use(exportsRouter());
   app.use(jobRunsRouter());
   app.use(uploadsRouter());
   app.use(importProfilesRouter());

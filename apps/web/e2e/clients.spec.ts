@@ -1,4 +1,5 @@
 import { expect, test, type Browser, type Page } from '@playwright/test';
+import { downloadFrom } from './support/downloads';
 import { linkFromMail } from './support/mail';
 import { newPerson, signIn, type Person } from './support/people';
 
@@ -94,7 +95,13 @@ test('a lab manager shares the project; the client joins from the e-mail, reads 
   await expect(page.getByRole('region', { name: 'Parameters' })).toContainText('Preconsolidation stress, adopted');
   await expect(page.getByRole('region', { name: 'Sample quality' })).toContainText('Δe/e0 =');
   await expect(page.getByRole('region', { name: 'Approval and traceability' })).toContainText('Priya Kestrelle');
-  await expect(page.getByTestId('report-download')).toContainText('Report not issued yet');
+  // The laboratory's issued PDF of this version: the worker printed it after the demo's approvals.
+  const reportLink = page.getByRole('link', { name: 'Download the test report (PDF)' });
+  await expect(reportLink).toBeVisible({ timeout: 120_000 });
+  const report = await downloadFrom(page, reportLink);
+  expect(report.name).toBe('oedometer-report-PLM-OED-01-v2.pdf');
+  expect(report.bytes.subarray(0, 5).toString('latin1')).toBe('%PDF-');
+  const reportPath = `/api/orgs/${orgId}/soil-records/${/soil-records\/([^/]+)/.exec(page.url())?.[1] ?? ''}/versions/2/report/pdf`;
   const curves = page.getByRole('region', { name: 'Curves' });
   await curves.scrollIntoViewIfNeeded();
   // plotly (4.6 MB) is fetched and parsed on first use: slow on a busy machine.
@@ -102,7 +109,7 @@ test('a lab manager shares the project; the client joins from the e-mail, reads 
   await expect(curves.getByTestId('plotly-chart')).toHaveCount(2);
   // The e–log σ′ plot's legend names the adopted σ′p (this version's was picked on review).
   await expect(curves.getByText(/σ′p (picked|adopted) \d+ kPa/)).toBeVisible();
-  await expect(page.getByRole('button', { name: /approve|submit|save|upload/i })).toHaveCount(0);
+  await expect(page.getByRole('button', { name: /approve|submit|save|upload|print|retry/i })).toHaveCount(0);
 
   // A client of another project: sees that project only, and none of the demo project's results.
   await manager.goto(`/orgs/${orgId}/projects`);
@@ -127,4 +134,7 @@ test('a lab manager shares the project; the client joins from the e-mail, reads 
   await expect(other.getByRole('alert')).toContainText('could not be loaded');
   await other.goto(`/orgs/${orgId}/soil-records`);
   await expect(other.getByText('PLM-OED-01')).toHaveCount(0);
+  // Nor its report, asked for directly with the other client's session.
+  expect((await other.request.get(reportPath)).status()).toBe(404);
+  expect((await page.request.get(reportPath)).status()).toBe(200);
 });

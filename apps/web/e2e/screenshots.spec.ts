@@ -151,9 +151,13 @@ test('screenshots of the lab pages', async ({ browser }) => {
   await page.waitForLoadState('networkidle');
   await shot(page, 'lab-soil-records');
   const record = page.getByRole('table').getByRole('link').first();
+  let recordUrl = '';
   if (await record.count()) {
     await record.click();
     await expect(page.getByRole('navigation', { name: 'Versions' })).toBeVisible();
+    // The seeded approvals' reports are printed by the worker after the seed.
+    await expect(page.getByRole('link', { name: 'Download the test report (PDF)' })).toBeVisible({ timeout: 60_000 });
+    recordUrl = page.url();
     await shot(page, 'lab-soil-record');
   }
 
@@ -161,6 +165,11 @@ test('screenshots of the lab pages', async ({ browser }) => {
   await page.goto(`/orgs/${orgId}/tests`);
   await expect(page.getByRole('table', { name: 'Consolidation tests' })).toBeVisible();
   await shot(page, 'lab-tests-narrow');
+  if (recordUrl) {
+    await page.goto(recordUrl);
+    await expect(page.getByRole('link', { name: 'Download the test report (PDF)' })).toBeVisible();
+    await shot(page, 'lab-soil-record-narrow');
+  }
   await context.close();
 });
 

@@ -206,3 +206,5 @@ export {
   HomeOverviewSchema,
 } from './home.js';
 export type { WaitingReason, HomeTest, WaitingTest, HomeApproval, StuckTest, HomeOverview } from './home.js';
+export { REPORT_KINDS, ReportKindSchema, REPORT_STATES, ReportStateSchema, IssuedReportSchema, ReportSettingsSchema, ReportSettingsViewSchema } from './lab/reports.js';
+export type { ReportKind, ReportState, IssuedReport, ReportSettings, ReportSettingsView } from './lab/reports.js';

@@ -15,6 +15,8 @@ export const labPermissions = (roles: readonly Role[]) => ({
   review: holdsAnyRole(roles, ROLE_ACCESS.reviewers),
   /** Follow tests through the lab's own pages in any status (designers and clients read approved versions). */
   readsLabWork: holdsAnyRole(roles, LAB_STAFF_ROLES),
+  /** Ask again for an issued report whose printing failed. */
+  retryReports: holdsAnyRole(roles, ROLE_ACCESS.reviewers),
 });
 
 /** Who may open a test page: the lab, and designers following a soil record back to its test. */

@@ -84,4 +84,11 @@ export const apiPaths = {
   projectClient: (orgId: string, projectId: string, userId: string) => `/api/orgs/${orgId}/projects/${projectId}/clients/${userId}`,
   projectClientInvitation: (orgId: string, projectId: string, invitationId: string) => `/api/orgs/${orgId}/projects/${projectId}/client-invitations/${invitationId}`,
   home: (orgId: string) => `/api/orgs/${orgId}/home`,
+  reportSettings: (orgId: string) => `/api/orgs/${orgId}/report-settings`,
+  versionReport: (orgId: string, recordId: string, version: number) => `/api/orgs/${orgId}/soil-records/${recordId}/versions/${version}/report`,
+  versionReportPdf: (orgId: string, recordId: string, version: number) => `/api/orgs/${orgId}/soil-records/${recordId}/versions/${version}/report/pdf`,
+  versionReportRetry: (orgId: string, recordId: string, version: number) => `/api/orgs/${orgId}/soil-records/${recordId}/versions/${version}/report/retry`,
+  versionDataXlsx: (orgId: string, recordId: string, version: number) => `/api/orgs/${orgId}/soil-records/${recordId}/versions/${version}/data.xlsx`,
+  testDataXlsx: (orgId: string, testId: string) => `/api/orgs/${orgId}/tests/${testId}/data.xlsx`,
+  projectParametersXlsx: (orgId: string, projectId: string) => `/api/orgs/${orgId}/projects/${projectId}/parameters.xlsx`,
 } as const;

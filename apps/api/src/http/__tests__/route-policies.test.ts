@@ -7,6 +7,7 @@ import { openBrowser, signedInBrowser, signUpAdmin, createMember, uniqueEmail, t
 import { listRoutes, type Access } from '../routes.js';
 import { jobRuns } from '../../modules/job-runs/job-runs.service.js';
 import { approveTest } from '../../modules/reviews/reviews.service.js';
+import { generateReport } from '../../jobs/generate-report.job.js';
 import { analysedTest, draftTest, placeOnProject, submittedTest, type LabFixture } from '../../testing/lab-fixtures.js';
 import { canonicalCsvTemplate, LOGGER_MAPPING } from '../../modules/readings-import/demo-files.js';
 
@@ -36,6 +37,11 @@ interface Context {
     recordId: string;
     /** The approved test: designers open a test only as approved. */
     approvedTestId: string;
+    approvedProjectId: string;
+    /** Prints the approved record's report once (no worker runs in this file). */
+    issueReport: () => Promise<void>;
+    /** A newly approved record whose report generation failed (the printer could not start). */
+    newFailedReportRecordId: () => Promise<string>;
     newAnalysedTestId: () => Promise<string>;
     newSubmittedTestId: () => Promise<string>;
   };
@@ -93,6 +99,11 @@ const SPEC: Record<string, { access: Access; sample: (ctx: Context) => Promise<S
   },
   'GET /api/orgs/:orgId/home': { access: ROLES, sample: (c) => ({ path: `/api/orgs/${c.orgId}/home` }) },
   'GET /api/orgs/:orgId/audit': { access: ADMIN, sample: (c) => ({ path: `/api/orgs/${c.orgId}/audit` }) },
+  'GET /api/orgs/:orgId/report-settings': { access: ['admin', 'lab_manager'], sample: (c) => ({ path: `/api/orgs/${c.orgId}/report-settings` }) },
+  'PUT /api/orgs/:orgId/report-settings': {
+    access: ['admin'],
+    sample: (c) => ({ path: `/api/orgs/${c.orgId}/report-settings`, body: { address: '1 Invented Road, Nowhere', testMethodStatement: null } }),
+  },
   'GET /api/orgs/:orgId/designers': { access: PROJECT_EDITORS, sample: (c) => ({ path: `/api/orgs/${c.orgId}/designers` }) },
   'GET /api/orgs/:orgId/projects': { access: PROJECT_READERS, sample: (c) => ({ path: `/api/orgs/${c.orgId}/projects` }) },
   'POST /api/orgs/:orgId/projects': {
@@ -215,6 +226,34 @@ const SPEC: Record<string, { access: Access; sample: (ctx: Context) => Promise<S
   'GET /api/orgs/:orgId/tests/:testId/readings': { access: LAB_READERS, sample: (c) => ({ path: `/api/orgs/${c.orgId}/tests/${c.lab.approvedTestId}/readings` }) },
   'GET /api/orgs/:orgId/templates/readings.csv': { access: UPLOAD_READERS, sample: (c) => ({ path: `/api/orgs/${c.orgId}/templates/readings.csv` }) },
   'GET /api/orgs/:orgId/templates/readings.xlsx': { access: UPLOAD_READERS, sample: (c) => ({ path: `/api/orgs/${c.orgId}/templates/readings.xlsx` }) },
+  // Issued reports and exports: everyone who reads soil records (within their project scope), retry by lab managers only.
+  'GET /api/orgs/:orgId/soil-records/:recordId/versions/:version/report': {
+    access: ['admin', 'technician', 'lab_manager', 'designer', 'client'],
+    sample: (c) => ({ path: `/api/orgs/${c.orgId}/soil-records/${c.lab.recordId}/versions/1/report` }),
+  },
+  'GET /api/orgs/:orgId/soil-records/:recordId/versions/:version/report/pdf': {
+    access: ['admin', 'technician', 'lab_manager', 'designer', 'client'],
+    sample: async (c) => {
+      await c.lab.issueReport();
+      return { path: `/api/orgs/${c.orgId}/soil-records/${c.lab.recordId}/versions/1/report/pdf` };
+    },
+  },
+  'POST /api/orgs/:orgId/soil-records/:recordId/versions/:version/report/retry': {
+    access: ['lab_manager'],
+    sample: async (c) => ({ path: `/api/orgs/${c.orgId}/soil-records/${await c.lab.newFailedReportRecordId()}/versions/1/report/retry` }),
+  },
+  'GET /api/orgs/:orgId/projects/:projectId/parameters.xlsx': {
+    access: ['admin', 'technician', 'lab_manager', 'designer', 'client'],
+    sample: (c) => ({ path: `/api/orgs/${c.orgId}/projects/${c.lab.approvedProjectId}/parameters.xlsx` }),
+  },
+  'GET /api/orgs/:orgId/soil-records/:recordId/versions/:version/data.xlsx': {
+    access: ['admin', 'technician', 'lab_manager', 'designer', 'client'],
+    sample: (c) => ({ path: `/api/orgs/${c.orgId}/soil-records/${c.lab.recordId}/versions/1/data.xlsx` }),
+  },
+  'GET /api/orgs/:orgId/tests/:testId/data.xlsx': {
+    access: ['admin', 'technician', 'lab_manager', 'designer'],
+    sample: (c) => ({ path: `/api/orgs/${c.orgId}/tests/${c.lab.approvedTestId}/data.xlsx` }),
+  },
 };
 
 /** The upload behind a fixture test's readings. */
@@ -283,6 +322,12 @@ async function labContext(orgId: string, emails: Record<Persona, string>): Promi
   const approved = await shared(await submittedTest(orgId, technicianId, onProject));
   const { recordId } = await approveTest(orgId, approved.testId, { id: managerId, name: 'Policy manager' }, null);
   const designerJob = await jobRuns.create({ organisationId: orgId, kind: 'policy-check', createdById: designerId });
+  const generate = async (testId: string, options: { executablePath?: string } = {}) => {
+    const [report] = (await dataSource.query('SELECT id, job_run_id FROM issued_reports WHERE organisation_id = $1 AND test_id = $2', [orgId, testId])) as Array<{ id: string; job_run_id: string }>;
+    if (!report) throw new Error(`no report queued for test ${testId}`);
+    await generateReport({ orgId, reportId: report.id, jobRunId: report.job_run_id }, options);
+  };
+  let issued: Promise<void> | undefined;
   return {
     technicianId,
     draft,
@@ -290,6 +335,14 @@ async function labContext(orgId: string, emails: Record<Persona, string>): Promi
     designerJobId: designerJob.id,
     recordId,
     approvedTestId: approved.testId,
+    approvedProjectId: approved.projectId,
+    issueReport: () => (issued ??= generate(approved.testId)),
+    newFailedReportRecordId: async () => {
+      const { testId } = await submittedTest(orgId, technicianId, onProject);
+      const outcome = await approveTest(orgId, testId, { id: managerId, name: 'Policy manager' }, null);
+      await generate(testId, { executablePath: '/nonexistent/chromium' });
+      return outcome.recordId;
+    },
     newAnalysedTestId: async () => (await analysedTest(orgId, technicianId, onProject)).testId,
     newSubmittedTestId: async () => (await submittedTest(orgId, technicianId, onProject)).testId,
   };

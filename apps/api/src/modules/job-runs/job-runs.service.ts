@@ -1,5 +1,5 @@
 import type { JobRun, JobState } from '@porestack/types';
-import type { EntityManager } from 'typeorm';
+import { In, type EntityManager } from 'typeorm';
 import type { QueryDeepPartialEntity } from 'typeorm/query-builder/QueryPartialEntity.js';
 import { dataSource } from '../../data-source.js';
 import { NotFoundError } from '../../errors/domain-error.js';
@@ -61,7 +61,9 @@ export const jobRuns = {
     // jsonb: TypeORM's deep-partial type does not see that a record is one value.
     if (change.result !== undefined) patch.result = change.result as QueryDeepPartialEntity<Record<string, unknown>>;
     if (change.bossJobId !== undefined) patch.bossJobId = change.bossJobId;
-    await manager.getRepository(JobRunEntity).update({ id }, patch);
+    // Progress alone never touches a finished job: a late progress write must not overwrite its outcome.
+    const where = change.state === undefined ? { id, state: In(['queued', 'running'] satisfies JobState[]) } : { id };
+    await manager.getRepository(JobRunEntity).update(where, patch);
   },
 
   /** A job as the viewer may follow it (project-scope.ts: lab staff every job, anyone else their own); 404 otherwise. */

@@ -11,6 +11,7 @@ import { contributionsThisRound } from '../consolidation-tests/test-contribution
 import type { Actor } from '../consolidation-tests/consolidation-tests.service.js';
 import { lockTest, moveTest } from '../consolidation-tests/test-transition.js';
 import { assertTestOpenable, type Viewer } from '../projects/project-scope.js';
+import { queueReport } from '../reports/reports.service.js';
 import { createVersion } from '../soil-records/soil-records.service.js';
 import { notifyApproved, notifyChangesRequested, notifySubmitted, testContext } from './lab-notifications.js';
 import { ReviewEventEntity } from './review-event.entity.js';
@@ -66,7 +67,10 @@ export async function approveTest(orgId: string, testId: string, actor: Actor & 
       'SELECT b.project_id FROM samples s JOIN boreholes b ON b.id = s.borehole_id WHERE s.id = $1',
       [test.sampleId],
     )) as Array<{ project_id: string }>;
-    return createVersion(manager, test, analysis, projectId, actor.id);
+    const created = await createVersion(manager, test, analysis, projectId, actor.id);
+    // The test report is printed once, by a job queued in this transaction.
+    await queueReport(manager, { orgId, kind: 'test-report', subjectId: created.version.id, testId, requestedById: actor.id });
+    return created;
   });
   await notifyApproved(await testContext(orgId, testId), actor.name, comment, outcome.record.id, outcome.version, outcome.supersededVersion);
   return { recordId: outcome.record.id, version: outcome.version.version };

@@ -13,9 +13,10 @@ import { ParametersTable, WarningsList } from '../../features/analysis/component
 import { useIssuedTest } from '../../features/results/api/get-issued-test';
 import { IssuedProvenance } from '../../features/results/components/issued-provenance';
 import { depthRange } from '../../features/results/components/parameter-format';
-import { ReportDownload } from '../../features/results/components/report-download';
+import { VersionDownloads } from '../../features/reports/components/version-downloads';
 import { sampleQualityInWords } from '../../features/results/components/sample-quality-words';
 import { SpecimenTable } from '../../features/results/components/specimen-table';
+import { labPermissions } from '../lab-permissions';
 import { useCurrentOrg } from '../org-context';
 import { RoleGate } from '../role-gate';
 
@@ -29,7 +30,7 @@ export function IssuedTestRoute() {
 
 /** One approved version of a test as issued: read-only, for everyone who may read its project. */
 function IssuedTestPage() {
-  const { orgId } = useCurrentOrg();
+  const { orgId, membership } = useCurrentOrg();
   const { recordId = '', version = '' } = useParams();
   const summary = useIssuedTest(orgId, recordId, Number(version));
   if (summary.isPending) return <LoadingBlock label="Loading the test summary…" />;
@@ -64,8 +65,8 @@ function IssuedTestPage() {
           </Alert>
         )}
         <EngineeringCaution />
-        <Panel title="Report">
-          <ReportDownload version={s.version.version} />
+        <Panel title="Report and data" description="The laboratory’s issued test report of this version — the same file on every download — and its reduced data.">
+          <VersionDownloads orgId={orgId} recordId={s.recordId} version={s.version.version} canRetry={labPermissions(membership.roles).retryReports} />
         </Panel>
         <div className="grid grid-cols-1 items-start gap-6 lg:grid-cols-2">
           <Panel title="Sample and specimen" description={s.sample.description || undefined}>

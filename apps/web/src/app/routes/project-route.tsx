@@ -5,7 +5,7 @@ import { ErrorMessage } from '../../components/error-message';
 import { PageHeader } from '../../components/page-header';
 import { Panel } from '../../components/panel';
 import { LoadingBlock } from '../../components/spinner';
-import { paths } from '../../config/paths';
+import { apiPaths, paths } from '../../config/paths';
 import { useBoreholes } from '../../features/projects/api/get-boreholes';
 import { useProject } from '../../features/projects/api/get-project';
 import { useProjectTests } from '../../features/projects/api/get-project-tests';
@@ -16,6 +16,7 @@ import { useProjectResults } from '../../features/results/api/get-project-result
 import { BoreholesAndSamples } from '../../features/results/components/boreholes-and-samples';
 import { ResultsTable } from '../../features/results/components/results-table';
 import { PARAMETER_MEANINGS, resultsInWords } from '../../features/results/components/results-in-words';
+import { DownloadLink } from '../../features/reports/components/download-link';
 import { labPermissions } from '../lab-permissions';
 import { rolesFor } from '../nav-config';
 import { useCurrentOrg } from '../org-context';
@@ -74,7 +75,11 @@ function ClientProjectPage() {
   return (
     <>
       <BackToProjects orgId={orgId} />
-      <PageHeader title={project.name} description={<>{project.reference} · for {project.clientName}{project.siteName ? ` · ${project.siteName}` : ''}</>} />
+      <PageHeader
+        title={project.name}
+        description={<>{project.reference} · for {project.clientName}{project.siteName ? ` · ${project.siteName}` : ''}</>}
+        actions={<DownloadLink href={apiPaths.projectParametersXlsx(orgId, project.id)}>Approved parameters (XLSX)</DownloadLink>}
+      />
       <div className="space-y-6">
         <Panel title="In short">
           <div className="space-y-2 text-sm text-slate-800">
@@ -127,6 +132,7 @@ function LabProjectPage() {
             {p.designers.length > 0 ? ` · designers: ${p.designers.map((d) => d.name).join(', ')}` : ''}
           </>
         }
+        actions={<DownloadLink href={apiPaths.projectParametersXlsx(orgId, projectId)}>Approved parameters (XLSX)</DownloadLink>}
       />
       {may.editProjects ? (
         <div className="mb-6">

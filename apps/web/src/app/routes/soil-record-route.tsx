@@ -8,6 +8,7 @@ import { paths } from '../../config/paths';
 import { formatDate } from '../../lib/format';
 import { useSoilRecord } from '../../features/soil-records/api/get-soil-record';
 import { VersionView } from '../../features/soil-records/components/version-view';
+import { VersionDownloads } from '../../features/reports/components/version-downloads';
 import { labPermissions } from '../lab-permissions';
 import { rolesFor } from '../nav-config';
 import { useCurrentOrg } from '../org-context';
@@ -63,6 +64,11 @@ function SoilRecordPage() {
           {shown ? (
             <Panel title={`Version ${shown.version}`}>
               <VersionView orgId={orgId} version={shown} isCurrent={shown.supersededAt === null} labTestLink={labPermissions(membership.roles).readsLabWork} />
+            </Panel>
+          ) : null}
+          {shown ? (
+            <Panel title="Report and data" description="The issued test report of this version, the same file on every download, and its reduced data.">
+              <VersionDownloads key={shown.version} orgId={orgId} recordId={r.id} version={shown.version} canRetry={labPermissions(membership.roles).retryReports} />
             </Panel>
           ) : null}
         </div>

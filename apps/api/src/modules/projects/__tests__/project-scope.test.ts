@@ -142,6 +142,22 @@ describe('a client of a project', () => {
     expect(JSON.stringify(res.body)).not.toContain(CHANGE_REQUEST);
   });
 
+  it('when the client asks for reports and exports, then their project’s answer and another project’s is 404', async () => {
+    await w.client.get(api(`/projects/${w.p1.projectId}/parameters.xlsx`)).expect(200);
+    await w.client.get(api(`/soil-records/${w.p1.recordId}/versions/1/data.xlsx`)).expect(200);
+    for (const path of [
+      `/projects/${w.p2.projectId}/parameters.xlsx`,
+      `/soil-records/${w.p2.recordId}/versions/1/data.xlsx`,
+      `/soil-records/${w.p2.recordId}/versions/1/report`,
+      `/soil-records/${w.p2.recordId}/versions/1/report/pdf`,
+      `/soil-records/${w.other.recordId}/versions/1/report/pdf`,
+    ]) {
+      const res = await w.client.get(api(path));
+      expect({ path, status: res.status }).toEqual({ path, status: 404 });
+    }
+    await w.client.get(api(`/tests/${w.p1.testId}/data.xlsx`)).expect(403);
+  });
+
   it('when the client asks for the lab’s own pages of a test on their project, then 403: clients read approved versions only', async () => {
     const jobId = (await jobRuns.latestFor(w.orgId, w.p1.testId, 'analyse-test'))?.id ?? w.p1.testId;
     for (const path of [
@@ -205,8 +221,9 @@ describe('a designer of a project', () => {
   });
 
   it('when the designer opens a draft, a submitted or a returned test of their own project, then 404 like a missing test', async () => {
+    await w.designer.get(api(`/tests/${w.p1.testId}/data.xlsx`)).expect(200);
     for (const fixture of [w.p1Draft, w.p1Submitted, w.p1Returned]) {
-      for (const part of ['', '/analysis', '/readings', '/reviews']) {
+      for (const part of ['', '/analysis', '/readings', '/reviews', '/data.xlsx']) {
         const res = await w.designer.get(api(`/tests/${fixture.testId}${part}`));
         expect({ part, status: res.status }).toEqual({ part, status: 404 });
       }

@@ -68,6 +68,7 @@ function objectPhrase(entry: AuditEntry): string {
     borehole: 'borehole',
     invitation: 'the invitation of',
     upload: 'readings file',
+    issued_report: 'the test report of',
     user: '',
     organisation: 'organisation',
   };
@@ -104,7 +105,21 @@ const SENTENCES: Record<string, Sentence> = {
   'test.changes_requested': (e, o) => `Sent ${o} back for changes${text(e.details['comment']) ? `: “${String(e.details['comment'])}”` : ''}`,
   'soil_record.version_created': (e, o) => `Issued version ${describeValue(e.details['version'])} of ${o}${e.details['supersedes'] ? `, replacing version ${describeValue(e.details['supersedes'])}` : ''}`,
   'upload.stored': (_e, o) => `Uploaded ${o}`,
+  'organisation.report_settings_changed': (e) => `Changed what the reports print: ${describeSettings(e.details['from'], e.details['to'])}`,
+  'report.requested': (_e, o) => `Asked for ${o}, approved before reports were printed`,
+  'report.retried': (e, o) => `Asked again for ${o}${text(e.details['previousFailure']) ? `, after “${String(e.details['previousFailure'])}”` : ''}`,
 };
+
+/** The report settings that changed, old → new: "address: — → 1 Invented Road". */
+function describeSettings(from: unknown, to: unknown): string {
+  const before = (typeof from === 'object' && from !== null ? from : {}) as Record<string, unknown>;
+  const after = (typeof to === 'object' && to !== null ? to : {}) as Record<string, unknown>;
+  const names: Record<string, string> = { address: 'address', testMethodStatement: 'test method statement' };
+  const parts = Object.keys(names)
+    .filter((key) => describeValue(before[key]) !== describeValue(after[key]))
+    .map((key) => `${names[key]}: ${describeValue(before[key])} → ${describeValue(after[key])}`);
+  return parts.length === 0 ? 'nothing changed' : parts.join('; ');
+}
 
 /** An entry as one plain sentence: who did what to which object, and how it changed. */
 export function describeEntry(entry: AuditEntry): string {
