@@ -23,6 +23,8 @@ const OBJECT_LABEL_SQL = `CASE entry.object_type
   WHEN 'sample' THEN (SELECT b.name || ' / ' || s.reference FROM samples s JOIN boreholes b ON b.id = s.borehole_id WHERE s.id::text = entry.object_id AND s.organisation_id = entry.organisation_id)
   WHEN 'borehole' THEN (SELECT b.name FROM boreholes b WHERE b.id::text = entry.object_id AND b.organisation_id = entry.organisation_id)
   WHEN 'invitation' THEN (SELECT i.email FROM invitations i WHERE i.id::text = entry.object_id AND i.organisation_id = entry.organisation_id)
+  WHEN 'issued_report' THEN (SELECT t.reference || ' v' || v.version FROM issued_reports ir JOIN soil_record_versions v ON v.id = ir.subject_id
+    JOIN consolidation_tests t ON t.id = v.test_id WHERE ir.id::text = entry.object_id AND ir.organisation_id = entry.organisation_id)
   WHEN 'upload' THEN (SELECT u.original_name FROM uploads u WHERE u.id::text = entry.object_id AND u.organisation_id = entry.organisation_id)
   WHEN 'user' THEN (SELECT u.name FROM users u WHERE u.id::text = entry.object_id)
   WHEN 'organisation' THEN (SELECT o.name FROM organisations o WHERE o.id::text = entry.object_id)
