@@ -32,7 +32,15 @@ import { readingsRouter } from './modules/readings/readings.router.js';
 import { templatesRouter } from './modules/readings-import/templates.router.js';
 import { uploadsRouter } from './modules/uploads/uploads.router.js';
 
-const DEFAULT_WEB_DIST = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '../../web/dist');
+/**
+ * apps/web/dist, found from the API package's root: this file runs as src/app.ts under tsx and
+ * as dist/src/app.js compiled, at different depths.
+ */
+function defaultWebDist(): string {
+  let dir = path.dirname(fileURLToPath(import.meta.url));
+  while (!existsSync(path.join(dir, 'package.json')) && path.dirname(dir) !== dir) dir = path.dirname(dir);
+  return path.resolve(dir, '../web/dist');
+}
 
 export interface AppOptions {
   /** Serve this built web app; by default apps/web/dist, in production only, when it was built. */
@@ -112,7 +120,7 @@ export function createApp(options: AppOptions = {}): Express {
   app.use(templatesRouter());
   app.use('/api', apiNotFound);
 
-  const webDist = options.webDist ?? (config.NODE_ENV === 'production' ? (config.WEB_DIST ?? DEFAULT_WEB_DIST) : undefined);
+  const webDist = options.webDist ?? (config.NODE_ENV === 'production' ? (config.WEB_DIST ?? defaultWebDist()) : undefined);
   if (webDist && existsSync(path.join(webDist, 'index.html'))) {
     app.use(express.static(webDist, { index: false, maxAge: '1h' }));
     // Client-side routes (/, /members, /reset-password?token=…) all load the app shell;
