@@ -29,6 +29,9 @@ export function MembersTable({ orgId, members, currentUserId }: MembersTableProp
   const [toRemove, setToRemove] = useState<Member | null>(null);
   /** A change refused before sending (no role left), by member. */
   const [refused, setRefused] = useState<{ userId: string; message: string } | null>(null);
+  // The roles just asked for, shown from the click itself until the refreshed list arrives
+  // (the mutation's own state reaches the screen a tick later, and the box would flick back).
+  const [asked, setAsked] = useState<{ userId: string; roles: readonly Role[] } | null>(null);
   const soleAdmin = members.filter((member) => member.roles.includes('admin')).length === 1;
 
   const columns = useMemo(
@@ -55,9 +58,9 @@ export function MembersTable({ orgId, members, currentUserId }: MembersTableProp
               </span>
             );
           }
-          const pending = updateRoles.isPending && updateRoles.variables?.userId === member.userId;
+          const pending = asked?.userId === member.userId;
           // While the change is on its way, the boxes show what was asked for.
-          const shown: readonly Role[] = pending && updateRoles.variables ? updateRoles.variables.roles : member.roles;
+          const shown: readonly Role[] = asked?.userId === member.userId ? asked.roles : member.roles;
           return (
             <RoleCheckboxes
               legend={`Roles of ${member.name}`}
@@ -72,7 +75,8 @@ export function MembersTable({ orgId, members, currentUserId }: MembersTableProp
                   return;
                 }
                 setRefused(null);
-                updateRoles.mutate({ userId: member.userId, roles: checked.data });
+                setAsked({ userId: member.userId, roles: checked.data });
+                updateRoles.mutate({ userId: member.userId, roles: checked.data }, { onSettled: () => setAsked(null) });
               }}
             />
           );
@@ -90,7 +94,7 @@ export function MembersTable({ orgId, members, currentUserId }: MembersTableProp
           ),
       }),
     ],
-    [currentUserId, soleAdmin, refused, updateRoles],
+    [currentUserId, soleAdmin, refused, asked, updateRoles],
   );
 
   const table = useReactTable({ data: members as Member[], columns, getCoreRowModel: getCoreRowModel(), getRowId: (row) => row.userId });
