@@ -14,12 +14,15 @@ import { isSecureOrigin } from './http/session-cookie.js';
 import { auditRouter } from './modules/audit/audit.router.js';
 import { authRouter } from './modules/auth/auth.router.js';
 import { healthRouter } from './modules/health/health.router.js';
+import { homeRouter } from './modules/home/home.router.js';
 import { invitationsRouter, orgInvitationsRouter } from './modules/invitations/invitations.router.js';
 import { membersRouter } from './modules/organisations/members.router.js';
 import { consolidationTestsRouter } from './modules/consolidation-tests/consolidation-tests.router.js';
 import { jobRunsRouter } from './modules/job-runs/job-runs.router.js';
+import { projectClientsRouter } from './modules/projects/project-clients.router.js';
 import { projectsRouter } from './modules/projects/projects.router.js';
 import { reviewsRouter } from './modules/reviews/reviews.router.js';
+import { issuedResultsRouter } from './modules/soil-records/issued-results.router.js';
 import { exportsRouter } from './modules/exports/exports.router.js';
 import { reportSettingsRouter } from './modules/organisations/report-settings.router.js';
 import { reportsRouter } from './modules/reports/reports.router.js';
@@ -29,7 +32,15 @@ import { readingsRouter } from './modules/readings/readings.router.js';
 import { templatesRouter } from './modules/readings-import/templates.router.js';
 import { uploadsRouter } from './modules/uploads/uploads.router.js';
 
-const DEFAULT_WEB_DIST = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '../../web/dist');
+/**
+ * apps/web/dist, found from the API package's root: this file runs as src/app.ts under tsx and
+ * as dist/src/app.js compiled, at different depths.
+ */
+function defaultWebDist(): string {
+  let dir = path.dirname(fileURLToPath(import.meta.url));
+  while (!existsSync(path.join(dir, 'package.json')) && path.dirname(dir) !== dir) dir = path.dirname(dir);
+  return path.resolve(dir, '../web/dist');
+}
 
 export interface AppOptions {
   /** Serve this built web app; by default apps/web/dist, in production only, when it was built. */
@@ -93,10 +104,13 @@ export function createApp(options: AppOptions = {}): Express {
   app.use(membersRouter());
   app.use(reportSettingsRouter());
   app.use(auditRouter());
+  app.use(homeRouter());
   app.use(projectsRouter());
+  app.use(projectClientsRouter());
   app.use(consolidationTestsRouter());
   app.use(reviewsRouter());
   app.use(soilRecordsRouter());
+  app.use(issuedResultsRouter());
   app.use(reportsRouter());
   app.use(exportsRouter());
   app.use(jobRunsRouter());
@@ -106,7 +120,7 @@ export function createApp(options: AppOptions = {}): Express {
   app.use(templatesRouter());
   app.use('/api', apiNotFound);
 
-  const webDist = options.webDist ?? (config.NODE_ENV === 'production' ? (config.WEB_DIST ?? DEFAULT_WEB_DIST) : undefined);
+  const webDist = options.webDist ?? (config.NODE_ENV === 'production' ? (config.WEB_DIST ?? defaultWebDist()) : undefined);
   if (webDist && existsSync(path.join(webDist, 'index.html'))) {
     app.use(express.static(webDist, { index: false, maxAge: '1h' }));
     // Client-side routes (/, /members, /reset-password?token=…) all load the app shell;

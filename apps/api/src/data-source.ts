@@ -5,6 +5,7 @@ import { databaseUrl } from './config/env.js';
 import { AuditEntryEntity } from './modules/audit/audit-entry.entity.js';
 import { PasswordResetTokenEntity } from './modules/auth/password-reset-token.entity.js';
 import { InvitationEntity } from './modules/invitations/invitation.entity.js';
+import { InvitationProjectEntity } from './modules/invitations/invitation-project.entity.js';
 import { MembershipEntity } from './modules/organisations/membership.entity.js';
 import { OrganisationEntity } from './modules/organisations/organisation.entity.js';
 import { UserEntity } from './modules/users/user.entity.js';
@@ -35,6 +36,7 @@ import { IssuedReports1796313882857 } from './migrations/1796313882857-issued-re
 import { SessionsAndRateLimits1796317586769 } from './migrations/1796317586769-sessions-and-rate-limits.js';
 import { SignUpRequests1796318744210 } from './migrations/1796318744210-sign-up-requests.js';
 import { TestContributions1796320068018 } from './migrations/1796320068018-test-contributions.js';
+import { ClientSharing1796322759129 } from './migrations/1796322759129-client-sharing.js';
 import { RowLevelSecurity1796324847360 } from './migrations/1796324847360-row-level-security.js';
 
 /**
@@ -50,10 +52,10 @@ export const dataSource = new DataSource({
   entities: [UserEntity, OrganisationEntity, MembershipEntity, InvitationEntity, PasswordResetTokenEntity, AuditEntryEntity,
     ProjectEntity, ProjectMemberEntity, BoreholeEntity, SampleEntity, ConsolidationTestEntity, AnalysisEntity, ReviewEventEntity,
     SoilRecordEntity, SoilRecordVersionEntity, SoilRecordSupersessionEntity, JobRunEntity,
-    UploadEntity, ReadingEntity, ImportProfileEntity, IssuedReportEntity, SessionEntity, SignUpRequestEntity, TestContributionEntity],
+    UploadEntity, ReadingEntity, ImportProfileEntity, IssuedReportEntity, SessionEntity, SignUpRequestEntity, TestContributionEntity, InvitationProjectEntity],
   migrations: [Init1796179339734, LabRecords1796180920952, ReadingsImport1796181181337, ReadingsOneForeignKey1796181664432, MembershipRoles1796313749156,
     IssuedReports1796313882857, SessionsAndRateLimits1796317586769, SignUpRequests1796318744210, TestContributions1796320068018,
-    RowLevelSecurity1796324847360],
+    ClientSharing1796322759129, RowLevelSecurity1796324847360],
   // gen_random_uuid() is built into PostgreSQL 13+, so no extension is needed on a managed server.
   uuidExtension: 'pgcrypto',
   synchronize: false,

@@ -59,7 +59,7 @@ async function waitForStatus(page: Page, word: string): Promise<void> {
 }
 
 test('a technician uploads, maps, overrides a pick and submits; a lab manager approves; the version and the e-mails appear', async ({ browser }) => {
-  test.setTimeout(180_000);
+  test.setTimeout(300_000);
   const manager = await signedIn(browser, MANAGER);
   const orgId = manager.orgId;
   const projectName = `Fennick Ridge Embankment ${unique}`;
@@ -93,7 +93,8 @@ test('a technician uploads, maps, overrides a pick and submits; a lab manager ap
   await expect(page.getByRole('table', { name: 'Parameters of the whole test' })).toContainText('Cc');
   await expect(page.getByTestId('engineering-caution').first()).toBeVisible();
   await openPart(page, 'Curves');
-  await expect(page.locator('[data-testid="plotly-chart"] .main-svg').first()).toBeVisible({ timeout: 30_000 });
+  // plotly (4.6 MB) is fetched and parsed on first use: measured 7–21 s on this shared 2-core machine under load.
+  await expect(page.locator('[data-testid="plotly-chart"] .main-svg').first()).toBeVisible({ timeout: 90_000 });
   await expect(page.getByText('Casagrande construction').first()).toBeVisible();
   await expect(page.getByText('Pacheco Silva construction').first()).toBeVisible();
   // One increment's √t and log t plots, fetched by increment.

@@ -95,7 +95,11 @@ export async function seedLabDemo(dataSource: DataSource, demo: DemoOrganisation
       siteName: 'Saltmarsh Lane, Pellowmere',
       createdById: managerId,
     });
-    await manager.getRepository(ProjectMemberEntity).insert({ organisationId: orgId, projectId: DEMO_PROJECT_ID, userId: demo.userIds.designer, role: 'designer' });
+    await manager.getRepository(ProjectMemberEntity).insert([
+      { organisationId: orgId, projectId: DEMO_PROJECT_ID, userId: demo.userIds.designer, role: 'designer', addedById: managerId },
+      // The demo client reads this project's approved results.
+      { organisationId: orgId, projectId: DEMO_PROJECT_ID, userId: demo.userIds.client, role: 'client', addedById: managerId },
+    ]);
     const boreholeIds = new Map<string, string>();
     for (const borehole of BOREHOLES) {
       const saved = await manager.getRepository(BoreholeEntity).save({ organisationId: orgId, projectId: DEMO_PROJECT_ID, ...borehole });

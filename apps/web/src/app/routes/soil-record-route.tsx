@@ -40,7 +40,7 @@ function SoilRecordPage() {
         title={`${r.boreholeName} / ${r.sampleReference} at ${r.topDepthM.toFixed(2)} m`}
         description={`${r.projectName} · from test ${r.testReference} · current version v${r.currentVersion}`}
       />
-      <div className="grid items-start gap-6 lg:grid-cols-[14rem_minmax(0,1fr)]">
+      <div className="grid grid-cols-1 items-start gap-6 lg:grid-cols-[14rem_minmax(0,1fr)]">
         <nav aria-label="Versions" className="rounded-lg border border-slate-200 bg-white">
           <h2 className="border-b border-slate-200 px-4 py-2 text-sm font-semibold text-slate-900">Versions</h2>
           <ul>
@@ -63,7 +63,7 @@ function SoilRecordPage() {
           <EngineeringCaution />
           {shown ? (
             <Panel title={`Version ${shown.version}`}>
-              <VersionView orgId={orgId} version={shown} isCurrent={shown.supersededAt === null} />
+              <VersionView orgId={orgId} version={shown} isCurrent={shown.supersededAt === null} labTestLink={labPermissions(membership.roles).readsLabWork} />
             </Panel>
           ) : null}
           {shown ? (
