@@ -6,10 +6,10 @@ import type { MigrationInterface, QueryRunner } from 'typeorm';
  * empty (work outside any organisation: sign-in, migrations, housekeeping) or names the
  * row's organisation. db/tenant-wall.ts sets it for each request and job of one
  * organisation and switches the connection to the `porestack_tenant` role meanwhile: the
- * owner of the tables (and a superuser, as on a developer's machine) passes every policy,
- * the role does not. FORCE as well, for a deployment whose login role owns the tables and
- * is not a superuser. A table added later calls porestack_add_tenant_wall('<table>') in its
- * own migration; a test checks that none is missed.
+ * login role owns the tables and passes the walls (not FORCEd: the readings' bulk COPY runs
+ * as it, since PostgreSQL refuses COPY FROM under row-level security), porestack_tenant is
+ * bound by them. A table added later calls porestack_add_tenant_wall('<table>') in its own
+ * migration; a test checks that none is missed.
  */
 export class RowLevelSecurity1796324847360 implements MigrationInterface {
   name = 'RowLevelSecurity1796324847360';
@@ -47,7 +47,6 @@ export class RowLevelSecurity1796324847360 implements MigrationInterface {
     await queryRunner.query(`CREATE FUNCTION porestack_add_tenant_wall(target regclass) RETURNS void LANGUAGE plpgsql AS $$
       BEGIN
         EXECUTE format('ALTER TABLE %s ENABLE ROW LEVEL SECURITY', target);
-        EXECUTE format('ALTER TABLE %s FORCE ROW LEVEL SECURITY', target);
         EXECUTE format('CREATE POLICY tenant_wall ON %s USING (porestack_sees(organisation_id)) WITH CHECK (porestack_sees(organisation_id))', target);
       END
     $$`);
@@ -69,7 +68,6 @@ export class RowLevelSecurity1796324847360 implements MigrationInterface {
       BEGIN
         FOR walled IN SELECT tablename FROM pg_policies WHERE schemaname = 'public' AND policyname = 'tenant_wall' LOOP
           EXECUTE format('DROP POLICY tenant_wall ON public.%I', walled.tablename);
-          EXECUTE format('ALTER TABLE public.%I NO FORCE ROW LEVEL SECURITY', walled.tablename);
           EXECUTE format('ALTER TABLE public.%I DISABLE ROW LEVEL SECURITY', walled.tablename);
         END LOOP;
       END

@@ -87,17 +87,17 @@ describe('row-level security between organisations', () => {
     await ours.technician.get(`/api/orgs/${theirs.orgId}/tests`).expect(404);
   });
 
-  it('when the schema is read, then every table with an organisation_id has the wall, forced, with its policy', async () => {
+  it('when the schema is read, then every table with an organisation_id has the wall and its policy', async () => {
     const tables = (await dataSource.query(
-      `SELECT c.relname AS name, c.relrowsecurity AS enabled, c.relforcerowsecurity AS forced,
+      `SELECT c.relname AS name, c.relrowsecurity AS enabled,
               EXISTS (SELECT 1 FROM pg_policies p WHERE p.schemaname = 'public' AND p.tablename = c.relname AND p.policyname = 'tenant_wall') AS policy
          FROM pg_class c JOIN pg_namespace n ON n.oid = c.relnamespace
         WHERE n.nspname = 'public' AND c.relkind IN ('r', 'p')
           AND EXISTS (SELECT 1 FROM pg_attribute a WHERE a.attrelid = c.oid AND a.attname = 'organisation_id' AND NOT a.attisdropped)`,
-    )) as Array<{ name: string; enabled: boolean; forced: boolean; policy: boolean }>;
+    )) as Array<{ name: string; enabled: boolean; policy: boolean }>;
     // The lab's own tables are among them (a sample, not the list checked).
     expect(tables.map((t) => t.name)).toEqual(expect.arrayContaining(['projects', 'consolidation_tests', 'readings', 'soil_record_versions', 'memberships', 'audit_entries']));
-    const unwalled = tables.filter((t) => !t.enabled || !t.forced || !t.policy).map((t) => t.name);
+    const unwalled = tables.filter((t) => !t.enabled || !t.policy).map((t) => t.name);
     expect(unwalled, 'tables with an organisation_id but no tenant wall (call porestack_add_tenant_wall in their migration)').toEqual([]);
   });
 });
