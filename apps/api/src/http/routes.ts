@@ -1,5 +1,6 @@
 import type { Role } from '@porestack/types';
 import { Router, type Express, type NextFunction, type Request, type RequestHandler, type Response } from 'express';
+import { runInTenant } from '../db/tenant-wall.js';
 import { authenticate, resolveTenant } from './authenticate.js';
 
 /**
@@ -60,6 +61,9 @@ function guardFor(access: Access): Guard {
     req.user = await authenticate(req);
     if (access !== 'signed-in') {
       req.tenant = await resolveTenant(req.user.id, req.params['orgId'] as string | undefined, access);
+      // From here on, every query of this request sees only this organisation's rows.
+      runInTenant(req.tenant.orgId, next);
+      return;
     }
     next();
   };

@@ -1,4 +1,5 @@
 import type PgBoss from 'pg-boss';
+import { runInTenant } from '../db/tenant-wall.js';
 import type { JobDefinition } from './job-definition.js';
 
 /** Creates each job's queue, subscribes its handler and sets its schedule. */
@@ -8,7 +9,11 @@ export async function registerJobs(boss: PgBoss, jobs: JobDefinition[]): Promise
     // pg-boss 10 has no concurrency setting: each work() subscription takes one job at a time.
     for (let slot = 0; slot < (job.concurrency ?? 1); slot += 1) {
       await boss.work<object>(job.name, { pollingIntervalSeconds: job.pollingIntervalSeconds ?? 2 }, async (batch) => {
-        for (const item of batch) await job.handler(item.data);
+        for (const item of batch) {
+          // A job of one organisation sees only that organisation's rows, as its request would.
+          const orgId = (item.data as { orgId?: unknown }).orgId;
+          await (typeof orgId === 'string' ? runInTenant(orgId, () => job.handler(item.data)) : job.handler(item.data));
+        }
       });
     }
     if (job.schedule) await boss.schedule(job.name, job.schedule);

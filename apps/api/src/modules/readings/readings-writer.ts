@@ -3,6 +3,7 @@ import { pipeline } from 'node:stream/promises';
 import type { PoolClient } from 'pg';
 import { from as copyFrom } from 'pg-copy-streams';
 import type { EntityManager } from 'typeorm';
+import { currentTenantOrg, TENANT_ROLE } from '../../db/tenant-wall.js';
 import type { ParsedReadings } from '../readings-import/read-readings.js';
 
 export interface ReadingsTarget {
@@ -31,10 +32,17 @@ export async function replaceReadings(
   if (!runner?.isTransactionActive) throw new Error('replaceReadings must run inside a transaction');
   await manager.query('DELETE FROM readings WHERE organisation_id = $1 AND test_id = $2', [target.orgId, target.testId]);
   const client = (await runner.connect()) as PoolClient;
+  // PostgreSQL refuses COPY FROM into a table under row-level security, so the COPY alone runs
+  // as the login role (SET LOCAL: until this transaction ends). Every row it writes carries
+  // target.orgId, which must be the organisation this work is walled to.
+  const walledTo = currentTenantOrg();
+  if (walledTo !== null && walledTo !== target.orgId) throw new Error(`readings of organisation ${target.orgId} written in the work of ${walledTo}`);
+  if (walledTo !== null) await client.query('SET LOCAL ROLE NONE');
   const copy = client.query(
     copyFrom('COPY readings (test_id, row_number, organisation_id, upload_id, increment_index, stress_kpa, elapsed_min, deformation_mm) FROM STDIN'),
   );
   await pipeline(Readable.from(copyChunks(target, readings, onProgress)), copy);
+  if (walledTo !== null) await client.query(`SET LOCAL ROLE ${TENANT_ROLE}`);
   // Only now has the server taken every row (the last chunks were still being checked).
   onProgress(1);
 }
