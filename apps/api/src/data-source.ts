@@ -26,6 +26,7 @@ import { LabRecords1796180920952 } from './migrations/1796180920952-lab-records.
 import { ReadingsImport1796181181337 } from './migrations/1796181181337-readings-import.js';
 import { ReadingsOneForeignKey1796181664432 } from './migrations/1796181664432-readings-one-foreign-key.js';
 import { MembershipRoles1796313749156 } from './migrations/1796313749156-membership-roles.js';
+import { ImportNotesAndSheets1796318895187 } from './migrations/1796318895187-import-notes-and-sheets.js';
 
 /**
  * The one DataSource (the TypeORM CLI requires exactly one export here). Entities and
@@ -39,7 +40,7 @@ export const dataSource = new DataSource({
     ProjectEntity, ProjectMemberEntity, BoreholeEntity, SampleEntity, ConsolidationTestEntity, AnalysisEntity, ReviewEventEntity,
     SoilRecordEntity, SoilRecordVersionEntity, SoilRecordSupersessionEntity, JobRunEntity,
     UploadEntity, ReadingEntity, ImportProfileEntity],
-  migrations: [Init1796179339734, LabRecords1796180920952, ReadingsImport1796181181337, ReadingsOneForeignKey1796181664432, MembershipRoles1796313749156],
+  migrations: [Init1796179339734, LabRecords1796180920952, ReadingsImport1796181181337, ReadingsOneForeignKey1796181664432, MembershipRoles1796313749156, ImportNotesAndSheets1796318895187],
   // gen_random_uuid() is built into PostgreSQL 13+, so no extension is needed on a managed server.
   uuidExtension: 'pgcrypto',
   synchronize: false,

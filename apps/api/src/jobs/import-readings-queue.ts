@@ -76,7 +76,7 @@ export const IMPORT_CONCURRENCY = 3;
 export const IMPORTS_PER_ORGANISATION = 2;
 
 /** A running import whose row has not moved for this long is taken to be dead (its worker stopped). */
-const STALE_RUNNING_MINUTES = 15;
+export const STALE_RUNNING_MINUTES = 15;
 
 /**
  * pg-boss picks the highest priority first, then the oldest. An import is sent at minus the

@@ -108,6 +108,8 @@ export const UploadPreviewSchema = z.object({
 export type UploadPreview = z.infer<typeof UploadPreviewSchema>;
 
 export const ReadingRowSchema = z.object({
+  /** 0 for a CSV or a workbook's first sheet; the sheet's place in a workbook of one sheet per increment. */
+  sheetIndex: z.number().int().default(0),
   rowNumber: z.number(),
   incrementIndex: z.number(),
   stressKpa: z.number(),

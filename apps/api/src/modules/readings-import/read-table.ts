@@ -1,4 +1,4 @@
-import type { CsvDelimiter, DetectedFileType } from '@porestack/types';
+import type { CsvDelimiter, DetectedFileType, SheetLayout } from '@porestack/types';
 import { parseCsvTable } from './parse-csv-table.js';
 import { parseXlsxTable } from './parse-xlsx-table.js';
 import type { ColumnsToKeep } from './keep-columns.js';
@@ -8,10 +8,12 @@ export interface ReadTableOptions {
   delimiter?: CsvDelimiter | undefined;
   previewRows?: number | undefined;
   keepColumns?: ColumnsToKeep | undefined;
+  /** Workbooks only: read every sheet (one increment each) rather than the first. */
+  sheets?: SheetLayout | undefined;
 }
 
 /** The file's rows, whichever of the two types it is (the type comes from sniffFileType). */
 export async function readTable(bytes: Buffer, type: DetectedFileType, limits: ImportLimits, options: ReadTableOptions = {}): Promise<RawTable> {
-  if (type === 'xlsx') return parseXlsxTable(bytes, limits, { previewRows: options.previewRows, keepColumns: options.keepColumns });
+  if (type === 'xlsx') return parseXlsxTable(bytes, limits, { previewRows: options.previewRows, keepColumns: options.keepColumns, sheets: options.sheets });
   return parseCsvTable(bytes.toString('utf8'), limits, { delimiter: options.delimiter, previewRows: options.previewRows, keepColumns: options.keepColumns });
 }

@@ -32,7 +32,7 @@ export async function replaceReadings(
   await manager.query('DELETE FROM readings WHERE organisation_id = $1 AND test_id = $2', [target.orgId, target.testId]);
   const client = (await runner.connect()) as PoolClient;
   const copy = client.query(
-    copyFrom('COPY readings (test_id, row_number, organisation_id, upload_id, increment_index, stress_kpa, elapsed_min, deformation_mm) FROM STDIN'),
+    copyFrom('COPY readings (test_id, sheet_index, row_number, organisation_id, upload_id, increment_index, stress_kpa, elapsed_min, deformation_mm) FROM STDIN'),
   );
   await pipeline(Readable.from(copyChunks(target, readings, onProgress)), copy);
   // Only now has the server taken every row (the last chunks were still being checked).
@@ -46,7 +46,7 @@ function* copyChunks(target: ReadingsTarget, readings: ParsedReadings, onProgres
   let lines: string[] = [];
   for (let i = 0; i < readings.count; i += 1) {
     lines.push(
-      `${prefix}${readings.rowNumber[i]}${ids}${readings.incrementIndex[i]}\t${readings.stressKpa[i]}\t${readings.elapsedMin[i]}\t${readings.deformationMm[i]}\n`,
+      `${prefix}${readings.sheetIndex[i]}\t${readings.rowNumber[i]}${ids}${readings.incrementIndex[i]}\t${readings.stressKpa[i]}\t${readings.elapsedMin[i]}\t${readings.deformationMm[i]}\n`,
     );
     if (lines.length === ROWS_PER_CHUNK) {
       yield lines.join('');

@@ -19,12 +19,12 @@ const ReadingsQuerySchema = ReadingsPageQuerySchema.extend({
 async function listIncrementReadings(orgId: string, testId: string, incrementIndex: number, offset: number, limit: number): Promise<ReadingsPage> {
   const repo = dataSource.getRepository(ReadingEntity);
   const where = { organisationId: orgId, testId, incrementIndex };
-  const [rows, total] = await Promise.all([repo.find({ where, order: { rowNumber: 'ASC' }, skip: offset, take: limit }), repo.countBy(where)]);
+  const [rows, total] = await Promise.all([repo.find({ where, order: { sheetIndex: 'ASC', rowNumber: 'ASC' }, skip: offset, take: limit }), repo.countBy(where)]);
   return {
     total,
     offset,
     limit,
-    readings: rows.map((r) => ({ rowNumber: r.rowNumber, incrementIndex: r.incrementIndex, stressKpa: r.stressKpa, elapsedMin: r.elapsedMin, deformationMm: r.deformationMm })),
+    readings: rows.map((r) => ({ sheetIndex: r.sheetIndex, rowNumber: r.rowNumber, incrementIndex: r.incrementIndex, stressKpa: r.stressKpa, elapsedMin: r.elapsedMin, deformationMm: r.deformationMm })),
   };
 }
 

@@ -152,7 +152,13 @@ describe('the mapping step and import profiles', () => {
     expect(preview).toMatchObject({ layout: 'needs_mapping', detectedType: 'xlsx', columns: ['Stage', 'Load (kgf/cm2)', 'Time (s)', 'Dial (div)'] });
     expect(preview.rows[0]).toEqual([1, 0.127465, 0, 5000]);
     expect(preview.rows).toHaveLength(20);
-    expect(preview.suggestedMapping?.columns).toEqual(LOGGER_MAPPING.columns);
+    // Everything is guessed from the header and the values but the size of a "div": that is asked.
+    expect(preview.suggestion).toMatchObject({ source: 'guess', open: ['dialDivision'], mapping: null });
+    expect(preview.suggestion.guess).toMatchObject({
+      columns: LOGGER_MAPPING.columns,
+      units: LOGGER_MAPPING.units,
+      deformationReading: { kind: 'dial', zeroReading: null, divisionSize: null, increasesWithCompression: false },
+    });
 
     const imported = (await technician.post(`/api/orgs/${orgId}/uploads/${upload.id}/import`, { mapping: LOGGER_MAPPING, saveAsProfile: 'Bench logger B' }).expect(202)).body as JobRun;
     expect((await finishedJob(technician, orgId, imported.id)).state).toBe('succeeded');
