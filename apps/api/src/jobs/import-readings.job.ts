@@ -38,7 +38,7 @@ export async function importReadings(data: ImportReadingsJobData): Promise<void>
       await jobRuns.update(data.jobRunId, {
         state: 'succeeded',
         progress: 1,
-        message: `Imported ${outcome.readingCount.toLocaleString('en-GB')} readings in ${outcome.incrementCount} increments; ${outcome.notes ? `${outcome.notes} ` : ''}the analysis is queued.`,
+        message: `Imported ${outcome.readingCount.toLocaleString('en-GB')} readings in ${outcome.incrementCount} increments; the analysis is queued.${outcome.notes ? ` ${outcome.notes}` : ''}`,
         result: { uploadId: data.uploadId, importedReadings: outcome.readingCount, increments: outcome.incrementCount, analysisJobId: outcome.analysisJobId },
       });
     }

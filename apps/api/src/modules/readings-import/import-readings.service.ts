@@ -92,5 +92,6 @@ function summariseNotes(notes: readonly ImportNote[], noteCount: number): string
     count('check') > 0 ? 'the deformations look implausible' : null,
   ].filter((part): part is string => part !== null);
   const more = noteCount > notes.length ? ` (${noteCount.toLocaleString('en-GB')} notes in all)` : '';
-  return `${parts.join('; ')}${more} — see the notes on the upload.`;
+  const sentence = parts.join('; ');
+  return `${sentence.charAt(0).toUpperCase()}${sentence.slice(1)}${more}: see the notes on the upload.`;
 }

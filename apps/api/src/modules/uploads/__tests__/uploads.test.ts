@@ -98,8 +98,8 @@ describe('uploading the canonical layout', () => {
       offset: 15,
       limit: 2,
       readings: [
-        { rowNumber: 17, incrementIndex: 2, stressKpa: 25, elapsedMin: 0, deformationMm: demoReadings()[15]?.deformationMm },
-        { rowNumber: 18, incrementIndex: 2, stressKpa: 25, elapsedMin: 0.1, deformationMm: demoReadings()[16]?.deformationMm },
+        { sheetIndex: 0, rowNumber: 17, incrementIndex: 2, stressKpa: 25, elapsedMin: 0, deformationMm: demoReadings()[15]?.deformationMm },
+        { sheetIndex: 0, rowNumber: 18, incrementIndex: 2, stressKpa: 25, elapsedMin: 0.1, deformationMm: demoReadings()[16]?.deformationMm },
       ],
     });
   });
