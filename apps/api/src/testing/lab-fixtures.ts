@@ -42,11 +42,16 @@ export interface LabFixture {
 }
 
 /** Project → borehole → sample → draft test, through the services (as the routes would). */
-export async function draftTest(orgId: string, technicianId: string, options: { designerIds?: string[] } = {}): Promise<LabFixture> {
+export async function draftTest(
+  orgId: string,
+  technicianId: string,
+  options: { designerIds?: string[]; specimen?: { initialHeightMm: number; diameterMm: number; specificGravity: number; dryMassG: number; drainage: 'double' | 'single' } } = {},
+): Promise<LabFixture> {
   counter += 1;
   const tag = `${Date.now().toString(36)}-${counter}`;
   const actor = { id: technicianId };
-  const { dryMassG } = KNOWN_TEST;
+  const specimen = options.specimen ?? { initialHeightMm: KNOWN_SOIL.initialHeightMm, diameterMm: KNOWN_SOIL.diameterMm, specificGravity: KNOWN_SOIL.specificGravity, dryMassG: KNOWN_TEST.dryMassG, drainage: KNOWN_SOIL.drainage };
+  const { dryMassG } = specimen;
   const project = await createProject(orgId, { name: `Fixture project ${tag}`, reference: `FX-${tag}`, clientName: 'Fixture client', siteName: '', designerIds: options.designerIds ?? [] }, actor);
   const borehole = await createBorehole(orgId, project.id, { name: 'BH1', groundLevelMOd: 4.2, waterTableDepthM: 1.5 }, actor);
   const sample = await createSample(orgId, borehole.id, { reference: 'U1', topDepthM: 6, bottomDepthM: 6.45, description: 'Soft grey clay', bulkUnitWeightKnPerM3: 17.5, inSituStressKpa: null }, actor);
@@ -55,7 +60,7 @@ export async function draftTest(orgId: string, technicianId: string, options: { 
     sample.id,
     {
       reference: `T-${tag}`,
-      specimen: { initialHeightMm: KNOWN_SOIL.initialHeightMm, diameterMm: KNOWN_SOIL.diameterMm, specificGravity: KNOWN_SOIL.specificGravity, dryMassG, drainage: KNOWN_SOIL.drainage },
+      specimen,
       apparatusName: 'Frame 2',
       compliance: [],
       startedOn: '2026-03-02',

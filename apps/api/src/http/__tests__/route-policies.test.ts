@@ -168,6 +168,10 @@ const SPEC: Record<string, { access: Access; sample: (ctx: Context) => Promise<S
     access: IMPORTERS,
     sample: async (c) => ({ path: `/api/orgs/${c.orgId}/uploads/${await uploadOf(c.lab.analysed.testId)}/import`, body: { mapping: LOGGER_MAPPING } }),
   },
+  'POST /api/orgs/:orgId/uploads/:uploadId/trial': {
+    access: IMPORTERS,
+    sample: async (c) => ({ path: `/api/orgs/${c.orgId}/uploads/${await uploadOf(c.lab.analysed.testId)}/trial`, body: { mapping: LOGGER_MAPPING } }),
+  },
   'GET /api/orgs/:orgId/import-profiles': { access: UPLOAD_READERS, sample: (c) => ({ path: `/api/orgs/${c.orgId}/import-profiles` }) },
   'POST /api/orgs/:orgId/import-profiles': {
     access: PROFILE_EDITORS,

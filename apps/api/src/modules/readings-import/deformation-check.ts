@@ -11,7 +11,8 @@ const percent = (fraction: number): string => `${Number((fraction * 100).toPreci
  * Whether the imported deformations are plausible for the specimen: the largest
  * compression under 0.1 % of its height is too small to be a consolidation test (a reading
  * in inches or mm taken as gauge divisions), over 60 % more than a specimen can give
- * (divisions taken as mm); a specimen that only swells has its gauge's direction reversed.
+ * (divisions taken as mm); a specimen that swells more than it compresses has its gauge read
+ * the wrong way round.
  * Answers a note for the upload (the file is still imported), or null when the deformations
  * look right or the height is not known.
  */
@@ -25,8 +26,9 @@ export function deformationCheck(readings: ParsedReadings, specimenHeightMm: num
     if (value < smallest) smallest = value;
   }
   const check = (message: string): ImportNote => ({ kind: 'check', row: null, column: null, message });
-  if (largest <= 0 && smallest < 0) {
-    return check(`Every deformation is a swelling (down to ${mm(smallest)}): the gauge's direction is likely the wrong way round. Check "rises/falls as the specimen compresses" in the mapping and import again.`);
+  // A specimen compresses over a test far more than it ever swells: the other way round, the gauge is read backwards.
+  if (smallest < 0 && -smallest > largest) {
+    return check(`The readings show the specimen swelling by up to ${mm(-smallest)} and compressing by at most ${mm(Math.max(largest, 0))}: the gauge's direction is likely the wrong way round. Check whether its reading rises or falls as the specimen compresses, in the mapping, and import again.`);
   }
   if (specimenHeightMm === null || !(specimenHeightMm > 0)) return null;
   const strain = largest / specimenHeightMm;

@@ -4,7 +4,7 @@ import { guessColumns, namesAGauge, type GuessedColumn } from './guess-columns.j
 import { guessSheets } from './guess-sheets.js';
 import { columnCells, guessDecimalSeparator, guessTimeFormat, numbersOf, trendOf } from './guess-values.js';
 import { lengthUnitOf, stressUnitOf, timeUnitOf } from './header-units.js';
-import { firstIncrementRows, guessTimeOrigin } from './guess-time-origin.js';
+import { guessTimeOrigin } from './guess-time-origin.js';
 import { headerOf, type RawTable } from './raw-table.js';
 
 /** A guess with what it rests on and what it leaves to the person. */
@@ -74,11 +74,11 @@ export function guessMapping(table: RawTable, chosenHeaderRow: number | null): G
     else open.push('dateOrder');
   }
 
-  const firstRows = firstIncrementRows(dataRows, header, columns, sheets.layout);
   const origin = guessTimeOrigin(table, header, headerRow, columns, sheets.layout, { format, minutesPerUnit: 1, decimalComma, dateOrder: timeFormat.dateOrder });
   reasons.timeOrigin = origin.reason;
 
-  const deformation = guessDeformation(columns.deformation, numbersOf(cellsOf(columns.deformation).slice(0, firstRows), decimalComma), reasons, open);
+  // Over the rows read a specimen compresses, whatever a first, light load did (some swell).
+  const deformation = guessDeformation(columns.deformation, numbersOf(cellsOf(columns.deformation), decimalComma), reasons, open);
 
   for (const field of ['stress', 'elapsedTime', 'deformation'] as const) {
     if (columns[field] === null && !(field === 'stress' && sheets.stressFrom === 'sheetName')) {
@@ -105,7 +105,8 @@ export function guessMapping(table: RawTable, chosenHeaderRow: number | null): G
 /**
  * The deformation column's unit, kind, division and direction. A gauge (by its words, its
  * unit µm or "0.01 mm", or values that fall as the specimen compresses) reads from a zero
- * with a division and a direction; the direction is the first increment's trend. A
+ * with a division and a direction; the direction is the trend over the rows read (a test
+ * compresses its specimen far more than a first light load may swell it). A
  * deformation written in mm or inches that rises is taken as it is.
  */
 function guessDeformation(column: GuessedColumn | null, firstValues: readonly number[], reasons: Partial<Record<MappingSetting, string>>, open: MappingSetting[]): { unit: 'mm' | 'in'; reading: MappingGuess['deformationReading'] } {
@@ -118,10 +119,10 @@ function guessDeformation(column: GuessedColumn | null, firstValues: readonly nu
   const gauge = namesAGauge(column);
   const trend = trendOf(firstValues);
   if (!gauge && length?.division === 1 && trend !== 'falls') {
-    reasons.deformationKind = trend === 'rises' ? `'${column.name}' grows as the first load goes on: a deformation, compression positive.` : `'${column.name}' names a deformation.`;
+    reasons.deformationKind = trend === 'rises' ? `'${column.name}' grows as the loads go on: a deformation, compression positive.` : `'${column.name}' names a deformation.`;
     return { unit, reading: { kind: 'deformation', zeroReading: null, divisionSize: null, increasesWithCompression: null } };
   }
-  reasons.deformationKind = gauge ? `'${column.name}' names a gauge reading.` : `'${column.name}' is read like a gauge: its values ${trend === 'falls' ? 'fall as the first load goes on' : `are in ${unitText}`}.`;
+  reasons.deformationKind = gauge ? `'${column.name}' names a gauge reading.` : `'${column.name}' is read like a gauge: its values ${trend === 'falls' ? 'fall as the loads go on' : `are in ${unitText}`}.`;
   // A deformation-like column counts from zero; a gauge from its first reading.
   const zeroReading = gauge ? null : 0;
   reasons.dialZero = gauge ? 'The first reading of the file is the zero.' : 'The column counts from zero.';
@@ -135,7 +136,7 @@ function guessDeformation(column: GuessedColumn | null, firstValues: readonly nu
   if (trend === 'flat') open.push('dialDirection');
   else {
     increasesWithCompression = trend === 'rises';
-    reasons.dialDirection = `The reading ${trend === 'rises' ? 'rises' : 'falls'} over the first increment.`;
+    reasons.dialDirection = `The reading ${trend === 'rises' ? 'rises' : 'falls'} from the first rows to the last rows read (${firstValues.length.toLocaleString('en-GB')} readings); check the first increment's deformations below.`;
   }
   return { unit, reading: { kind: 'dial', zeroReading, divisionSize, increasesWithCompression } };
 }

@@ -48,8 +48,8 @@ export function guessTimeFormat(cells: readonly Cell[]): { format: TimeFormat; e
 }
 
 /**
- * Which way a column of readings moves over the first increment: the mean of its last three
- * values against its first three. 'flat' when they differ by less than a thousandth of the
+ * Which way a column of readings moves over the rows read: the mean of its last three values
+ * against its first three. 'flat' when they differ by less than a thousandth of the
  * values' spread or there are too few, so no direction is guessed from noise.
  */
 export function trendOf(values: readonly number[]): 'rises' | 'falls' | 'flat' {

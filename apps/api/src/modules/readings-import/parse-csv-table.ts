@@ -61,10 +61,11 @@ export function parseCsvTable(text: string, limits: ImportLimits, options: CsvPa
         parser.abort();
         return;
       }
+      // Width of the file as written, before unmapped columns are dropped.
+      if (cells.length > widest) widest = cells.length;
       const kept = keep(rowNumber, cells);
       if (kept === null) return;
       rows.push({ rowNumber, cells: kept });
-      if (cells.length > widest) widest = cells.length;
     },
   });
   if (problem) throw problem;

@@ -7,6 +7,7 @@ import { MAX_COLUMNS, tooWide } from './max-columns.js';
 import type { Cell, ImportLimits, RawRow, RawSheet, RawTable } from './raw-table.js';
 import { readMergedRanges } from './read-merged-ranges.js';
 import { spreadsheetDateText } from './spreadsheet-date-text.js';
+import { primeWorkbookReader } from './prime-workbook-reader.js';
 
 export interface XlsxParseOptions {
   /** Stop after this many rows of the (first) readings sheet (a preview). */
@@ -46,6 +47,7 @@ export async function parseXlsxTable(bytes: Buffer, limits: ImportLimits, option
   const readEvery = options.sheets === 'each';
   let rowCount = 0;
   try {
+    await primeWorkbookReader(reader, bytes);
     for await (const worksheet of reader) {
       const sheet = worksheet as unknown as WorksheetStream;
       const name = sheet.name ?? `Sheet${sheet.id}`;
