@@ -293,5 +293,6 @@ function deformationInMm(values: Float64Array, times: Float64Array, mapping: Imp
     compressionIncreasesReading: reading.increasesWithCompression,
   };
   const readings = Array.from(values, (dialReading, i) => ({ elapsedMin: times[i] as number, dialReading }));
-  return Float64Array.from(dialReadingsToDeformation(readings, gauge), (converted) => converted.deformationMm);
+  // `+ 0` turns the −0 of a falling gauge at its zero into 0.
+  return Float64Array.from(dialReadingsToDeformation(readings, gauge), (converted) => converted.deformationMm + 0);
 }
