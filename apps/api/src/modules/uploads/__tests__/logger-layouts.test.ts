@@ -152,3 +152,45 @@ describe('the trial of a mapping before import', () => {
     expect(refused.body.issues).toEqual([expect.objectContaining({ path: 'mapping.time.format' })]);
   });
 });
+
+describe('what the import says when something is wrong', () => {
+  it('a wrong import body is refused naming each wrong field, not "Invalid input" at the top', async () => {
+    const layout = LOGGER_LAYOUTS[1] as LoggerLayout;
+    const { upload } = await uploaded(layout);
+    const neither = await technician.post(`/api/orgs/${orgId}/uploads/${upload.id}/import`, {}).expect(400);
+    expect(neither.body.issues).toEqual([{ path: 'mapping', message: 'send either a mapping or the profileId of a saved import profile (one of the two)' }]);
+    const blank = await technician.post(`/api/orgs/${orgId}/uploads/${upload.id}/import`, { mapping: { ...layout.mapping, columns: { ...layout.mapping.columns, stress: ' ' }, deformationReading: { kind: 'dial', divisionSize: -1 } } }).expect(400);
+    expect(blank.body.issues.map((issue: { path: string }) => issue.path).sort()).toEqual(['mapping.columns.stress', 'mapping.deformationReading.divisionSize', 'mapping.deformationReading.increasesWithCompression']);
+    const profile = await technician.post(`/api/orgs/${orgId}/uploads/${upload.id}/import`, { profileId: 'frame 7' }).expect(400);
+    expect(profile.body.issues).toEqual([{ path: 'profileId', message: 'choose a saved import profile' }]);
+    const row = await technician.get(`/api/orgs/${orgId}/uploads/${upload.id}/preview?headerRow=0`).expect(400);
+    expect(row.body.issues).toEqual([{ path: 'headerRow', message: 'headerRow counts from 1 (the first row).' }]);
+  });
+
+  it('a second import of a file while the first is still queued is refused with 409; the first goes on', async () => {
+    const layout = LOGGER_LAYOUTS[2] as LoggerLayout;
+    const { upload } = await uploaded(layout);
+    const first = (await technician.post(`/api/orgs/${orgId}/uploads/${upload.id}/import`, { mapping: layout.mapping }).expect(202)).body as JobRun;
+    const second = await technician.post(`/api/orgs/${orgId}/uploads/${upload.id}/import`, { mapping: layout.mapping }).expect(409);
+    expect(second.body.message).toBe('This file is being read now. Wait until its import ends (the page follows it), then change the mapping if you need to.');
+    expect((await finishedJob(technician, orgId, first.id, 60_000)).state).toBe('succeeded');
+  });
+
+  it('a gauge of 0.01 mm divisions taken as mm makes the analysis refuse in plain words, naming the increment and what to check', async () => {
+    const layout = LOGGER_LAYOUTS.find((candidate) => candidate.fileName === 'celdas-de-tiempo.xlsx') as LoggerLayout;
+    const { upload } = await uploaded(layout);
+    const { analysed } = await importWith(upload.id, { ...layout.mapping, deformationReading: { kind: 'dial', divisionSize: 1, increasesWithCompression: true } });
+    expect(analysed.state).toBe('failed');
+    expect(analysed.message).toMatch(/^The analysis could not run on these data\. Increment \d+ \(\d+ kPa\) compresses the specimen by [\d.]+ mm, which would leave it thinner than its solids alone \([\d.]+ mm of its 19 mm\)\. The deformations are likely read too large: check the gauge's division size and unit in the import mapping/);
+  });
+
+  it('the same file uploaded to a second test is flagged with the test that already holds it', async () => {
+    const layout = LOGGER_LAYOUTS[4] as LoggerLayout;
+    const first = await uploaded(layout);
+    const second = await uploaded(layout);
+    const reference = ((await technician.get(`/api/orgs/${orgId}/tests/${first.testId}`).expect(200)).body as { reference: string }).reference;
+    expect(second.upload.sameFileIn).toEqual([expect.objectContaining({ testId: first.testId, testReference: reference, uploadId: first.upload.id, originalName: layout.fileName })]);
+    const listed = (await technician.get(`/api/orgs/${orgId}/tests/${first.testId}/uploads`).expect(200)).body as Upload[];
+    expect(listed[0]?.sameFileIn.map((same) => same.testId)).toEqual([second.testId]);
+  });
+});
