@@ -181,7 +181,7 @@ describe('what the import says when something is wrong', () => {
     const { upload } = await uploaded(layout);
     const { analysed } = await importWith(upload.id, { ...layout.mapping, deformationReading: { kind: 'dial', divisionSize: 1, increasesWithCompression: true } });
     expect(analysed.state).toBe('failed');
-    expect(analysed.message).toMatch(/^The analysis could not run on these data\. Increment \d+ \(\d+ kPa\) compresses the specimen by [\d.]+ mm, which would leave it thinner than its solids alone \([\d.]+ mm of its 19 mm\)\. The deformations are likely read too large: check the gauge's division size and unit in the import mapping/);
+    expect(analysed.message).toMatch(/^The analysis could not run on these data\. Increment \d+ \([\d.]+ kPa\) compresses the specimen by [\d.]+ mm, which would leave it thinner than its solids alone \([\d.]+ mm of its 19 mm\)\. The deformations are likely read too large: check the gauge's division size and unit in the import mapping/);
   });
 
   it('the same file uploaded to a second test is flagged with the test that already holds it', async () => {
