@@ -25,7 +25,7 @@ export async function importReadings(data: ImportReadingsJobData): Promise<void>
       await jobRuns.update(data.jobRunId, {
         state: 'succeeded',
         progress: 1,
-        message: 'The file is stored. Its columns are not the standard ones: choose which column holds what, then import.',
+        message: 'The file is stored. Its columns are not the standard ones: check the mapping guessed below (and choose what the file does not tell), then import.',
         result: { uploadId: data.uploadId, needsMapping: true },
       });
     } else if (outcome.kind === 'rejected') {

@@ -51,6 +51,9 @@ export async function importUpload(data: ImportReadingsJobData, onProgress: (fra
   const notes = check ? [check, ...outcome.notes] : [...outcome.notes];
   const noteCount = outcome.noteCount + (check ? 1 : 0);
   await onProgress(0.45, `Writing ${readings.count.toLocaleString('en-GB')} readings.`);
+  // Progress writes are not awaited while the readings stream, but they all land before the
+  // import returns: a late one would overwrite the job's final message.
+  let progressWritten: Promise<unknown> = Promise.resolve();
   const analysisJobId = await dataSource.transaction(async (manager) => {
     // One import per test at a time: a second waits here, then replaces the first's readings.
     await manager.query('SELECT id FROM consolidation_tests WHERE organisation_id = $1 AND id = $2 FOR UPDATE', [data.orgId, data.testId]);
@@ -59,7 +62,8 @@ export async function importUpload(data: ImportReadingsJobData, onProgress: (fra
       if (fraction - lastReported < 0.2 && fraction < 1) return;
       lastReported = fraction;
       // A lost progress write must not stop the import.
-      onProgress(0.45 + 0.45 * fraction, fraction < 1 ? `Writing readings: ${Math.round(fraction * 100)} % sent.` : 'Readings written; finishing.').catch(() => undefined);
+      const message = fraction < 1 ? `Writing readings: ${Math.round(fraction * 100)} % sent.` : 'Readings written; finishing.';
+      progressWritten = progressWritten.then(() => onProgress(0.45 + 0.45 * fraction, message)).catch(() => undefined);
     });
     await manager.getRepository(UploadEntity).update(
       { id: upload.id },
@@ -78,6 +82,7 @@ export async function importUpload(data: ImportReadingsJobData, onProgress: (fra
     const marked = await markReadingsUploaded(data.orgId, data.testId, { id: data.actorId }, { uploadId: upload.id, manager });
     return marked.analysisJobId;
   });
+  await progressWritten;
   return { kind: 'imported', readingCount: readings.count, incrementCount: readings.incrementCount, analysisJobId, notes: summariseNotes(notes, noteCount) };
 }
 

@@ -145,7 +145,7 @@ describe('the mapping step and import profiles', () => {
     const { testId } = await draftTest(orgId, technicianId);
     const { upload, job } = await uploadAndWait(technician, orgId, testId, fixture('bench-logger.xlsx'), 'logger.xlsx');
     expect(job).toMatchObject({ state: 'succeeded', result: { needsMapping: true } });
-    expect(job.message).toContain('choose which column holds what');
+    expect(job.message).toContain('check the mapping guessed below');
     expect(await readingCount(testId)).toBe(0);
 
     const preview = (await technician.get(`/api/orgs/${orgId}/uploads/${upload.id}/preview`).expect(200)).body as UploadPreview;

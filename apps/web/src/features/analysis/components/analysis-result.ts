@@ -41,6 +41,8 @@ export type AnalysisIncrement = {
   stressKpa: number;
   kind: 'loading' | 'unloading' | 'reloading';
   readingCount: number;
+  /** Why the reviewer left this increment out of the analysis; null (or absent in older results) when it is in. */
+  excludedReason?: string | null;
   strainEnd: number;
   voidRatioEnd: number;
   mvPerMPa: number | null;
@@ -96,5 +98,7 @@ export type AnalysisResult = {
   overconsolidationRatio: number | null;
   sampleQuality: { voidRatioChangeRatio: number; category: string | null } | null;
   picksApplied: readonly { target: string; incrementIndex: number | null; applied: boolean }[];
+  /** Increments left out of the analysis, with the reason (absent in results from before it existed). */
+  excludedIncrements?: readonly { index: number; stressKpa: number; reason: string }[];
   warnings: readonly AnalysisWarning[];
 };
