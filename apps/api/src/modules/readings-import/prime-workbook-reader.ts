@@ -3,6 +3,9 @@ import { zipEntry } from './zip-entry.js';
 
 /** What exceljs 4.4's streaming WorkbookReader parses from the workbook's small parts (its own methods). */
 interface WorkbookReaderParts {
+  workbookRels?: unknown;
+  model?: unknown;
+  sharedStrings?: unknown;
   _parseRels(entry: Readable): Promise<void>;
   _parseWorkbook(entry: Readable): Promise<void>;
   _parseStyles(entry: Readable): Promise<void>;
@@ -32,12 +35,20 @@ export async function primeWorkbookReader(reader: unknown, bytes: Buffer): Promi
       return null;
     }
   };
-  const rels = part('xl/_rels/workbook.xml.rels');
-  if (rels) await parts._parseRels(rels);
-  const workbook = part('xl/workbook.xml');
-  if (workbook) await parts._parseWorkbook(workbook);
-  const styles = part('xl/styles.xml');
-  if (styles) await parts._parseStyles(styles);
-  const strings = part('xl/sharedStrings.xml', MAX_SHARED_STRINGS_BYTES);
-  if (strings) for await (const _string of parts._parseSharedStrings(strings)) void _string;
+  try {
+    const rels = part('xl/_rels/workbook.xml.rels');
+    if (rels) await parts._parseRels(rels);
+    const workbook = part('xl/workbook.xml');
+    if (workbook) await parts._parseWorkbook(workbook);
+    const styles = part('xl/styles.xml');
+    if (styles) await parts._parseStyles(styles);
+    const strings = part('xl/sharedStrings.xml', MAX_SHARED_STRINGS_BYTES);
+    if (strings) for await (const _string of parts._parseSharedStrings(strings)) void _string;
+  } catch {
+    // A damaged part: forget what was primed and let the streaming reader meet the file as it
+    // is (the parse thread's deadline stops it if it never settles).
+    parts.workbookRels = undefined;
+    parts.model = undefined;
+    parts.sharedStrings = undefined;
+  }
 }
