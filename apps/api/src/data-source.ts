@@ -21,12 +21,18 @@ import { SoilRecordEntity } from './modules/soil-records/soil-record.entity.js';
 import { ImportProfileEntity } from './modules/import-profiles/import-profile.entity.js';
 import { ReadingEntity } from './modules/readings/reading.entity.js';
 import { UploadEntity } from './modules/uploads/upload.entity.js';
+import { SessionEntity } from './modules/sessions/session.entity.js';
+import { SignUpRequestEntity } from './modules/auth/sign-up-request.entity.js';
+import { TestContributionEntity } from './modules/consolidation-tests/test-contribution.entity.js';
 import { Init1796179339734 } from './migrations/1796179339734-init.js';
 import { LabRecords1796180920952 } from './migrations/1796180920952-lab-records.js';
 import { ReadingsImport1796181181337 } from './migrations/1796181181337-readings-import.js';
 import { ReadingsOneForeignKey1796181664432 } from './migrations/1796181664432-readings-one-foreign-key.js';
 import { MembershipRoles1796313749156 } from './migrations/1796313749156-membership-roles.js';
-import { ImportNotesAndSheets1796318895187 } from './migrations/1796318895187-import-notes-and-sheets.js';
+import { SessionsAndRateLimits1796317586769 } from './migrations/1796317586769-sessions-and-rate-limits.js';
+import { SignUpRequests1796318744210 } from './migrations/1796318744210-sign-up-requests.js';
+import { TestContributions1796320068018 } from './migrations/1796320068018-test-contributions.js';
+import { ImportNotesAndSheets1796323849735 } from './migrations/1796323849735-import-notes-and-sheets.js';
 
 /**
  * The one DataSource (the TypeORM CLI requires exactly one export here). Entities and
@@ -39,8 +45,9 @@ export const dataSource = new DataSource({
   entities: [UserEntity, OrganisationEntity, MembershipEntity, InvitationEntity, PasswordResetTokenEntity, AuditEntryEntity,
     ProjectEntity, ProjectMemberEntity, BoreholeEntity, SampleEntity, ConsolidationTestEntity, AnalysisEntity, ReviewEventEntity,
     SoilRecordEntity, SoilRecordVersionEntity, SoilRecordSupersessionEntity, JobRunEntity,
-    UploadEntity, ReadingEntity, ImportProfileEntity],
-  migrations: [Init1796179339734, LabRecords1796180920952, ReadingsImport1796181181337, ReadingsOneForeignKey1796181664432, MembershipRoles1796313749156, ImportNotesAndSheets1796318895187],
+    UploadEntity, ReadingEntity, ImportProfileEntity, SessionEntity, SignUpRequestEntity, TestContributionEntity],
+  migrations: [Init1796179339734, LabRecords1796180920952, ReadingsImport1796181181337, ReadingsOneForeignKey1796181664432, MembershipRoles1796313749156,
+    SessionsAndRateLimits1796317586769, SignUpRequests1796318744210, TestContributions1796320068018, ImportNotesAndSheets1796323849735],
   // gen_random_uuid() is built into PostgreSQL 13+, so no extension is needed on a managed server.
   uuidExtension: 'pgcrypto',
   synchronize: false,

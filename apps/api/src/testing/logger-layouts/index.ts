@@ -1,6 +1,5 @@
 import { FRENCH_CLOCK_CSV, GERMAN_CSV, INCH_DIAL_CSV, ITALIAN_REPEATS_CSV, RUNNING_CLOCK_CSV } from './csv-layouts.js';
 import type { LoggerLayout } from './layout-types.js';
-import { SWELLING_FIRST_CSV } from './swelling-layout.js';
 import { PORTUGUESE_DATES_XLSX, SHEET_PER_INCREMENT_XLSX, SPANISH_TIME_CELLS_XLSX, TITLE_ROWS_XLSX } from './xlsx-layouts.js';
 
 export type { LayoutSpecimen, LayoutTruth, LoggerLayout } from './layout-types.js';

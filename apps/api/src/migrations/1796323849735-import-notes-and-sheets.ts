@@ -7,8 +7,8 @@ import type { MigrationInterface, QueryRunner } from 'typeorm';
  * Down fails while a test holds readings from more than one sheet (their row numbers repeat
  * under the old key): delete those readings first.
  */
-export class ImportNotesAndSheets1796318895187 implements MigrationInterface {
-  name = 'ImportNotesAndSheets1796318895187';
+export class ImportNotesAndSheets1796323849735 implements MigrationInterface {
+  name = 'ImportNotesAndSheets1796323849735';
 
   public async up(queryRunner: QueryRunner): Promise<void> {
     await queryRunner.query(`ALTER TABLE "uploads" ADD "notes" jsonb NOT NULL DEFAULT '[]'`);
