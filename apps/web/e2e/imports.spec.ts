@@ -1,4 +1,4 @@
-import { expect, test, type Page } from '@playwright/test';
+import { expect, test, type Browser, type Locator, type Page } from '@playwright/test';
 import { readFileSync } from 'node:fs';
 import path from 'node:path';
 import { FIXTURES, MANAGER, newProject, newTest, openPart, signedIn, TECHNICIAN, waitForStatus, type SpecimenEntry } from './support/lab';
@@ -18,20 +18,23 @@ async function expectCc(page: Page, expected: number): Promise<void> {
   expect(Math.abs(shown / expected - 1)).toBeLessThan(0.01);
 }
 
-test('a technician imports a French logger file with a title above its names by confirming the guessed mapping, after trying another header row', async ({ browser }) => {
-  test.setTimeout(150_000);
+/** A project (by the lab manager) and a test with the layout's specimen typed in (by the technician), the file uploaded: the mapping form. */
+async function uploadedLayout(browser: Browser, file: string, projectName: string, suffix: string): Promise<{ page: Page; mapping: Locator }> {
   const manager = await signedIn(browser, MANAGER);
-  const orgId = manager.orgId;
-  const projectName = `Quarry Lane Cutting ${unique}`;
-  await newProject(manager.page, orgId, projectName, `QL-${unique}`);
+  await newProject(manager.page, manager.orgId, projectName, `P-${suffix}`);
   const { page } = await signedIn(browser, TECHNICIAN);
-  const file = 'essai-hhmmss.csv';
-  await newTest(page, orgId, projectName, `${unique}f`, truth[file]?.specimen);
+  await newTest(page, manager.orgId, projectName, suffix, truth[file]?.specimen);
   await openPart(page, 'Readings');
   await page.getByLabel('Readings file to upload (CSV or XLSX)').setInputFiles(path.join(LAYOUTS, file));
-
   const mapping = page.getByRole('form', { name: "Map the file's columns" });
   await expect(mapping).toBeVisible({ timeout: 45_000 });
+  return { page, mapping };
+}
+
+test('a technician imports a French logger file with a title above its names by confirming the guessed mapping, after trying another header row', async ({ browser }) => {
+  test.setTimeout(150_000);
+  const file = 'essai-hhmmss.csv';
+  const { page, mapping } = await uploadedLayout(browser, file, `Quarry Lane Cutting ${unique}`, `${unique}f`);
   // Row 3 holds the names (a title and a blank line above); every setting is guessed.
   await expect(mapping.getByLabel('Row of the column names')).toHaveValue('3');
   await expect(mapping.getByLabel('Time column')).toHaveValue('Temps (hh:mm:ss)');
@@ -59,18 +62,8 @@ test('a technician imports a French logger file with a title above its names by 
 
 test('a technician corrects the one wrong guess (a gauge direction read from a swelling first load) and imports', async ({ browser }) => {
   test.setTimeout(150_000);
-  const manager = await signedIn(browser, MANAGER);
-  const orgId = manager.orgId;
-  const projectName = `Saltmarsh Relief Road ${unique}`;
-  await newProject(manager.page, orgId, projectName, `SR-${unique}`);
-  const { page } = await signedIn(browser, TECHNICIAN);
   const file = 'swelling-first-load.csv';
-  await newTest(page, orgId, projectName, `${unique}s`, truth[file]?.specimen);
-  await openPart(page, 'Readings');
-  await page.getByLabel('Readings file to upload (CSV or XLSX)').setInputFiles(path.join(LAYOUTS, file));
-
-  const mapping = page.getByRole('form', { name: "Map the file's columns" });
-  await expect(mapping).toBeVisible({ timeout: 45_000 });
+  const { page, mapping } = await uploadedLayout(browser, file, `Saltmarsh Relief Road ${unique}`, `${unique}s`);
   await expect(mapping.getByLabel('The deformation column holds')).toHaveValue('dial');
   await expect(mapping.getByLabel('One division')).toHaveValue('1');
   // The guess says "rises", from a first increment that swells: the trial shows the specimen compressing.

@@ -1,10 +1,9 @@
 import { convertUnit } from '@porestack/geo-core';
-import type { LoggerLayout } from './layout-types.js';
+import { BASE_MAPPING, type LoggerLayout } from './layout-types.js';
 import { LAYOUT_CLAYS, layoutTest, LOGGER_DAY_MIN } from './layout-clays.js';
 import { hms, layoutReadings, written } from './layout-values.js';
 
 const lines = (rows: readonly string[]): Buffer => Buffer.from(`${rows.join('\r\n')}\r\n`, 'utf8');
-const BASE = { decimalSeparator: '.', headerRow: 1, sheets: 'first', stressFrom: 'column', time: { format: 'number', origin: 'increment', dateOrder: 'dmy' } } as const;
 
 /** German logger: semicolons, decimal commas, kgf/cm², seconds, settlement in mm. */
 const german = layoutTest(LAYOUT_CLAYS.germanCsv, LOGGER_DAY_MIN);
@@ -13,7 +12,7 @@ export const GERMAN_CSV: LoggerLayout = {
   traits: 'semicolons, decimal commas, German headers, kgf/cm² and seconds in brackets',
   specimen: german.specimen,
   truth: german.truth,
-  mapping: { ...BASE, delimiter: ';', decimalSeparator: ',', columns: { increment: 'Laststufe', stress: 'Spannung [kgf/cm²]', elapsedTime: 'Zeit [s]', deformation: 'Setzung [mm]' }, units: { stress: 'kgfPerCm2', time: 's', deformation: 'mm' }, deformationReading: { kind: 'deformation' } },
+  mapping: { ...BASE_MAPPING, delimiter: ';', decimalSeparator: ',', columns: { increment: 'Laststufe', stress: 'Spannung [kgf/cm²]', elapsedTime: 'Zeit [s]', deformation: 'Setzung [mm]' }, units: { stress: 'kgfPerCm2', time: 's', deformation: 'mm' }, deformationReading: { kind: 'deformation' } },
   bytes: async () =>
     lines([
       'Laststufe;Spannung [kgf/cm²];Zeit [s];Setzung [mm]',
@@ -29,7 +28,7 @@ export const INCH_DIAL_CSV: LoggerLayout = {
   traits: 'tsf, hours, a dial in inches that falls as the specimen compresses, no increment column',
   specimen: inches.specimen,
   truth: inches.truth,
-  mapping: { ...BASE, delimiter: ',', columns: { increment: null, stress: 'Pressure (tsf)', elapsedTime: 'Elapsed (h)', deformation: 'Dial (in)' }, units: { stress: 'tsf', time: 'h', deformation: 'in' }, deformationReading: { kind: 'dial', divisionSize: 1, increasesWithCompression: false } },
+  mapping: { ...BASE_MAPPING, delimiter: ',', columns: { increment: null, stress: 'Pressure (tsf)', elapsedTime: 'Elapsed (h)', deformation: 'Dial (in)' }, units: { stress: 'tsf', time: 'h', deformation: 'in' }, deformationReading: { kind: 'dial', divisionSize: 1, increasesWithCompression: false } },
   bytes: async () =>
     lines([
       'Pressure (tsf),Elapsed (h),Dial (in)',
@@ -44,7 +43,7 @@ export const FRENCH_CLOCK_CSV: LoggerLayout = {
   traits: 'a title row and a blank row above the names, decimal commas, French headers, times as h:mm:ss',
   specimen: french.specimen,
   truth: french.truth,
-  mapping: { ...BASE, delimiter: ';', decimalSeparator: ',', headerRow: 3, columns: { increment: 'Palier', stress: 'Contrainte (kPa)', elapsedTime: 'Temps (hh:mm:ss)', deformation: 'Tassement (mm)' }, units: { stress: 'kPa', time: 'min', deformation: 'mm' }, time: { format: 'duration', origin: 'increment', dateOrder: 'dmy' }, deformationReading: { kind: 'deformation' } },
+  mapping: { ...BASE_MAPPING, delimiter: ';', decimalSeparator: ',', headerRow: 3, columns: { increment: 'Palier', stress: 'Contrainte (kPa)', elapsedTime: 'Temps (hh:mm:ss)', deformation: 'Tassement (mm)' }, units: { stress: 'kPa', time: 'min', deformation: 'mm' }, time: { format: 'duration', origin: 'increment', dateOrder: 'dmy' }, deformationReading: { kind: 'deformation' } },
   bytes: async () =>
     lines([
       'Essai oedométrique – cellule 2 – éprouvette inventée',
@@ -69,7 +68,7 @@ export const ITALIAN_REPEATS_CSV: LoggerLayout = {
   traits: 'extra columns (counter, date, clock, temperature, notes), decimal commas, Italian headers, repeated rows and repeated times',
   specimen: italian.specimen,
   truth: italian.truth,
-  mapping: { ...BASE, delimiter: ';', decimalSeparator: ',', columns: { increment: 'Gradino', stress: 'Carico (kPa)', elapsedTime: 'Tempo trascorso (s)', deformation: 'Cedimento (mm)' }, units: { stress: 'kPa', time: 's', deformation: 'mm' }, deformationReading: { kind: 'deformation' } },
+  mapping: { ...BASE_MAPPING, delimiter: ';', decimalSeparator: ',', columns: { increment: 'Gradino', stress: 'Carico (kPa)', elapsedTime: 'Tempo trascorso (s)', deformation: 'Cedimento (mm)' }, units: { stress: 'kPa', time: 's', deformation: 'mm' }, deformationReading: { kind: 'deformation' } },
   bytes: async () => {
     const start = Date.UTC(2024, 2, 4, 9, 0, 0);
     const rows: string[] = ['N.;Data;Ora;Gradino;Carico (kPa);Tempo trascorso (s);Cedimento (mm);Temperatura (°C);Note'];
@@ -97,7 +96,7 @@ export const RUNNING_CLOCK_CSV: LoggerLayout = {
   traits: 'time counted from the start of the test (hours), psi, an LVDT displacement',
   specimen: running.specimen,
   truth: running.truth,
-  mapping: { ...BASE, delimiter: ',', columns: { increment: 'Step', stress: 'Load (psi)', elapsedTime: 'Time since start (h)', deformation: 'Displacement (mm)' }, units: { stress: 'psi', time: 'h', deformation: 'mm' }, time: { format: 'number', origin: 'test', dateOrder: 'dmy' }, deformationReading: { kind: 'deformation' } },
+  mapping: { ...BASE_MAPPING, delimiter: ',', columns: { increment: 'Step', stress: 'Load (psi)', elapsedTime: 'Time since start (h)', deformation: 'Displacement (mm)' }, units: { stress: 'psi', time: 'h', deformation: 'mm' }, time: { format: 'number', origin: 'test', dateOrder: 'dmy' }, deformationReading: { kind: 'deformation' } },
   bytes: async () =>
     lines([
       'Step,Load (psi),Time since start (h),Displacement (mm)',

@@ -34,3 +34,6 @@ export interface LoggerLayout {
   /** The mapping a technician reading the file would set: what the guess has to reach. */
   readonly mapping: ImportMapping;
 }
+
+/** What most layouts share: the first sheet, the stress in a column, times as numbers from each increment's start. */
+export const BASE_MAPPING = { decimalSeparator: '.', headerRow: 1, sheets: 'first', stressFrom: 'column', time: { format: 'number', origin: 'increment', dateOrder: 'dmy' } } as const;

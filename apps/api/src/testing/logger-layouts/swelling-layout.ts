@@ -1,4 +1,4 @@
-import type { LoggerLayout, LayoutTruth } from './layout-types.js';
+import { BASE_MAPPING, type LayoutTruth, type LoggerLayout } from './layout-types.js';
 import { logSpacedReadingTimesMin } from '@porestack/geo-core';
 import { LAYOUT_CLAYS, layoutTest } from './layout-clays.js';
 import { layoutReadings, written } from './layout-values.js';
@@ -35,14 +35,10 @@ export const SWELLING_FIRST_CSV: LoggerLayout = {
   specimen: base.specimen,
   truth,
   mapping: {
-    decimalSeparator: '.',
-    headerRow: 1,
-    sheets: 'first',
-    stressFrom: 'column',
+    ...BASE_MAPPING,
     delimiter: ',',
     columns: { increment: 'Stage', stress: 'Stress (kPa)', elapsedTime: 'Time (min)', deformation: 'Gauge (mm)' },
     units: { stress: 'kPa', time: 'min', deformation: 'mm' },
-    time: { format: 'number', origin: 'increment', dateOrder: 'dmy' },
     deformationReading: { kind: 'dial', divisionSize: 1, increasesWithCompression: false },
   },
   bytes: async () =>

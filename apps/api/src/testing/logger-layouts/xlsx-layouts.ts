@@ -1,9 +1,8 @@
 import ExcelJS from 'exceljs';
-import type { LoggerLayout } from './layout-types.js';
+import { BASE_MAPPING, type LoggerLayout } from './layout-types.js';
 import { LAYOUT_CLAYS, layoutTest, LOGGER_DAY_MIN } from './layout-clays.js';
 import { excelDays, layoutReadings } from './layout-values.js';
 
-const BASE = { decimalSeparator: '.', headerRow: 1, sheets: 'first', stressFrom: 'column', time: { format: 'number', origin: 'increment', dateOrder: 'dmy' } } as const;
 const round = (value: number, digits: number) => Number(value.toFixed(digits));
 
 async function bookBytes(book: ExcelJS.Workbook): Promise<Buffer> {
@@ -17,7 +16,7 @@ export const TITLE_ROWS_XLSX: LoggerLayout = {
   traits: 'three title rows and a blank row above the names, an extra temperature column',
   specimen: titled.specimen,
   truth: titled.truth,
-  mapping: { ...BASE, headerRow: 5, columns: { increment: 'Increment', stress: 'Vertical stress (kPa)', elapsedTime: 'Elapsed time (min)', deformation: 'Settlement (mm)' }, units: { stress: 'kPa', time: 'min', deformation: 'mm' }, deformationReading: { kind: 'deformation' } },
+  mapping: { ...BASE_MAPPING, headerRow: 5, columns: { increment: 'Increment', stress: 'Vertical stress (kPa)', elapsedTime: 'Elapsed time (min)', deformation: 'Settlement (mm)' }, units: { stress: 'kPa', time: 'min', deformation: 'mm' }, deformationReading: { kind: 'deformation' } },
   bytes: async () => {
     const book = new ExcelJS.Workbook();
     const sheet = book.addWorksheet('Log');
@@ -38,7 +37,7 @@ export const SHEET_PER_INCREMENT_XLSX: LoggerLayout = {
   traits: 'one sheet per increment named "Step n – σ kPa", no stress column, a specimen sheet',
   specimen: perSheet.specimen,
   truth: perSheet.truth,
-  mapping: { ...BASE, sheets: 'each', stressFrom: 'sheetName', columns: { increment: null, stress: null, elapsedTime: 'Time (min)', deformation: 'Deformation (mm)' }, units: { stress: 'kPa', time: 'min', deformation: 'mm' }, deformationReading: { kind: 'deformation' } },
+  mapping: { ...BASE_MAPPING, sheets: 'each', stressFrom: 'sheetName', columns: { increment: null, stress: null, elapsedTime: 'Time (min)', deformation: 'Deformation (mm)' }, units: { stress: 'kPa', time: 'min', deformation: 'mm' }, deformationReading: { kind: 'deformation' } },
   bytes: async () => {
     const book = new ExcelJS.Workbook();
     const specimen = book.addWorksheet('specimen');
@@ -61,7 +60,7 @@ export const SPANISH_TIME_CELLS_XLSX: LoggerLayout = {
   traits: 'time in spreadsheet time cells ([h]:mm:ss), Spanish headers, a dial in 0.01 mm divisions rising with compression',
   specimen: spanish.specimen,
   truth: spanish.truth,
-  mapping: { ...BASE, columns: { increment: 'Escalón', stress: 'Presión [kPa]', elapsedTime: 'Tiempo', deformation: 'Lectura [0,01 mm]' }, units: { stress: 'kPa', time: 'min', deformation: 'mm' }, time: { format: 'duration', origin: 'increment', dateOrder: 'dmy' }, deformationReading: { kind: 'dial', divisionSize: 0.01, increasesWithCompression: true } },
+  mapping: { ...BASE_MAPPING, columns: { increment: 'Escalón', stress: 'Presión [kPa]', elapsedTime: 'Tiempo', deformation: 'Lectura [0,01 mm]' }, units: { stress: 'kPa', time: 'min', deformation: 'mm' }, time: { format: 'duration', origin: 'increment', dateOrder: 'dmy' }, deformationReading: { kind: 'dial', divisionSize: 0.01, increasesWithCompression: true } },
   bytes: async () => {
     const book = new ExcelJS.Workbook();
     const sheet = book.addWorksheet('Lecturas');
@@ -79,7 +78,7 @@ export const PORTUGUESE_DATES_XLSX: LoggerLayout = {
   traits: 'date-time cells of the logger’s clock instead of elapsed time, Portuguese headers',
   specimen: portuguese.specimen,
   truth: portuguese.truth,
-  mapping: { ...BASE, columns: { increment: 'Estágio', stress: 'Tensão (kPa)', elapsedTime: 'Data/hora', deformation: 'Recalque (mm)' }, units: { stress: 'kPa', time: 'min', deformation: 'mm' }, time: { format: 'datetime', origin: 'test', dateOrder: 'dmy' }, deformationReading: { kind: 'deformation' } },
+  mapping: { ...BASE_MAPPING, columns: { increment: 'Estágio', stress: 'Tensão (kPa)', elapsedTime: 'Data/hora', deformation: 'Recalque (mm)' }, units: { stress: 'kPa', time: 'min', deformation: 'mm' }, time: { format: 'datetime', origin: 'test', dateOrder: 'dmy' }, deformationReading: { kind: 'deformation' } },
   bytes: async () => {
     const book = new ExcelJS.Workbook();
     const sheet = book.addWorksheet('Leituras');

@@ -178,6 +178,19 @@ describe('the mapping step and import profiles', () => {
     expect(await readingCount(testId)).toBe(150);
   });
 
+  it('when a saved profile maps columns the file has, then the preview starts from the profile, not a guess; asked for another header row, from the guess', async () => {
+    await technician.post(`/api/orgs/${orgId}/import-profiles`, { name: 'Bench logger (profile test)', mapping: LOGGER_MAPPING }).expect(201);
+    const { testId } = await draftTest(orgId, technicianId);
+    const { upload } = await uploadAndWait(technician, orgId, testId, fixture('bench-logger.csv'), 'logger.csv');
+    const preview = (await technician.get(`/api/orgs/${orgId}/uploads/${upload.id}/preview`).expect(200)).body as UploadPreview;
+    expect(preview.suggestion).toMatchObject({ source: 'profile', open: [], mapping: LOGGER_MAPPING });
+    expect(preview.suggestion.profile?.name).toEqual(expect.any(String));
+    const other = (await technician.get(`/api/orgs/${orgId}/uploads/${upload.id}/preview?headerRow=2`).expect(200)).body as UploadPreview;
+    expect(other.suggestion.source).toBe('guess');
+    expect(other.headerRow).toBe(2);
+    expect(other.columns).toEqual(['1', '0.127465', '0', '5000']);
+  });
+
   it('when a profile name is taken (in any case), then 409 names it', async () => {
     await technician.post(`/api/orgs/${orgId}/import-profiles`, { name: 'Frame 7', mapping: LOGGER_MAPPING }).expect(201);
     const res = await technician.post(`/api/orgs/${orgId}/import-profiles`, { name: 'frame 7', mapping: LOGGER_MAPPING }).expect(409);
