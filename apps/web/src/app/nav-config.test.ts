@@ -15,8 +15,8 @@ describe('navItemsFor(roles)', () => {
     expect(navItemsFor(['lab_manager']).map((item) => item.label)).toEqual(['Home', 'Projects', 'Tests', 'Review queue', 'Soil records']);
   });
 
-  it.each(['designer', 'client'] as const)('gives a %s the soil records only', (role) => {
-    expect(navItemsFor([role]).map((item) => item.label)).toEqual(['Home', 'Soil records']);
+  it.each(['designer', 'client'] as const)('gives a %s their projects and the soil records', (role) => {
+    expect(navItemsFor([role]).map((item) => item.label)).toEqual(['Home', 'Projects', 'Soil records']);
   });
 
   it('gives an administrator who is also lab manager every page, each once, in order', () => {

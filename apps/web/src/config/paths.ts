@@ -26,6 +26,11 @@ export const paths = {
     soilRecords: { pattern: 'soil-records', to: (orgId: string) => `/orgs/${orgId}/soil-records` },
     /** `?version=n` opens one version; without it, the current one. */
     soilRecord: { pattern: 'soil-records/:recordId', to: (orgId: string, recordId: string) => `/orgs/${orgId}/soil-records/${recordId}` },
+    /** One approved version as issued: the test summary every reader of the project may open. */
+    issuedTest: {
+      pattern: 'soil-records/:recordId/versions/:version',
+      to: (orgId: string, recordId: string, version: number) => `/orgs/${orgId}/soil-records/${recordId}/versions/${version}`,
+    },
   },
 } as const;
 
@@ -74,4 +79,17 @@ export const apiPaths = {
   soilRecords: (orgId: string) => `/api/orgs/${orgId}/soil-records`,
   soilRecord: (orgId: string, recordId: string) => `/api/orgs/${orgId}/soil-records/${recordId}`,
   soilRecordVersion: (orgId: string, recordId: string, version: number) => `/api/orgs/${orgId}/soil-records/${recordId}/versions/${version}`,
+  issuedTestSummary: (orgId: string, recordId: string, version: number) => `/api/orgs/${orgId}/soil-records/${recordId}/versions/${version}/summary`,
+  projectResults: (orgId: string, projectId: string) => `/api/orgs/${orgId}/projects/${projectId}/results`,
+  projectClients: (orgId: string, projectId: string) => `/api/orgs/${orgId}/projects/${projectId}/clients`,
+  projectClient: (orgId: string, projectId: string, userId: string) => `/api/orgs/${orgId}/projects/${projectId}/clients/${userId}`,
+  projectClientInvitation: (orgId: string, projectId: string, invitationId: string) => `/api/orgs/${orgId}/projects/${projectId}/client-invitations/${invitationId}`,
+  home: (orgId: string) => `/api/orgs/${orgId}/home`,
+  reportSettings: (orgId: string) => `/api/orgs/${orgId}/report-settings`,
+  versionReport: (orgId: string, recordId: string, version: number) => `/api/orgs/${orgId}/soil-records/${recordId}/versions/${version}/report`,
+  versionReportPdf: (orgId: string, recordId: string, version: number) => `/api/orgs/${orgId}/soil-records/${recordId}/versions/${version}/report/pdf`,
+  versionReportRetry: (orgId: string, recordId: string, version: number) => `/api/orgs/${orgId}/soil-records/${recordId}/versions/${version}/report/retry`,
+  versionDataXlsx: (orgId: string, recordId: string, version: number) => `/api/orgs/${orgId}/soil-records/${recordId}/versions/${version}/data.xlsx`,
+  testDataXlsx: (orgId: string, testId: string) => `/api/orgs/${orgId}/tests/${testId}/data.xlsx`,
+  projectParametersXlsx: (orgId: string, projectId: string) => `/api/orgs/${orgId}/projects/${projectId}/parameters.xlsx`,
 } as const;
