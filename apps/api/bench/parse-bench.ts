@@ -51,7 +51,7 @@ async function measure(label: string, task: ParseTask): Promise<void> {
   try {
     // The bytes move to the thread: give it a copy, the same file is read again below.
     const result = await parseOffThread({ ...task, bytes: Uint8Array.from(task.bytes) }, deadline(task));
-    outcome = result.kind === 'readings' ? `${result.readings.count.toLocaleString('en-GB')} readings` : result.kind === 'preview' ? `preview of ${result.table.rows.length} rows` : result.kind;
+    outcome = result.kind === 'readings' ? `${result.readings.count.toLocaleString('en-GB')} readings` : result.kind === 'preview' ? `preview of ${result.table.sheets.reduce((sum, sheet) => sum + sheet.rows.length, 0)} rows` : result.kind;
   } catch (error) {
     outcome = error instanceof ImportProblem ? `refused: ${error.message.slice(0, 90)}…` : `ERROR ${String(error)}`;
   }

@@ -37,6 +37,7 @@ import { SessionsAndRateLimits1796317586769 } from './migrations/1796317586769-s
 import { SignUpRequests1796318744210 } from './migrations/1796318744210-sign-up-requests.js';
 import { TestContributions1796320068018 } from './migrations/1796320068018-test-contributions.js';
 import { ClientSharing1796322759129 } from './migrations/1796322759129-client-sharing.js';
+import { ImportNotesAndSheets1796323849735 } from './migrations/1796323849735-import-notes-and-sheets.js';
 import { RowLevelSecurity1796324847360 } from './migrations/1796324847360-row-level-security.js';
 
 /**
@@ -55,7 +56,7 @@ export const dataSource = new DataSource({
     UploadEntity, ReadingEntity, ImportProfileEntity, IssuedReportEntity, SessionEntity, SignUpRequestEntity, TestContributionEntity, InvitationProjectEntity],
   migrations: [Init1796179339734, LabRecords1796180920952, ReadingsImport1796181181337, ReadingsOneForeignKey1796181664432, MembershipRoles1796313749156,
     IssuedReports1796313882857, SessionsAndRateLimits1796317586769, SignUpRequests1796318744210, TestContributions1796320068018,
-    ClientSharing1796322759129, RowLevelSecurity1796324847360],
+    ClientSharing1796322759129, ImportNotesAndSheets1796323849735, RowLevelSecurity1796324847360],
   // gen_random_uuid() is built into PostgreSQL 13+, so no extension is needed on a managed server.
   uuidExtension: 'pgcrypto',
   synchronize: false,

@@ -1,62 +1,12 @@
-import { expect, test, type Browser, type Page } from '@playwright/test';
+import { expect, test } from '@playwright/test';
 import { createHash } from 'node:crypto';
 import path from 'node:path';
-import { fileURLToPath } from 'node:url';
 import { downloadFrom } from './support/downloads';
+import { DESIGNER, FIXTURES as fixtures, MANAGER, newTest, openPart, signedIn, TECHNICIAN, waitForStatus } from './support/lab';
 import { linkFromMail } from './support/mail';
-import { signIn } from './support/people';
 
 // The whole lab flow on the seeded demo organisation, in the real API, worker, S3 fake and mail fake.
-const PASSWORD = 'porestack-demo';
-const TECHNICIAN = 'technician@demo.porestack.test';
-const MANAGER = 'lab-manager@demo.porestack.test';
-const DESIGNER = 'designer@demo.porestack.test';
-const fixtures = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '../../../fixtures/readings');
 const unique = Date.now().toString(36);
-
-async function signedIn(browser: Browser, email: string): Promise<{ page: Page; orgId: string }> {
-  const context = await browser.newContext({ viewport: { width: 1400, height: 900 } });
-  const page = await context.newPage();
-  await signIn(page, email, PASSWORD);
-  await page.waitForURL(/\/orgs\/[^/]+/);
-  const orgId = /\/orgs\/([^/?]+)/.exec(page.url())?.[1];
-  if (!orgId) throw new Error(`After signing in ${email} the page is ${page.url()}.`);
-  return { page, orgId };
-}
-
-async function newTest(page: Page, orgId: string, projectName: string, suffix: string): Promise<void> {
-  await page.goto(`/orgs/${orgId}/projects`);
-  await page.getByRole('link', { name: projectName }).click();
-  const borehole = `BH-${suffix}`;
-  await page.getByRole('button', { name: 'New borehole' }).click();
-  await page.getByLabel('Borehole name').fill(borehole);
-  await page.getByLabel('Water table depth (m)').fill('1.5');
-  await page.getByRole('button', { name: 'Add borehole' }).click();
-  const section = page.getByRole('region', { name: `Borehole ${borehole}` });
-  await section.getByRole('button', { name: `New sample in ${borehole}` }).click();
-  await section.getByLabel('Sample reference').fill(`U-${suffix}`);
-  await section.getByLabel('Top depth (m)').fill('6.0');
-  await section.getByLabel('Bottom depth (m)').fill('6.45');
-  await section.getByRole('button', { name: 'Add sample' }).click();
-  await section.getByRole('button', { name: `New test on U-${suffix}` }).click();
-  await section.getByRole('button', { name: 'Create test' }).click();
-  await expect(page.getByRole('heading', { level: 1, name: `Test U-${suffix}-OED` })).toBeVisible();
-  // The analysis needs the specimen's dry mass; the ring, Gs and drainage came from the defaults.
-  const setup = page.getByRole('form', { name: 'Specimen and apparatus' });
-  await setup.getByLabel('Dry mass (g)').fill('110.4');
-  await setup.getByLabel('Initial water content w0 (%)').fill('48');
-  await setup.getByRole('button', { name: 'Save specimen and apparatus' }).click();
-  await expect(page.getByText('Saved. Re-run the analysis to use the new values.')).toBeVisible();
-}
-
-async function openPart(page: Page, name: 'Set-up' | 'Readings' | 'Results' | 'Curves' | 'Review'): Promise<void> {
-  await page.getByRole('navigation', { name: 'Parts of the test' }).getByRole('link', { name }).click();
-  await expect(page.getByRole('navigation', { name: 'Parts of the test' }).getByRole('link', { name })).toHaveAttribute('aria-current', 'page');
-}
-
-async function waitForStatus(page: Page, word: string): Promise<void> {
-  await expect(page.locator('h1 + div').getByText(word, { exact: true })).toBeVisible({ timeout: 45_000 });
-}
 
 test('a technician uploads, maps, overrides a pick and submits; a lab manager approves; the version and the e-mails appear', async ({ browser }) => {
   test.setTimeout(300_000);

@@ -1,4 +1,6 @@
 import { expect, test, type Page } from '@playwright/test';
+import path from 'node:path';
+import { FIXTURES, MANAGER, newProject, newTest, signedIn, TECHNICIAN } from './support/lab';
 import { linkFromMail } from './support/mail';
 import { newPerson, signIn, signUp } from './support/people';
 
@@ -171,6 +173,58 @@ test('screenshots of the lab pages', async ({ browser }) => {
     await shot(page, 'lab-soil-record-narrow');
   }
   await context.close();
+});
+
+/** The import steps: a guessed mapping to confirm, the notes of an import, an increment left out of the analysis. */
+test('screenshots of the import steps', async ({ browser }) => {
+  test.setTimeout(240_000);
+  const unique = Date.now().toString(36);
+  const manager = await signedIn(browser, MANAGER);
+  const orgId = manager.orgId;
+  const projectName = `Ashcombe Sidings ${unique}`;
+  await newProject(manager.page, orgId, projectName, `AS-${unique}`);
+  const { page } = await signedIn(browser, TECHNICIAN);
+  const layouts = path.join(FIXTURES, 'layouts');
+
+  // One sheet per increment, stress in the sheet names: the mapping step as it opens.
+  await newTest(page, orgId, projectName, `${unique}w`);
+  await page.getByRole('navigation', { name: 'Parts of the test' }).getByRole('link', { name: 'Readings' }).click();
+  await page.getByLabel('Readings file to upload (CSV or XLSX)').setInputFiles(path.join(layouts, 'sheet-per-increment.xlsx'));
+  await expect(page.getByRole('table', { name: 'First increment as it will import' })).toBeVisible({ timeout: 45_000 });
+  await shot(page, 'import-mapping-sheets');
+  await page.setViewportSize({ width: 390, height: 800 });
+  await shot(page, 'import-mapping-sheets-narrow');
+  await page.setViewportSize({ width: 1400, height: 900 });
+
+  // A logger file with repeated rows and times: imported, with the notes listed.
+  await newTest(page, orgId, projectName, `${unique}r`);
+  await page.getByRole('navigation', { name: 'Parts of the test' }).getByRole('link', { name: 'Readings' }).click();
+  await page.getByLabel('Readings file to upload (CSV or XLSX)').setInputFiles(path.join(layouts, 'registratore-ripetizioni.csv'));
+  const mapping = page.getByRole('form', { name: "Map the file's columns" });
+  await expect(page.getByRole('table', { name: 'First increment as it will import' })).toBeVisible({ timeout: 45_000 });
+  await shot(page, 'import-mapping-repeats');
+  await mapping.getByRole('button', { name: 'Import with this mapping' }).click();
+  await expect(page.getByRole('table', { name: 'Rows the import dropped or replaced' })).toBeVisible({ timeout: 45_000 });
+  await shot(page, 'import-notes');
+
+  // An increment left out of the analysis, with its reason: the plots and the table mark it.
+  await expect(page.locator('h1 + div').getByText('Reduced', { exact: true })).toBeVisible({ timeout: 45_000 });
+  await page.getByRole('navigation', { name: 'Parts of the test' }).getByRole('link', { name: 'Curves' }).click();
+  await page.getByLabel('Increment', { exact: true }).selectOption('6');
+  const picks = page.getByRole('form', { name: 'Override picks' });
+  await picks.getByLabel('Leave increment 6 out of the analysis').check();
+  await picks.getByLabel('Why increment 6 is left out').fill('Drainage valve left shut overnight');
+  await picks.getByLabel('Reason for the override').fill('Increment 6 left out: drainage valve shut');
+  await picks.getByRole('button', { name: 'Save picks and re-run the analysis' }).click();
+  await expect(page.getByLabel('Increment', { exact: true }).locator('option', { hasText: '— left out' })).toHaveCount(1, { timeout: 45_000 });
+  await page.getByLabel('Increment', { exact: true }).selectOption('6');
+  await expect(page.getByText('Left out of the analysis: Drainage valve left shut overnight')).toBeVisible();
+  await expect(page.locator('[data-testid="plotly-chart"]:not(:has(.main-svg))')).toHaveCount(0, { timeout: 30_000 });
+  await page.waitForTimeout(500);
+  await shot(page, 'import-increment-left-out-curves');
+  await page.getByRole('navigation', { name: 'Parts of the test' }).getByRole('link', { name: 'Results' }).click();
+  await expect(page.getByRole('table', { name: 'Parameters of the whole test' })).toBeVisible();
+  await shot(page, 'import-increment-left-out-results');
 });
 
 /** Every role's home page, the client's pages and the sharing panel, wide and at 390 px, on the demo lab. */

@@ -10,6 +10,7 @@ export type {
   ConsolidationSpecimenInput,
   ConsolidationTestInput,
   Drainage,
+  IncrementExclusion,
   IncrementPicks,
 } from './lab/consolidation-test-input.js';
 export type {
@@ -18,6 +19,7 @@ export type {
   CompressionIndexFit,
   ConsolidationIncrementResult,
   ConsolidationTestResult,
+  ExcludedIncrement,
   RecompressionIndexFit,
   TaylorIncrementResult,
 } from './lab/consolidation-test-result.js';

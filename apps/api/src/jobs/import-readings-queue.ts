@@ -85,7 +85,7 @@ export const IMPORTS_PER_ORGANISATION = 2;
  * stopped) and does not count against its organisation's slots: longer than the slowest
  * parse of the largest file allowed (pg-boss retries the job itself after its expiry).
  */
-const STALE_RUNNING_MINUTES = 5;
+export const STALE_RUNNING_MINUTES = 5;
 
 /**
  * pg-boss picks the highest priority first, then the oldest. An import is sent at minus the

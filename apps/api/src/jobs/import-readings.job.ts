@@ -25,7 +25,7 @@ export async function importReadings(data: ImportReadingsJobData): Promise<void>
       await jobRuns.update(data.jobRunId, {
         state: 'succeeded',
         progress: 1,
-        message: 'The file is stored. Its columns are not the standard ones: choose which column holds what, then import.',
+        message: 'The file is stored. Its columns are not the standard ones: check the mapping guessed below (and choose what the file does not tell), then import.',
         result: { uploadId: data.uploadId, needsMapping: true },
       });
     } else if (outcome.kind === 'rejected') {
@@ -38,7 +38,7 @@ export async function importReadings(data: ImportReadingsJobData): Promise<void>
       await jobRuns.update(data.jobRunId, {
         state: 'succeeded',
         progress: 1,
-        message: `Imported ${outcome.readingCount.toLocaleString('en-GB')} readings in ${outcome.incrementCount} increments; the analysis is queued.`,
+        message: `Imported ${outcome.readingCount.toLocaleString('en-GB')} readings in ${outcome.incrementCount} increments; the analysis is queued.${outcome.notes ? ` ${outcome.notes}` : ''}`,
         result: { uploadId: data.uploadId, importedReadings: outcome.readingCount, increments: outcome.incrementCount, analysisJobId: outcome.analysisJobId },
       });
     }

@@ -46,6 +46,7 @@ export interface FixtureOptions {
   designerIds?: string[];
   /** Another test on this sample (of an earlier fixture) instead of a new project, borehole and sample. */
   onSampleOf?: LabFixture;
+  specimen?: { initialHeightMm: number; diameterMm: number; specificGravity: number; dryMassG: number; drainage: 'double' | 'single' };
 }
 
 /** Project → borehole → sample → draft test, through the services (as the routes would). */
@@ -53,7 +54,8 @@ export async function draftTest(orgId: string, technicianId: string, options: Fi
   counter += 1;
   const tag = `${Date.now().toString(36)}-${counter}`;
   const actor = { id: technicianId };
-  const { dryMassG } = KNOWN_TEST;
+  const specimen = options.specimen ?? { initialHeightMm: KNOWN_SOIL.initialHeightMm, diameterMm: KNOWN_SOIL.diameterMm, specificGravity: KNOWN_SOIL.specificGravity, dryMassG: KNOWN_TEST.dryMassG, drainage: KNOWN_SOIL.drainage };
+  const { dryMassG } = specimen;
   let place = options.onSampleOf;
   if (!place) {
     const project = await createProject(orgId, { name: `Fixture project ${tag}`, reference: `FX-${tag}`, clientName: 'Fixture client', siteName: '', designerIds: options.designerIds ?? [] }, actor);
@@ -66,7 +68,7 @@ export async function draftTest(orgId: string, technicianId: string, options: Fi
     place.sampleId,
     {
       reference: `T-${tag}`,
-      specimen: { initialHeightMm: KNOWN_SOIL.initialHeightMm, diameterMm: KNOWN_SOIL.diameterMm, specificGravity: KNOWN_SOIL.specificGravity, dryMassG, drainage: KNOWN_SOIL.drainage },
+      specimen,
       apparatusName: 'Frame 2',
       compliance: [],
       startedOn: '2026-03-02',

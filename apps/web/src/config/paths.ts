@@ -70,6 +70,7 @@ export const apiPaths = {
   uploadDownload: (orgId: string, uploadId: string) => `/api/orgs/${orgId}/uploads/${uploadId}/download`,
   uploadPreview: (orgId: string, uploadId: string) => `/api/orgs/${orgId}/uploads/${uploadId}/preview`,
   uploadImport: (orgId: string, uploadId: string) => `/api/orgs/${orgId}/uploads/${uploadId}/import`,
+  uploadTrial: (orgId: string, uploadId: string) => `/api/orgs/${orgId}/uploads/${uploadId}/trial`,
   importProfiles: (orgId: string) => `/api/orgs/${orgId}/import-profiles`,
   readingsTemplateCsv: (orgId: string) => `/api/orgs/${orgId}/templates/readings.csv`,
   readingsTemplateXlsx: (orgId: string) => `/api/orgs/${orgId}/templates/readings.xlsx`,

@@ -13,6 +13,7 @@ import { heightOfSolidsMm } from './height-of-solids.js';
 import { loadingKinds } from './loading-kinds.js';
 import { preconsolidationAndCompression } from './preconsolidation-and-compression.js';
 import { resolveDryMass } from './resolve-dry-mass.js';
+import { resolveExclusions } from './resolve-exclusions.js';
 import { sampleQualityAtInSituStress } from './sample-quality-at-in-situ-stress.js';
 
 /**
@@ -28,6 +29,9 @@ import { sampleQualityAtInSituStress } from './sample-quality-at-in-situ-stress.
  * CR, RR, σ′p by Casagrande (1936) and Pacheco Silva (1970), OCR and sample
  * quality by Lunne et al. (1997). The compression curve uses end-of-increment
  * void ratios; end-of-primary ones (at the log-time d100) are reported too.
+ * Increments the reviewer leaves out (picks.excludedIncrements) keep their
+ * heights and void ratios in the result, marked with the reason, but give no
+ * time curves and stay off the compression curve.
  *
  * Failure policy: out-of-domain input throws RangeError; a value that cannot
  * be had from valid data is null and a warning says why. Deterministic, no
@@ -35,7 +39,7 @@ import { sampleQualityAtInSituStress } from './sample-quality-at-in-situ-stress.
  *
  * @param input specimen, increments in test order, optional compliance calibration and picks.
  * @returns a plain serialisable result (no NaN or Infinity anywhere).
- * @throws RangeError when a dimension, mass, Gs, stress or reading is out of domain, increment numbers repeat, or the solids would fill the initial height.
+ * @throws RangeError when a dimension, mass, Gs, stress or reading is out of domain, increment numbers repeat, the solids would fill the initial height, an exclusion has no reason, or every increment is left out.
  * @example analyzeConsolidationTest(input).compressionIndex
  */
 export function analyzeConsolidationTest(input: ConsolidationTestInput): ConsolidationTestResult {
@@ -57,13 +61,22 @@ export function analyzeConsolidationTest(input: ConsolidationTestInput): Consoli
     throw new RangeError('analyzeConsolidationTest requires the height of solids to be less than the initial height (check dry mass, Gs and dimensions)');
   }
   const initialVoidRatio = (initialHeightMm - solidsMm) / solidsMm;
+  // The stress history happened whatever is left out: kinds are read on every increment.
   const kinds = loadingKinds(increments.map((increment) => increment.stressKpa));
+  const exclusions = resolveExclusions(increments, picks.excludedIncrements);
+  for (const index of exclusions.unknownIndices) {
+    warn('pick-not-applied', `Increment ${index} was to be left out of the analysis, but the test has no increment ${index}; nothing was left out for it.`, index);
+  }
+  for (const { index, stressKpa, reason } of exclusions.excluded) {
+    warn('increment-excluded', `Increment ${index} (${stressKpa} kPa) is left out of the analysis: ${reason}. Its readings are kept and shown, but it gives no cv or Cα and is not on the compression curve.`, index);
+  }
   const picksApplied: AppliedPick[] = [];
   const incrementPicks = new Map((picks.increments ?? []).map((pick) => [pick.index, pick]));
   for (const pick of picks.increments ?? []) {
     const position = increments.findIndex((increment) => increment.index === pick.index);
-    if (position < 0 || kinds[position] === 'unloading') {
-      warn('pick-not-applied', `A pick was given for increment ${pick.index}, which ${position < 0 ? 'is not in the test' : 'is an unloading increment (time curves are read on loading and reloading only)'}; it was not applied.`, pick.index);
+    if (position < 0 || kinds[position] === 'unloading' || exclusions.reasons.has(pick.index)) {
+      const why = position < 0 ? 'is not in the test' : exclusions.reasons.has(pick.index) ? 'is left out of the analysis' : 'is an unloading increment (time curves are read on loading and reloading only)';
+      warn('pick-not-applied', `A pick was given for increment ${pick.index}, which ${why}; it was not applied.`, pick.index);
     }
   }
 
@@ -93,13 +106,14 @@ export function analyzeConsolidationTest(input: ConsolidationTestInput): Consoli
       throw new RangeError(`analyzeConsolidationTest requires the specimen height to stay above the height of solids (increment ${increment.index} compresses it past its solids)`);
     }
     const voidRatioEnd = (heightEndMm - solidsMm) / solidsMm;
+    const excludedReason = exclusions.reasons.get(increment.index) ?? null;
     const stressChangeMPa = (increment.stressKpa - previousStress) / 1000;
-    const avPerMPa = stressChangeMPa === 0 ? null : -(voidRatioEnd - previousVoidRatio) / stressChangeMPa;
-    const mvPerMPa = stressChangeMPa === 0 ? null : (previousHeight - heightEndMm) / previousHeight / stressChangeMPa;
+    const avPerMPa = stressChangeMPa === 0 || excludedReason !== null ? null : -(voidRatioEnd - previousVoidRatio) / stressChangeMPa;
+    const mvPerMPa = stressChangeMPa === 0 || excludedReason !== null ? null : (previousHeight - heightEndMm) / previousHeight / stressChangeMPa;
     let taylor = null;
     let casagrande = null;
     if (kind === 'unloading') unloadingSkipped += 1;
-    else {
+    else if (excludedReason === null) {
       const pick = incrementPicks.get(increment.index);
       const curves = analyzeIncrementTimeCurves(checked.readings, pick, initialHeightMm, deflection.deflectionMm, specimen.drainage);
       taylor = curves.taylor;
@@ -131,6 +145,7 @@ export function analyzeConsolidationTest(input: ConsolidationTestInput): Consoli
       stressKpa: increment.stressKpa,
       kind,
       readingCount: increment.readings.length,
+      excludedReason,
       apparatusDeflectionMm: deflection.deflectionMm,
       deformationEndMm,
       heightEndMm,
@@ -150,6 +165,8 @@ export function analyzeConsolidationTest(input: ConsolidationTestInput): Consoli
       hydraulicConductivityMPerS,
       hydraulicConductivityBasis: cvForK === null || mvPerMPa === null ? null : taylor !== null ? 'taylor' : 'casagrande',
     });
+    // A left-out increment is neither on the compression curve nor the base of the next mv.
+    if (excludedReason !== null) return;
     path.push({ index: increment.index, kind, stressKpa: increment.stressKpa, voidRatio: voidRatioEnd });
     previousStress = increment.stressKpa;
     previousHeight = heightEndMm;
@@ -203,6 +220,7 @@ export function analyzeConsolidationTest(input: ConsolidationTestInput): Consoli
     overconsolidationRatio,
     sampleQuality,
     picksApplied,
+    excludedIncrements: exclusions.excluded,
     warnings,
   };
 }

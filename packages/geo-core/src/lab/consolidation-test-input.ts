@@ -56,6 +56,13 @@ export interface IncrementPicks {
   readonly casagrande?: CasagrandePicks | undefined;
 }
 
+/** An increment the reviewer leaves out of the analysis, and why (kept in the readings and the result). */
+export interface IncrementExclusion {
+  readonly index: number;
+  /** In the reviewer's words, e.g. "the gauge slipped at 3 h"; printed with the result. */
+  readonly reason: string;
+}
+
 /** Overrides of automatic choices; every one is echoed in the result and marked. */
 export interface ConsolidationPicks {
   /** Preconsolidation stress adopted for OCR, Cr and sample quality, kPa. */
@@ -63,6 +70,12 @@ export interface ConsolidationPicks {
   /** Increments (by index, inclusive) whose end points define the virgin compression line. */
   readonly virginLine?: { readonly firstIncrementIndex: number; readonly lastIncrementIndex: number } | undefined;
   readonly increments?: readonly IncrementPicks[] | undefined;
+  /**
+   * Increments left out of the analysis: no time curves, not on the compression curve that
+   * σ′p, Cc, Cr and Cs are read from, not the base of the next increment's mv. Their
+   * readings, heights and void ratios are still reported, marked with the reason.
+   */
+  readonly excludedIncrements?: readonly IncrementExclusion[] | undefined;
 }
 
 /** Everything analyzeConsolidationTest needs. */

@@ -34,6 +34,8 @@ export interface ConsolidationIncrementResult {
   readonly stressKpa: number;
   readonly kind: LoadingKind;
   readonly readingCount: number;
+  /** Why the reviewer left this increment out of the analysis; null when it is in. */
+  readonly excludedReason: string | null;
   /** Apparatus deflection subtracted from this increment's readings, mm. */
   readonly apparatusDeflectionMm: number;
   /** Corrected specimen deformation at the end of the increment since the start of the test, mm. */
@@ -46,7 +48,7 @@ export interface ConsolidationIncrementResult {
   readonly heightEndOfPrimaryMm: number | null;
   readonly strainEndOfPrimary: number | null;
   readonly voidRatioEndOfPrimary: number | null;
-  /** av = −Δe/Δσ′ from the previous increment's end, per MPa. */
+  /** av = −Δe/Δσ′ from the end of the previous increment in the analysis, per MPa (null when left out). */
   readonly avPerMPa: number | null;
   /** mv = (ΔH/H1)/Δσ′, per MPa. */
   readonly mvPerMPa: number | null;
@@ -85,6 +87,13 @@ export interface AppliedPick {
   readonly incrementIndex: number | null;
   readonly value: number | { readonly firstIncrementIndex: number; readonly lastIncrementIndex: number };
   readonly applied: boolean;
+}
+
+/** An increment left out of the analysis, as the reviewer gave it (for reports and plots). */
+export interface ExcludedIncrement {
+  readonly index: number;
+  readonly stressKpa: number;
+  readonly reason: string;
 }
 
 export interface ConsolidationTestResult {
@@ -133,5 +142,7 @@ export interface ConsolidationTestResult {
     readonly overconsolidationBand: '1-2' | '2-4' | null;
   } | null;
   readonly picksApplied: readonly AppliedPick[];
+  /** Increments left out of the analysis, in test order (empty when none). */
+  readonly excludedIncrements: readonly ExcludedIncrement[];
   readonly warnings: readonly ConsolidationWarning[];
 }

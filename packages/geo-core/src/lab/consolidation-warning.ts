@@ -12,6 +12,7 @@ export type ConsolidationWarningCode =
   | 'readings-backwards'
   | 'pick-outside-data'
   | 'pick-not-applied'
+  | 'increment-excluded'
   | 'compliance-outside-calibration'
   | 'mass-inconsistent'
   | 'preconsolidation-not-found'

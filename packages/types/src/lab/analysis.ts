@@ -17,6 +17,16 @@ export const PicksSchema = z.object({
     .refine((v) => v.lastIncrementIndex > v.firstIncrementIndex, { message: 'The virgin line needs at least two increments: the last must come after the first.' })
     .optional(),
   increments: z.array(IncrementPicksSchema).max(200).optional(),
+  /** Increments left out of the analysis (kept in the readings and marked on plots and reports), each with its reason. */
+  excludedIncrements: z
+    .array(
+      z.object({
+        index: z.number().int(),
+        reason: z.string().trim().min(3, { message: 'Say why this increment is left out of the analysis (a few words at least).' }).max(300),
+      }),
+    )
+    .max(200)
+    .optional(),
 });
 export type Picks = z.infer<typeof PicksSchema>;
 

@@ -19,6 +19,7 @@ import type {
   ConsolidationIncrementResult,
   ConsolidationTestResult,
   ConsolidationWarning,
+  ExcludedIncrement,
   PachecoSilvaPreconsolidationConstruction,
   RecompressionIndexFit,
   TaylorIncrementResult,
@@ -33,6 +34,7 @@ import type {
   ConsolidationIncrementResultSchema,
   ConsolidationTestResultSchema,
   ConsolidationWarningSchema,
+  ExcludedIncrementSchema,
   PachecoSilvaPreconsolidationConstructionSchema,
   RecompressionIndexFitSchema,
   TaylorIncrementResultSchema,
@@ -47,4 +49,5 @@ export type CasagrandePreconsolidationChecked = Assert<MatchesSource<z.infer<typ
 export type PachecoSilvaPreconsolidationChecked = Assert<MatchesSource<z.infer<typeof PachecoSilvaPreconsolidationConstructionSchema>, PachecoSilvaPreconsolidationConstruction>>;
 export type AppliedPickChecked = Assert<MatchesSource<z.infer<typeof AppliedPickSchema>, AppliedPick>>;
 export type ConsolidationWarningChecked = Assert<MatchesSource<z.infer<typeof ConsolidationWarningSchema>, ConsolidationWarning>>;
+export type ExcludedIncrementChecked = Assert<MatchesSource<z.infer<typeof ExcludedIncrementSchema>, ExcludedIncrement>>;
 export type ConsolidationTestResultChecked = Assert<MatchesSource<z.infer<typeof ConsolidationTestResultSchema>, ConsolidationTestResult>>;

@@ -69,6 +69,8 @@ export const ConsolidationIncrementResultSchema = z.object({
   stressKpa: z.number(),
   kind: z.enum(['loading', 'unloading', 'reloading']),
   readingCount: z.number(),
+  /** Why the reviewer left this increment out of the analysis; null when it is in (results stored before this existed read as null). */
+  excludedReason: z.string().nullable().default(null),
   apparatusDeflectionMm: z.number(),
   deformationEndMm: z.number(),
   heightEndMm: z.number(),
@@ -154,6 +156,7 @@ export const CONSOLIDATION_WARNING_CODES = [
   'readings-backwards',
   'pick-outside-data',
   'pick-not-applied',
+  'increment-excluded',
   'compliance-outside-calibration',
   'mass-inconsistent',
   'preconsolidation-not-found',
@@ -174,6 +177,14 @@ export const SampleQualitySchema = z.object({
   category: z.enum(['very good to excellent', 'good to fair', 'poor', 'very poor']).nullable(),
   overconsolidationBand: z.enum(['1-2', '2-4']).nullable(),
 });
+
+/** An increment the reviewer left out of the analysis: kept in the readings, marked on plots and in reports. */
+export const ExcludedIncrementSchema = z.object({
+  index: z.number(),
+  stressKpa: z.number(),
+  reason: z.string(),
+});
+export type ExcludedIncrement = z.infer<typeof ExcludedIncrementSchema>;
 
 /** The whole reduction of one consolidation test, as geo-core's analyzeConsolidationTest returns it. */
 export const ConsolidationTestResultSchema = z.object({
@@ -211,6 +222,8 @@ export const ConsolidationTestResultSchema = z.object({
   overconsolidationRatio: z.number().nullable(),
   sampleQuality: SampleQualitySchema.nullable(),
   picksApplied: z.array(AppliedPickSchema),
+  /** Increments left out of the analysis, in test order, each with its stress and the reviewer's reason (for reports and plots). */
+  excludedIncrements: z.array(ExcludedIncrementSchema).default([]),
   warnings: z.array(ConsolidationWarningSchema),
 });
 export type ConsolidationTestResult = z.infer<typeof ConsolidationTestResultSchema>;

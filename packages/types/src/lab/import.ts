@@ -1,97 +1,44 @@
 import { z } from 'zod';
-
-/** The four fields a reading needs; each is taken from one column of the file. */
-export const IMPORT_FIELDS = ['increment', 'stress', 'elapsedTime', 'deformation'] as const;
-export type ImportField = (typeof IMPORT_FIELDS)[number];
-
-/** Units a file may use; readings are stored in kPa, minutes and millimetres. */
-export const StressUnitSchema = z.enum(['kPa', 'kgfPerCm2', 'tsf', 'psi', 'MPa']);
-export type StressUnit = z.infer<typeof StressUnitSchema>;
-export const TimeUnitSchema = z.enum(['min', 's', 'h']);
-export type TimeUnit = z.infer<typeof TimeUnitSchema>;
-export const LengthUnitSchema = z.enum(['mm', 'in']);
-export type LengthUnit = z.infer<typeof LengthUnitSchema>;
-
-export const CsvDelimiterSchema = z.enum([',', ';', '\t', '|']);
-export type CsvDelimiter = z.infer<typeof CsvDelimiterSchema>;
+import { CsvDelimiterSchema, ImportMappingSchema } from './import-mapping.js';
+import { MappingSuggestionSchema } from './import-guess.js';
 
 /**
- * How the deformation column reads: a deformation already (compression positive), or a
- * gauge reading turned into deformation with its zero, division size and direction.
+ * One rejected row: spreadsheet row number (header = row 1), the column's name (null: whole
+ * row), why; in a workbook of one sheet per increment, the sheet too.
  */
-export const DeformationReadingSchema = z.discriminatedUnion('kind', [
-  z.object({ kind: z.literal('deformation') }),
-  z.object({
-    kind: z.literal('dial'),
-    /** The gauge reading at zero deformation; omitted: the file's first reading. */
-    zeroReading: z.number().finite().optional(),
-    /** One division of the gauge, in the deformation unit (0.001 for a 0.001 mm dial, 1 when it reads in mm). */
-    divisionSize: z.number().positive({ message: 'enter the size of one gauge division, e.g. 0.001' }),
-    /** true when the reading rises as the specimen compresses. */
-    increasesWithCompression: z.boolean(),
-  }),
-]);
-export type DeformationReading = z.infer<typeof DeformationReadingSchema>;
-
-const columnName = z.string().trim().min(1, { message: 'choose a column' });
-
-/** Which column holds each field, and the units — what an import profile saves. */
-export const ImportMappingSchema = z.object({
-  /** CSV only; omitted: detected from the file. */
-  delimiter: CsvDelimiterSchema.optional(),
-  decimalSeparator: z.enum(['.', ',']).default('.'),
-  /** Row of the column names, as a spreadsheet numbers it (1 = first row). */
-  headerRow: z.number().int().min(1).max(100).default(1),
-  columns: z.object({
-    /** null: a new increment starts wherever the stress changes. */
-    increment: columnName.nullable(),
-    stress: columnName,
-    elapsedTime: columnName,
-    deformation: columnName,
-  }),
-  units: z.object({
-    stress: StressUnitSchema.default('kPa'),
-    time: TimeUnitSchema.default('min'),
-    deformation: LengthUnitSchema.default('mm'),
-  }),
-  deformationReading: DeformationReadingSchema.default({ kind: 'deformation' }),
-});
-export type ImportMapping = z.infer<typeof ImportMappingSchema>;
-export type ImportMappingInput = z.input<typeof ImportMappingSchema>;
-
-/** POST /uploads/:uploadId/import: a saved profile, or a mapping (optionally saved as a profile). */
-export const ImportRequestSchema = z.union([
-  z.object({ profileId: z.uuid({ message: 'choose a saved import profile' }) }).strict(),
-  z
-    .object({
-      mapping: ImportMappingSchema,
-      saveAsProfile: z.string().trim().min(1).max(80).optional(),
-    })
-    .strict(),
-]);
-export type ImportRequest = z.infer<typeof ImportRequestSchema>;
-
-export const ImportProfileCreateSchema = z.object({
-  name: z.string().trim().min(1, { message: 'give the profile a name' }).max(80, { message: 'keep the name under 80 characters' }),
-  mapping: ImportMappingSchema,
-});
-export type ImportProfileCreate = z.infer<typeof ImportProfileCreateSchema>;
-
-export const ImportProfileSchema = z.object({
-  id: z.string(),
-  name: z.string(),
-  mapping: ImportMappingSchema,
-  createdAt: z.string(),
-});
-export type ImportProfile = z.infer<typeof ImportProfileSchema>;
-
-/** One rejected row: spreadsheet row number (header = row 1), the column's name (null: whole row), why. */
 export const ImportIssueSchema = z.object({
   row: z.number().int(),
   column: z.string().nullable(),
   message: z.string(),
+  sheet: z.string().optional(),
 });
 export type ImportIssue = z.infer<typeof ImportIssueSchema>;
+
+/**
+ * Something an import did with a row that the technician must know of, though the file was
+ * imported: an exact duplicate row dropped, a second reading at the same time that replaced
+ * the first (the later one is kept), or a check on the whole file (deformation implausible
+ * for the specimen's height). Always listed on the upload, never silent.
+ */
+export const ImportNoteSchema = z.object({
+  kind: z.enum(['dropped', 'replaced', 'check']),
+  /** null for a note on the whole file. */
+  row: z.number().int().nullable(),
+  column: z.string().nullable(),
+  message: z.string(),
+  sheet: z.string().optional(),
+});
+export type ImportNote = z.infer<typeof ImportNoteSchema>;
+
+/** Another test of the organisation that holds a file with the same SHA-256. */
+export const SameFileSchema = z.object({
+  testId: z.string(),
+  testReference: z.string(),
+  uploadId: z.string(),
+  originalName: z.string(),
+  uploadedAt: z.string(),
+});
+export type SameFile = z.infer<typeof SameFileSchema>;
 
 export const UploadStatusSchema = z.enum(['stored', 'needs_mapping', 'importing', 'imported', 'failed']);
 export type UploadStatus = z.infer<typeof UploadStatusSchema>;
@@ -117,29 +64,52 @@ export const UploadSchema = z.object({
     .object({ message: z.string(), issues: z.array(ImportIssueSchema), issueCount: z.number() })
     .nullable(),
   mapping: ImportMappingSchema.nullable(),
+  /** What the last import dropped, replaced or found implausible (first 200; `noteCount` is the total). */
+  notes: z.array(ImportNoteSchema).default([]),
+  noteCount: z.number().int().default(0),
+  /** Other tests holding an upload of the very same bytes: most likely the wrong file here, or there. */
+  sameFileIn: z.array(SameFileSchema).default([]),
 });
 export type Upload = z.infer<typeof UploadSchema>;
 
 export const LayoutSchema = z.enum(['canonical', 'needs_mapping']);
 export type Layout = z.infer<typeof LayoutSchema>;
 
+const CellSchema = z.union([z.string(), z.number(), z.null()]);
+
+/** A row as found: its number as a spreadsheet shows it, and its cells. */
+export const PreviewRowSchema = z.object({ rowNumber: z.number().int(), cells: z.array(CellSchema) });
+export type PreviewRow = z.infer<typeof PreviewRowSchema>;
+
 /** The first rows of a file as found, for the mapping step. */
 export const UploadPreviewSchema = z.object({
   uploadId: z.string(),
   detectedType: DetectedFileTypeSchema,
   layout: LayoutSchema,
-  /** CSV only. */
+  /** CSV only: the delimiter the rows were split with (the one asked for, or the one detected). */
   delimiter: CsvDelimiterSchema.nullable(),
+  /** The row the column names are taken from: the one asked for, or the one detected. */
+  headerRow: z.number().int(),
+  /** The row that looks like the column names (below any title rows). */
+  detectedHeaderRow: z.number().int(),
+  /** The first rows of the (first) readings sheet from row 1, title rows included, to choose the header row from. */
+  topRows: z.array(PreviewRowSchema),
+  /** The names in the header row. */
   columns: z.array(z.string()),
-  rows: z.array(z.array(z.union([z.string(), z.number(), z.null()]))),
-  /** A guess at the mapping from the column names, to start the form with. */
-  suggestedMapping: ImportMappingSchema.nullable(),
+  /** Rows below the header row (up to 20). */
+  rows: z.array(z.array(CellSchema)),
+  /** Sheets that may hold readings, in workbook order (not the "specimen" sheet); empty for a CSV. */
+  sheets: z.array(z.string()),
+  /** The mapping to start from: a matching saved profile, else a guess from the header and the values. */
+  suggestion: MappingSuggestionSchema,
   /** Key/values of an XLSX "specimen" sheet. */
   specimen: z.record(z.string(), z.union([z.string(), z.number()])),
 });
 export type UploadPreview = z.infer<typeof UploadPreviewSchema>;
 
 export const ReadingRowSchema = z.object({
+  /** 0 for a CSV or a workbook's first sheet; the sheet's place in a workbook of one sheet per increment. */
+  sheetIndex: z.number().int().default(0),
   rowNumber: z.number(),
   incrementIndex: z.number(),
   stressKpa: z.number(),
@@ -161,3 +131,32 @@ export const ReadingsPageQuerySchema = z.object({
   limit: z.coerce.number().int().min(1).max(5000).default(500),
 });
 export type ReadingsPageQuery = z.infer<typeof ReadingsPageQuerySchema>;
+
+/** POST /uploads/:uploadId/trial: read the first increment with a mapping, before importing. */
+export const ImportTrialRequestSchema = z.object({ mapping: ImportMappingSchema }).strict();
+export type ImportTrialRequest = z.infer<typeof ImportTrialRequestSchema>;
+
+/** One reading of the trial: the cells as written beside what they import as. */
+export const TrialReadingSchema = z.object({
+  rowNumber: z.number().int(),
+  time: CellSchema,
+  deformation: CellSchema,
+  elapsedMin: z.number(),
+  deformationMm: z.number(),
+});
+export type TrialReading = z.infer<typeof TrialReadingSchema>;
+
+/**
+ * The first increment of a file read with a mapping: its readings as written and in minutes
+ * and millimetres (so a wrong division or direction shows before anything is imported), and
+ * the problems and notes found in the rows read.
+ */
+export const ImportTrialSchema = z.object({
+  increment: z
+    .object({ index: z.number().int(), stressKpa: z.number(), sheet: z.string().nullable(), readings: z.array(TrialReadingSchema) })
+    .nullable(),
+  issues: z.array(ImportIssueSchema),
+  issueCount: z.number().int(),
+  notes: z.array(ImportNoteSchema),
+});
+export type ImportTrial = z.infer<typeof ImportTrialSchema>;

@@ -216,7 +216,12 @@ const SPEC: Record<string, { access: Access; sample: (ctx: Context) => Promise<S
   },
   'POST /api/orgs/:orgId/uploads/:uploadId/import': {
     access: IMPORTERS,
-    sample: async (c) => ({ path: `/api/orgs/${c.orgId}/uploads/${await uploadOf(c.lab.analysed.testId)}/import`, body: { mapping: LOGGER_MAPPING } }),
+    // A fresh upload each call: an upload whose import is queued refuses another until it ends.
+    sample: async (c) => ({ path: `/api/orgs/${c.orgId}/uploads/${await copyOfUpload(c.lab.analysed.testId)}/import`, body: { mapping: LOGGER_MAPPING } }),
+  },
+  'POST /api/orgs/:orgId/uploads/:uploadId/trial': {
+    access: IMPORTERS,
+    sample: async (c) => ({ path: `/api/orgs/${c.orgId}/uploads/${await uploadOf(c.lab.analysed.testId)}/trial`, body: { mapping: LOGGER_MAPPING } }),
   },
   'GET /api/orgs/:orgId/import-profiles': { access: UPLOAD_READERS, sample: (c) => ({ path: `/api/orgs/${c.orgId}/import-profiles` }) },
   'POST /api/orgs/:orgId/import-profiles': {
@@ -255,6 +260,18 @@ const SPEC: Record<string, { access: Access; sample: (ctx: Context) => Promise<S
     sample: (c) => ({ path: `/api/orgs/${c.orgId}/tests/${c.lab.approvedTestId}/data.xlsx` }),
   },
 };
+
+/** A new upload row like the one behind a fixture test's readings (same stored object). */
+async function copyOfUpload(testId: string): Promise<string> {
+  const [row] = (await dataSource.query(
+    `INSERT INTO uploads (organisation_id, test_id, object_key, original_name, sha256, size_bytes, detected_type, status, uploaded_by_id)
+     SELECT organisation_id, test_id, object_key, original_name, sha256, size_bytes, detected_type, 'failed', uploaded_by_id
+       FROM uploads WHERE id = $1 RETURNING id`,
+    [await uploadOf(testId)],
+  )) as Array<{ id: string }>;
+  if (!row) throw new Error(`could not copy the upload of test ${testId}`);
+  return row.id;
+}
 
 /** The upload behind a fixture test's readings. */
 async function uploadOf(testId: string): Promise<string> {

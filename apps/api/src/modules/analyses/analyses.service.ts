@@ -11,6 +11,7 @@ import { lockTest, moveTest } from '../consolidation-tests/test-transition.js';
 import { assertTestOpenable, type Viewer } from '../projects/project-scope.js';
 import { inSituStress } from '../samples/in-situ-stress.js';
 import { SampleEntity } from '../samples/sample.entity.js';
+import { explainRefusal } from './analysis-refusal.js';
 import { analysisRejected, noAnalysis, noReadings, readingsChanged } from './analysis.exception.js';
 import { AnalysisEntity } from './analysis.entity.js';
 import { canonicalJson } from './canonical-json.js';
@@ -97,7 +98,7 @@ export async function runAnalysis(
   try {
     result = storableResult(analyzeConsolidationTest(input));
   } catch (error) {
-    if (error instanceof RangeError) throw analysisRejected(error.message);
+    if (error instanceof RangeError) throw analysisRejected(explainRefusal(input, error));
     throw error;
   }
   await report(0.85, 'Saving the result.');

@@ -1,10 +1,11 @@
 import { DomainError } from '../../errors/domain-error.js';
+import type { AnalysisRefusal } from './analysis-refusal.js';
 
 export const noReadings = () =>
   new DomainError('invalid_transition', 'This test has no readings yet, so there is nothing to analyse. Upload the readings file first.');
 
-export const analysisRejected = (reason: string) =>
-  new DomainError('validation_failed', `The analysis could not run on these data: ${reason}. Check the specimen data and readings, then run it again.`);
+/** geo-core refused the data: the refusal is put in plain words by explainRefusal. */
+export const analysisRejected = (refusal: AnalysisRefusal) => new DomainError('validation_failed', `The analysis could not run on these data. ${refusal.message}`, [refusal.issue]);
 
 export const readingsChanged = () =>
   new DomainError('invalid_transition', 'Newer readings arrived while this analysis ran, so its result was set aside; the analysis of the new readings follows.');

@@ -1,4 +1,4 @@
-import type { ImportProfile, ImportProfileCreate } from '@porestack/types';
+import { ImportMappingSchema, type ImportProfile, type ImportProfileCreate } from '@porestack/types';
 import type { EntityManager } from 'typeorm';
 import { dataSource } from '../../data-source.js';
 import { NotFoundError } from '../../errors/domain-error.js';
@@ -6,7 +6,8 @@ import { profileNameTaken } from '../uploads/upload.exception.js';
 import { ImportProfileEntity } from './import-profile.entity.js';
 
 function toProfile(row: ImportProfileEntity): ImportProfile {
-  return { id: row.id, name: row.name, mapping: row.mapping, createdAt: row.createdAt.toISOString() };
+  // Profiles saved before a setting existed take its default (the mapping schema fills it in).
+  return { id: row.id, name: row.name, mapping: ImportMappingSchema.parse(row.mapping), createdAt: row.createdAt.toISOString() };
 }
 
 /** Saved mappings of an organisation, by name. */

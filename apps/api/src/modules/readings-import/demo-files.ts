@@ -31,6 +31,9 @@ export const LOGGER_DIAL = { zeroReading: 5000, divisionSize: 0.001, increasesWi
 export const LOGGER_MAPPING: ImportMapping = {
   decimalSeparator: '.',
   headerRow: 1,
+  sheets: 'first',
+  stressFrom: 'column',
+  time: { format: 'number', origin: 'increment', dateOrder: 'dmy' },
   columns: { increment: 'Stage', stress: 'Load (kgf/cm2)', elapsedTime: 'Time (s)', deformation: 'Dial (div)' },
   units: { stress: 'kgfPerCm2', time: 's', deformation: 'mm' },
   deformationReading: { kind: 'dial', ...LOGGER_DIAL },

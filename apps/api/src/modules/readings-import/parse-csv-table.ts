@@ -1,16 +1,16 @@
 import type { CsvDelimiter } from '@porestack/types';
 import Papa from 'papaparse';
+import { guessDelimiter } from './guess-delimiter.js';
 import { ImportProblem } from './import-problem.js';
 import { columnKeeper, type ColumnsToKeep } from './keep-columns.js';
 import { MAX_COLUMNS, tooWide } from './max-columns.js';
 import type { ImportLimits, RawRow, RawTable } from './raw-table.js';
 
 const CHUNK_CHARACTERS = 1 << 20;
-const DELIMITERS: CsvDelimiter[] = [',', ';', '\t', '|'];
 const DELIMITER_NAMES: Record<string, string> = { ',': "','", ';': "';'", '\t': 'tab', '|': "'|'", ':': "':'", ' ': 'spaces' };
 
 export interface CsvParseOptions {
-  /** Omitted: detected from the first lines. */
+  /** Omitted: detected from the first lines (guessDelimiter). */
   delimiter?: CsvDelimiter | undefined;
   /** Stop after this many rows (a preview); the row limit is not checked then. */
   previewRows?: number | undefined;
@@ -33,17 +33,15 @@ export function parseCsvTable(text: string, limits: ImportLimits, options: CsvPa
   let widest = 0;
   let lineIndex = 0;
   let problem: ImportProblem | null = null;
-  let guessed: string | undefined;
+  const delimiter = options.delimiter ?? guessDelimiter(content);
   const keep = columnKeeper(options.keepColumns);
   Papa.parse<string[]>(content, {
-    delimiter: options.delimiter ?? '',
-    delimitersToGuess: DELIMITERS,
+    delimiter,
     skipEmptyLines: false,
     // In slices: papaparse splits a whole slice into lines at once, so a file of blank
     // lines parsed in one piece would hold millions of empty strings.
     chunkSize: CHUNK_CHARACTERS,
     step: (result, parser) => {
-      guessed ??= result.meta.delimiter;
       const rowNumber = (lineIndex += 1);
       const cells = withoutTrailingEmpty(result.data);
       if (cells.length === 0) return;
@@ -63,16 +61,16 @@ export function parseCsvTable(text: string, limits: ImportLimits, options: CsvPa
         parser.abort();
         return;
       }
+      // Width of the file as written, before unmapped columns are dropped.
+      if (cells.length > widest) widest = cells.length;
       const kept = keep(rowNumber, cells);
       if (kept === null) return;
       rows.push({ rowNumber, cells: kept });
-      if (cells.length > widest) widest = cells.length;
     },
   });
   if (problem) throw problem;
-  const delimiter = guessed !== undefined && (DELIMITERS as string[]).includes(guessed) ? (guessed as CsvDelimiter) : ',';
   if (rows.length > 0 && widest === 1) throw oneColumnProblem(String(rows[0]?.cells[0] ?? ''), options.delimiter ?? null);
-  return { detectedType: 'csv', delimiter, rows, specimen: {} };
+  return { detectedType: 'csv', delimiter, sheets: [{ name: null, rows }], specimen: {} };
 }
 
 /** The row without the empty cells at its end (all of them for a blank line). */

@@ -1,7 +1,7 @@
 import { fileURLToPath } from 'node:url';
 import Piscina from 'piscina';
 import { ImportProblem } from './import-problem.js';
-import type { ImportParseOutcome, ImportParseTask, ParseOutcome, ParseTask, PreviewOutcome, PreviewTask, StartedTask, ThreadAnswer } from './parse-task.js';
+import type { ImportParseOutcome, ImportParseTask, ParseOutcome, ParseTask, PreviewOutcome, PreviewTask, StartedTask, ThreadAnswer, TrialOutcome, TrialTask } from './parse-task.js';
 
 /**
  * Heap one parse thread may use. The largest file allowed (40 MB, 500,000 readings) takes
@@ -55,6 +55,7 @@ const unreadable = (what: string) =>
  */
 export async function parseOffThread(task: PreviewTask, deadlineMs: number): Promise<PreviewOutcome>;
 export async function parseOffThread(task: ImportParseTask, deadlineMs: number): Promise<ImportParseOutcome>;
+export async function parseOffThread(task: TrialTask, deadlineMs: number): Promise<TrialOutcome>;
 export async function parseOffThread(task: ParseTask, deadlineMs: number): Promise<ParseOutcome>;
 export async function parseOffThread(task: ParseTask, deadlineMs: number): Promise<ParseOutcome> {
   const started = new Int32Array(new SharedArrayBuffer(4));

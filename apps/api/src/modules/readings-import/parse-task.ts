@@ -1,4 +1,4 @@
-import type { CsvDelimiter, DetectedFileType, ImportIssue, ImportMapping } from '@porestack/types';
+import type { CsvDelimiter, DetectedFileType, ImportIssue, ImportMapping, ImportNote, ImportTrial } from '@porestack/types';
 import type { ParsedReadings } from './read-readings.js';
 import type { ImportLimits, RawTable } from './raw-table.js';
 
@@ -6,7 +6,7 @@ import type { ImportLimits, RawTable } from './raw-table.js';
  * What the parse thread is asked to do with a file's bytes. It runs apart from the API's
  * and the worker's event loops (parse-pool.ts), so a damaged file can be stopped.
  */
-export type ParseTask = PreviewTask | ImportParseTask;
+export type ParseTask = PreviewTask | ImportParseTask | TrialTask;
 
 export interface PreviewTask {
   readonly kind: 'preview';
@@ -26,6 +26,16 @@ export interface ImportParseTask {
   readonly mapping: ImportMapping | null;
 }
 
+/** Read the first increment with a mapping, from the rows a preview reads. */
+export interface TrialTask {
+  readonly kind: 'trial';
+  readonly bytes: Uint8Array;
+  readonly type: DetectedFileType;
+  readonly limits: ImportLimits;
+  readonly mapping: ImportMapping;
+  readonly previewRows: number;
+}
+
 /** A task as the thread receives it: `started[0]` is set to 1 when the thread begins it. */
 export type StartedTask = ParseTask & { readonly started: Int32Array };
 
@@ -38,7 +48,7 @@ export interface ParseProblem {
 }
 
 /** What a parse thread answers; parseOffThread turns a 'problem' back into a thrown ImportProblem. */
-export type ParseOutcome = PreviewOutcome | ImportParseOutcome;
+export type ParseOutcome = PreviewOutcome | ImportParseOutcome | TrialOutcome;
 
 export interface PreviewOutcome {
   readonly kind: 'preview';
@@ -47,6 +57,18 @@ export interface PreviewOutcome {
 
 export type ImportParseOutcome =
   | { readonly kind: 'needs_mapping'; readonly specimen: RawTable['specimen'] }
-  | { readonly kind: 'readings'; readonly readings: ParsedReadings; readonly specimen: RawTable['specimen'] };
+  | {
+      readonly kind: 'readings';
+      readonly readings: ParsedReadings;
+      /** Rows dropped or replaced (duplicates), first 200; noteCount counts them all. */
+      readonly notes: readonly ImportNote[];
+      readonly noteCount: number;
+      readonly specimen: RawTable['specimen'];
+    };
+
+export interface TrialOutcome {
+  readonly kind: 'trial';
+  readonly trial: ImportTrial;
+}
 
 export type ThreadAnswer = ParseOutcome | { readonly kind: 'problem'; readonly problem: ParseProblem };

@@ -4,11 +4,13 @@ import { ImportProblem } from './import-problem.js';
 import type { StartedTask, ThreadAnswer } from './parse-task.js';
 import { readReadings } from './read-readings.js';
 import { readTable } from './read-table.js';
+import { trialOf } from './trial-of.js';
 
 /**
  * The body of a parse thread (see parse-pool.ts): reads the file and, for an import,
- * checks every row, returning the readings as typed arrays. Imports nothing that touches
- * the database, storage or the environment, so a thread that is stopped leaves nothing.
+ * checks every row, returning the readings as typed arrays; for a trial, reads the first
+ * increment with the mapping. Imports nothing that touches the database, storage or the
+ * environment, so a thread that is stopped leaves nothing.
  */
 export default async function parseInThread(task: StartedTask): Promise<ThreadAnswer> {
   // The caller's deadline starts now.
@@ -18,11 +20,19 @@ export default async function parseInThread(task: StartedTask): Promise<ThreadAn
     if (task.kind === 'preview') {
       return { kind: 'preview', table: await readTable(bytes, task.type, task.limits, { delimiter: task.delimiter, previewRows: task.previewRows }) };
     }
+    if (task.kind === 'trial') {
+      const table = await readTable(bytes, task.type, task.limits, { delimiter: task.mapping.delimiter, previewRows: task.previewRows });
+      return { kind: 'trial', trial: trialOf(table, task.mapping) };
+    }
     const mapping = task.mapping ?? CANONICAL_MAPPING;
-    const names = Object.values(mapping.columns).filter((name): name is string => typeof name === 'string' && name !== '');
-    const table = await readTable(bytes, task.type, task.limits, { delimiter: task.mapping?.delimiter, keepColumns: { headerRow: mapping.headerRow, names } });
+    const names = Object.entries(mapping.columns)
+      .filter(([field]) => !(field === 'stress' && mapping.stressFrom === 'sheetName'))
+      .map(([, name]) => name)
+      .filter((name): name is string => typeof name === 'string' && name !== '');
+    const table = await readTable(bytes, task.type, task.limits, { delimiter: task.mapping?.delimiter, keepColumns: { headerRow: mapping.headerRow, names }, sheets: mapping.sheets });
     if (task.mapping === null && detectLayout(table) !== 'canonical') return { kind: 'needs_mapping', specimen: table.specimen };
-    return { kind: 'readings', readings: readReadings(table, mapping), specimen: table.specimen };
+    const { readings, notes, noteCount } = readReadings(table, mapping);
+    return { kind: 'readings', readings, notes, noteCount, specimen: table.specimen };
   } catch (error) {
     if (!(error instanceof ImportProblem)) throw error;
     return { kind: 'problem', problem: { message: error.message, issues: error.issues, issueCount: error.issueCount, kind: error.kind } };

@@ -1,25 +1,36 @@
 import { Readable } from 'node:stream';
+import type { SheetLayout } from '@porestack/types';
 import ExcelJS from 'exceljs';
 import { ImportProblem } from './import-problem.js';
 import { columnKeeper, type ColumnsToKeep } from './keep-columns.js';
 import { MAX_COLUMNS, tooWide } from './max-columns.js';
-import type { Cell, ImportLimits, RawRow, RawTable } from './raw-table.js';
+import type { Cell, ImportLimits, RawRow, RawSheet, RawTable } from './raw-table.js';
 import { readMergedRanges } from './read-merged-ranges.js';
+import { spreadsheetDateText } from './spreadsheet-date-text.js';
+import { primeWorkbookReader } from './prime-workbook-reader.js';
 
 export interface XlsxParseOptions {
-  /** Stop after this many rows of the readings sheet (a preview). */
+  /** Stop after this many rows of the (first) readings sheet (a preview). */
   previewRows?: number | undefined;
-  /** Keep only these columns' cells below the header row (an import). */
+  /** Keep only these columns' cells below the header row (an import); applied sheet by sheet. */
   keepColumns?: ColumnsToKeep | undefined;
+  /** 'each': every sheet but "specimen" holds one increment and is read; default: the first only. */
+  sheets?: SheetLayout | undefined;
 }
 
 const SPECIMEN_SHEET = /^specimen$/i;
+/** A preview also reads the start of later sheets (for one sheet per increment), at most these. */
+const PREVIEW_LATER_SHEETS = 100;
+const PREVIEW_LATER_SHEET_ROWS = 30;
 
 /**
  * Reads an XLSX workbook with exceljs's streaming reader (memory stays flat for large
- * logs): the first sheet not named "specimen" holds the readings; a sheet named "specimen"
- * holds key/value pairs in its first two columns. A formula's saved result is used; a
- * formula without one, an error value or merged cells are refused with the cell named.
+ * logs). The readings are on the first sheet not named "specimen" — or, with `sheets:
+ * 'each'`, on every such sheet, one increment a sheet; a preview reads the start of the
+ * later sheets too. A sheet named "specimen" holds key/value pairs in its first two
+ * columns. A formula's saved result is used; a formula without one, an error value or
+ * merged cells are refused with the cell named. Time and date cells arrive as text
+ * (spreadsheetDateText).
  * @throws ImportProblem
  */
 export async function parseXlsxTable(bytes: Buffer, limits: ImportLimits, options: XlsxParseOptions = {}): Promise<RawTable> {
@@ -30,23 +41,28 @@ export async function parseXlsxTable(bytes: Buffer, limits: ImportLimits, option
     styles: 'cache',
     entries: 'ignore',
   });
-  const rows: RawRow[] = [];
+  const sheets: RawSheet[] = [];
   const specimen: Record<string, string | number> = {};
-  let readingsSheet: string | null = null;
-  let previewFull = false;
-  const keep = columnKeeper(options.keepColumns);
+  const preview = options.previewRows !== undefined;
+  const readEvery = options.sheets === 'each';
+  let rowCount = 0;
   try {
+    await primeWorkbookReader(reader, bytes);
     for await (const worksheet of reader) {
       const sheet = worksheet as unknown as WorksheetStream;
       const name = sheet.name ?? `Sheet${sheet.id}`;
       const isSpecimen = SPECIMEN_SHEET.test(name.trim());
-      if (!isSpecimen && readingsSheet !== null) {
+      const later = !isSpecimen && sheets.length > 0;
+      if (later && ((!readEvery && !preview) || (preview && sheets.length > PREVIEW_LATER_SHEETS))) {
         // Later sheets are not read, but the zip stream must still be drained.
         for await (const _row of sheet) void _row;
         continue;
       }
-      if (!isSpecimen) readingsSheet = name;
+      const rowLimit = !preview ? null : later ? PREVIEW_LATER_SHEET_ROWS : (options.previewRows as number);
+      const rows: RawRow[] = [];
+      const keep = columnKeeper(options.keepColumns);
       const merges = readMergedRanges(sheet);
+      let stopped = false;
       for await (const row of sheet) {
         const cells = rowCells(row as unknown as ExcelJS.Row, name);
         if (cells.every((cell) => cell === null)) continue;
@@ -58,27 +74,32 @@ export async function parseXlsxTable(bytes: Buffer, limits: ImportLimits, option
         }
         // A preview stops reading the sheet once it has its rows (merged cells, listed after the
         // rows, are then not checked: the import does that).
-        if (options.previewRows !== undefined && rows.length >= options.previewRows) {
-          previewFull = true;
+        if (rowLimit !== null && rows.length >= rowLimit) {
+          stopped = true;
           break;
         }
-        if (rows.length >= limits.maxRows + 1) {
+        if (rowCount >= limits.maxRows + sheets.length + 1) {
           throw new ImportProblem(
-            `Sheet '${name}' has more than ${limits.maxRows.toLocaleString('en-GB')} rows of readings, the most one upload may hold. Split the test's readings into a file of fewer rows and upload that.`,
+            `Sheet '${name}' takes the workbook past ${limits.maxRows.toLocaleString('en-GB')} rows of readings, the most one upload may hold. Split the test's readings into a file of fewer rows and upload that.`,
           );
         }
         const rowNumber = (row as unknown as ExcelJS.Row).number;
         const kept = keep(rowNumber, cells);
-        if (kept !== null) rows.push({ rowNumber, cells: kept });
+        if (kept !== null) {
+          rows.push({ rowNumber, cells: kept });
+          rowCount += 1;
+        }
       }
-      const ranges = previewFull ? [] : merges();
-      if (ranges.length > 0) {
+      const ranges = stopped ? [] : merges();
+      if (ranges.length > 0 && !isSpecimen) {
         const listed = ranges.slice(0, 5).join(', ');
         throw new ImportProblem(
           `Sheet '${name}' has merged cells (${listed}${ranges.length > 5 ? ` and ${ranges.length - 5} more` : ''}). Readings need one value per cell: unmerge the cells, fill in each row's value, save and upload again.`,
-          ranges.map((range) => ({ row: firstRowOf(range), column: range, message: `Cells ${range} are merged; unmerge them and give each row its own value.` })),
+          ranges.map((range) => ({ row: firstRowOf(range), column: range, message: `Cells ${range} are merged; unmerge them and give each row its own value.`, sheet: name })),
         );
       }
+      // An empty sheet is no increment (and no readings sheet).
+      if (!isSpecimen && rows.length > 0) sheets.push({ name, rows });
     }
   } catch (error) {
     if (error instanceof ImportProblem) throw error;
@@ -86,10 +107,10 @@ export async function parseXlsxTable(bytes: Buffer, limits: ImportLimits, option
       `The workbook could not be read (${error instanceof Error ? error.message : 'unknown reason'}). Open it in Excel or LibreOffice, save it again as .xlsx and upload that.`,
     );
   }
-  if (readingsSheet === null) {
-    throw new ImportProblem('The workbook has no sheet of readings. Put the readings on the first sheet (and specimen values, if any, on a sheet named "specimen").');
+  if (sheets.length === 0) {
+    throw new ImportProblem('The workbook has no sheet of readings. Put the readings on the first sheet, or one increment on each sheet (and specimen values, if any, on a sheet named "specimen").');
   }
-  return { detectedType: 'xlsx', delimiter: null, rows, specimen };
+  return { detectedType: 'xlsx', delimiter: null, sheets, specimen };
 }
 
 interface WorksheetStream extends AsyncIterable<unknown> {
@@ -121,11 +142,12 @@ function cellValue(value: unknown, address: string, sheetName: string): Cell {
   if (value === null || value === undefined) return null;
   if (typeof value === 'number' || typeof value === 'string') return value;
   if (typeof value === 'boolean') return value ? 'TRUE' : 'FALSE';
-  if (value instanceof Date) return value.toISOString();
+  if (value instanceof Date) return spreadsheetDateText(value);
   if (typeof value === 'object') {
     if ('formula' in value || 'sharedFormula' in value) {
       const { result } = value as { result?: unknown };
       if (typeof result === 'number' || typeof result === 'string') return result;
+      if (result instanceof Date) return spreadsheetDateText(result);
       const formula = (value as { formula?: string }).formula;
       throw new ImportProblem(
         `Sheet '${sheetName}', cell ${address} holds a formula${formula ? ` (=${formula})` : ''} with no saved result. Open the workbook in Excel or LibreOffice and save it (so results are stored), or paste the values instead of formulas, then upload again.`,

@@ -1,4 +1,4 @@
-import type { CsvDelimiter, DetectedFileType } from '@porestack/types';
+import type { CsvDelimiter, DetectedFileType, SheetLayout } from '@porestack/types';
 import { parseCsvTable } from './parse-csv-table.js';
 import type { ColumnsToKeep } from './keep-columns.js';
 import type { ImportLimits, RawTable } from './raw-table.js';
@@ -7,6 +7,8 @@ export interface ReadTableOptions {
   delimiter?: CsvDelimiter | undefined;
   previewRows?: number | undefined;
   keepColumns?: ColumnsToKeep | undefined;
+  /** Workbooks only: read every sheet (one increment each) rather than the first. */
+  sheets?: SheetLayout | undefined;
 }
 
 /**
@@ -15,6 +17,6 @@ export interface ReadTableOptions {
  * that reads CSV files starts quickly.
  */
 export async function readTable(bytes: Buffer, type: DetectedFileType, limits: ImportLimits, options: ReadTableOptions = {}): Promise<RawTable> {
-  if (type === 'xlsx') return (await import('./parse-xlsx-table.js')).parseXlsxTable(bytes, limits, { previewRows: options.previewRows, keepColumns: options.keepColumns });
+  if (type === 'xlsx') return (await import('./parse-xlsx-table.js')).parseXlsxTable(bytes, limits, { previewRows: options.previewRows, keepColumns: options.keepColumns, sheets: options.sheets });
   return parseCsvTable(bytes.toString('utf8'), limits, { delimiter: options.delimiter, previewRows: options.previewRows, keepColumns: options.keepColumns });
 }

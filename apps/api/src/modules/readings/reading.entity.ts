@@ -3,7 +3,7 @@ import { UploadEntity } from '../uploads/upload.entity.js';
 
 /**
  * One reading of a test, in kPa, minutes and mm (compression positive), as imported.
- * A test holds the readings of one upload at a time; the key (test, row number) needs no
+ * A test holds the readings of one upload at a time; the key (test, sheet, row number) needs no
  * generated id, which keeps COPY of 200,000 rows fast. Written only by the bulk import.
  * One foreign key, (test_id, upload_id) → uploads (test_id, id): a reading's test is its
  * upload's test, and deleting a test or an upload takes its readings along. (A key per
@@ -15,7 +15,11 @@ export class ReadingEntity {
   @PrimaryColumn('uuid', { name: 'test_id', primaryKeyConstraintName: 'readings_pkey' })
   testId!: string;
 
-  /** The row of the file it came from, as a spreadsheet numbers it (header = row 1). */
+  /** The sheet it came from: 0 for a CSV or a workbook's first sheet, n for the (n+1)th of one sheet per increment. */
+  @PrimaryColumn('smallint', { name: 'sheet_index', primaryKeyConstraintName: 'readings_pkey', default: 0 })
+  sheetIndex!: number;
+
+  /** The row of the file (of its sheet) it came from, as a spreadsheet numbers it (header = row 1). */
   @PrimaryColumn('integer', { name: 'row_number', primaryKeyConstraintName: 'readings_pkey' })
   rowNumber!: number;
 

@@ -39,7 +39,7 @@ export async function replaceReadings(
   if (walledTo !== null && walledTo !== target.orgId) throw new Error(`readings of organisation ${target.orgId} written in the work of ${walledTo}`);
   if (walledTo !== null) await client.query('SET LOCAL ROLE NONE');
   const copy = client.query(
-    copyFrom('COPY readings (test_id, row_number, organisation_id, upload_id, increment_index, stress_kpa, elapsed_min, deformation_mm) FROM STDIN'),
+    copyFrom('COPY readings (test_id, sheet_index, row_number, organisation_id, upload_id, increment_index, stress_kpa, elapsed_min, deformation_mm) FROM STDIN'),
   );
   await pipeline(Readable.from(copyChunks(target, readings, onProgress)), copy);
   if (walledTo !== null) await client.query(`SET LOCAL ROLE ${TENANT_ROLE}`);
@@ -54,7 +54,7 @@ function* copyChunks(target: ReadingsTarget, readings: ParsedReadings, onProgres
   let lines: string[] = [];
   for (let i = 0; i < readings.count; i += 1) {
     lines.push(
-      `${prefix}${readings.rowNumber[i]}${ids}${readings.incrementIndex[i]}\t${readings.stressKpa[i]}\t${readings.elapsedMin[i]}\t${readings.deformationMm[i]}\n`,
+      `${prefix}${readings.sheetIndex[i]}\t${readings.rowNumber[i]}${ids}${readings.incrementIndex[i]}\t${readings.stressKpa[i]}\t${readings.elapsedMin[i]}\t${readings.deformationMm[i]}\n`,
     );
     if (lines.length === ROWS_PER_CHUNK) {
       yield lines.join('');

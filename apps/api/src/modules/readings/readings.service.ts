@@ -7,7 +7,7 @@ import { ReadingEntity } from './reading.entity.js';
 
 /**
  * The test's stored readings as geo-core increments, in test order (the file's row order),
- * each increment's readings in time order. Empty when nothing has been imported.
+ * each increment's readings in time order (sheet by sheet, then row by row). Empty when nothing has been imported.
  * Part of the contract with the analysis job.
  */
 export async function loadIncrements(orgId: string, testId: string): Promise<ConsolidationIncrementInput[]> {
@@ -15,10 +15,10 @@ export async function loadIncrements(orgId: string, testId: string): Promise<Con
   // of float8[] instead of 200,000 row objects (measured 1.0 s → see the import benchmark).
   const rows = (await dataSource.query(
     `SELECT increment_index, min(stress_kpa) AS stress_kpa,
-            array_agg(elapsed_min ORDER BY row_number) AS elapsed_min,
-            array_agg(deformation_mm ORDER BY row_number) AS deformation_mm
+            array_agg(elapsed_min ORDER BY sheet_index, row_number) AS elapsed_min,
+            array_agg(deformation_mm ORDER BY sheet_index, row_number) AS deformation_mm
        FROM readings WHERE organisation_id = $1 AND test_id = $2
-      GROUP BY increment_index ORDER BY min(row_number)`,
+      GROUP BY increment_index ORDER BY min(sheet_index), min(row_number)`,
     [orgId, testId],
   )) as Array<{ increment_index: number; stress_kpa: number; elapsed_min: number[]; deformation_mm: number[] }>;
   return rows.map((row) => ({
@@ -43,7 +43,7 @@ export async function loadSpecimenValues(orgId: string, testId: string): Promise
 export async function listReadings(orgId: string, testId: string, page: ReadingsPageQuery): Promise<ReadingsPage> {
   const repo = dataSource.getRepository(ReadingEntity);
   const [rows, total] = await Promise.all([
-    repo.find({ where: { organisationId: orgId, testId }, order: { rowNumber: 'ASC' }, skip: page.offset, take: page.limit }),
+    repo.find({ where: { organisationId: orgId, testId }, order: { sheetIndex: 'ASC', rowNumber: 'ASC' }, skip: page.offset, take: page.limit }),
     repo.countBy({ organisationId: orgId, testId }),
   ]);
   return {
@@ -51,6 +51,7 @@ export async function listReadings(orgId: string, testId: string, page: Readings
     offset: page.offset,
     limit: page.limit,
     readings: rows.map((row) => ({
+      sheetIndex: row.sheetIndex,
       rowNumber: row.rowNumber,
       incrementIndex: row.incrementIndex,
       stressKpa: row.stressKpa,
@@ -63,12 +64,12 @@ export async function listReadings(orgId: string, testId: string, page: Readings
 async function listIncrementReadings(orgId: string, testId: string, incrementIndex: number, offset: number, limit: number): Promise<ReadingsPage> {
   const repo = dataSource.getRepository(ReadingEntity);
   const where = { organisationId: orgId, testId, incrementIndex };
-  const [rows, total] = await Promise.all([repo.find({ where, order: { rowNumber: 'ASC' }, skip: offset, take: limit }), repo.countBy(where)]);
+  const [rows, total] = await Promise.all([repo.find({ where, order: { sheetIndex: 'ASC', rowNumber: 'ASC' }, skip: offset, take: limit }), repo.countBy(where)]);
   return {
     total,
     offset,
     limit,
-    readings: rows.map((r) => ({ rowNumber: r.rowNumber, incrementIndex: r.incrementIndex, stressKpa: r.stressKpa, elapsedMin: r.elapsedMin, deformationMm: r.deformationMm })),
+    readings: rows.map((r) => ({ sheetIndex: r.sheetIndex, rowNumber: r.rowNumber, incrementIndex: r.incrementIndex, stressKpa: r.stressKpa, elapsedMin: r.elapsedMin, deformationMm: r.deformationMm })),
   };
 }
 

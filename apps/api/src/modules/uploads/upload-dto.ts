@@ -1,7 +1,7 @@
-import type { Upload } from '@porestack/types';
+import type { SameFile, Upload } from '@porestack/types';
 import type { UploadEntity } from './upload.entity.js';
 
-export function toUpload(row: UploadEntity, uploaderName: string): Upload {
+export function toUpload(row: UploadEntity, uploaderName: string, sameFileIn: SameFile[]): Upload {
   return {
     id: row.id,
     testId: row.testId,
@@ -16,5 +16,8 @@ export function toUpload(row: UploadEntity, uploaderName: string): Upload {
     incrementCount: row.incrementCount,
     failure: row.failure,
     mapping: row.mapping,
+    notes: row.notes,
+    noteCount: row.noteCount,
+    sameFileIn,
   };
 }

@@ -1,4 +1,4 @@
-import type { DetectedFileType, ImportIssue, ImportMapping, UploadStatus } from '@porestack/types';
+import type { DetectedFileType, ImportIssue, ImportMapping, ImportNote, UploadStatus } from '@porestack/types';
 import { Column, CreateDateColumn, Entity, Index, JoinColumn, ManyToOne, PrimaryGeneratedColumn, type Relation } from 'typeorm';
 import { ConsolidationTestEntity } from '../consolidation-tests/consolidation-test.entity.js';
 import { UserEntity } from '../users/user.entity.js';
@@ -20,6 +20,8 @@ export interface UploadFailure {
 @Index('uploads_test_id_created_at_idx', ['testId', 'createdAt'])
 // The target of the readings' (test_id, upload_id) foreign key.
 @Index('uploads_test_id_id_key', ['testId', 'id'], { unique: true })
+// Another test holding the same file is looked up by its hash on every upload.
+@Index('uploads_organisation_id_sha256_idx', ['organisationId', 'sha256'])
 export class UploadEntity {
   @PrimaryGeneratedColumn('uuid')
   id!: string;
@@ -68,6 +70,13 @@ export class UploadEntity {
 
   @Column('jsonb', { nullable: true })
   failure!: UploadFailure | null;
+
+  /** What the last import dropped, replaced or found implausible (first 200). */
+  @Column('jsonb', { default: () => "'[]'" })
+  notes!: ImportNote[];
+
+  @Column('integer', { name: 'note_count', default: 0 })
+  noteCount!: number;
 
   @Column('integer', { name: 'reading_count', nullable: true })
   readingCount!: number | null;

@@ -36,3 +36,6 @@ export const profileNameTaken = (name: string) =>
   new DomainError('profile_name_taken', `An import profile named “${name}” already exists in this organisation. Choose another name, or use the saved profile.`, [
     { path: 'name', message: 'Already in use.' },
   ]);
+
+export const importRunning = () =>
+  new DomainError('invalid_transition', 'This file is being read now. Wait until its import ends (the page follows it), then change the mapping if you need to.');

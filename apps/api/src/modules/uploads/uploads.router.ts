@@ -1,4 +1,4 @@
-import { CsvDelimiterSchema, ImportRequestSchema } from '@porestack/types';
+import { CsvDelimiterSchema, ImportRequestSchema, ImportTrialRequestSchema } from '@porestack/types';
 import type { Router } from 'express';
 import { z } from 'zod';
 import { uuidParam } from '../../http/params.js';
@@ -8,9 +8,12 @@ import { defineRoutes } from '../../http/routes.js';
 import { receiveFile } from './receive-file.js';
 import { fileMissing } from './upload.exception.js';
 import { IMPORTERS, UPLOAD_READERS } from './upload-roles.js';
-import { createUpload, findUpload, listUploads, openDownload, previewUpload, requestImport } from './uploads.service.js';
+import { createUpload, findUpload, listUploads, openDownload, previewUpload, requestImport, trialImport } from './uploads.service.js';
 
-const PreviewQuerySchema = z.object({ delimiter: CsvDelimiterSchema.optional() });
+const PreviewQuerySchema = z.object({
+  delimiter: CsvDelimiterSchema.optional(),
+  headerRow: z.coerce.number({ error: 'headerRow must be the number of the row that holds the column names, e.g. 4.' }).int('headerRow must be a whole number, e.g. 4.').min(1, 'headerRow counts from 1 (the first row).').max(100, 'headerRow may be at most 100.').optional(),
+});
 
 /** RFC 6266 / 5987: an ASCII fallback and the exact UTF-8 name. */
 function attachment(name: string): string {
@@ -72,7 +75,16 @@ export function uploadsRouter(): Router {
       access: UPLOAD_READERS,
       handler: async (req, res) => {
         const query = parse(PreviewQuerySchema, req.query);
-        res.json(await previewUpload(currentTenant(req).orgId, uuidParam(req, 'uploadId', 'upload'), query.delimiter));
+        res.json(await previewUpload(currentTenant(req).orgId, uuidParam(req, 'uploadId', 'upload'), query));
+      },
+    },
+    {
+      method: 'post',
+      path: '/uploads/:uploadId/trial',
+      access: IMPORTERS,
+      handler: async (req, res) => {
+        const { mapping } = parse(ImportTrialRequestSchema, req.body);
+        res.json(await trialImport(currentTenant(req).orgId, uuidParam(req, 'uploadId', 'upload'), mapping));
       },
     },
     {

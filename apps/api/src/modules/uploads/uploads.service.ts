@@ -1,27 +1,36 @@
 import { createHash, randomUUID } from 'node:crypto';
 import type { Readable } from 'node:stream';
-import { isFrozenTestStatus, type CsvDelimiter, type ImportMapping, type ImportRequest, type JobRun, type Upload, type UploadPreview } from '@porestack/types';
+import { isFrozenTestStatus, type CsvDelimiter, type ImportMapping, type ImportRequest, type ImportTrial, type JobRun, type Upload, type UploadPreview } from '@porestack/types';
+import type { EntityManager } from 'typeorm';
 import { dataSource } from '../../data-source.js';
 import { NotFoundError } from '../../errors/domain-error.js';
 import { logger } from '../../http/logger.js';
-import { enqueueImport } from '../../jobs/import-readings-queue.js';
+import { enqueueImport, IMPORT_READINGS_QUEUE, STALE_RUNNING_MINUTES } from '../../jobs/import-readings-queue.js';
 import { audit } from '../audit/audit.service.js';
 import { findTestOrThrow } from '../consolidation-tests/consolidation-tests.service.js';
 import { importProfiles } from '../import-profiles/import-profiles.service.js';
 import { jobRuns } from '../job-runs/job-runs.service.js';
-import { detectLayout, headerOf, suggestMapping } from '../readings-import/detect-layout.js';
+import { detectLayout } from '../readings-import/detect-layout.js';
+import { guessMapping } from '../readings-import/guess-mapping.js';
 import { ImportProblem } from '../readings-import/import-problem.js';
+import { canonicalSuggestion, guessedSuggestion, matchingProfile, profileSuggestion } from '../readings-import/mapping-suggestion.js';
+import { firstSheetRows, headerOf } from '../readings-import/raw-table.js';
 import { importLimits, parseDeadlineMs } from '../readings-import/import-limits.js';
 import { parseOffThread } from '../readings-import/parse-pool.js';
 import { sniffFileType } from '../readings-import/sniff-file-type.js';
 import { UserEntity } from '../users/user.entity.js';
 import { toUpload } from './upload-dto.js';
 import { UploadEntity } from './upload.entity.js';
-import { fileRefused, readingsLocked } from './upload.exception.js';
+import { fileRefused, importRunning, readingsLocked } from './upload.exception.js';
+import { sameFilesOf } from './same-file.js';
 import { getUploadObject, getUploadObjectStart, putUploadObject, removeUploadObject, streamUploadObject, uploadObjectKey } from './upload-object.js';
 
 const CONTENT_TYPES = { csv: 'text/csv; charset=utf-8', xlsx: 'application/vnd.openxmlformats-officedocument.spreadsheetml.sheet' } as const;
 const PREVIEW_ROWS = 20;
+/** Rows a preview reads for its guesses (the first increment and the start of the second, mostly). */
+const GUESS_ROWS = 1000;
+/** Rows from the top shown to choose the header row from (title rows included). */
+const TOP_ROWS = 15;
 /** A CSV preview reads at most this much of the file. */
 const CSV_PREVIEW_BYTES = 256 * 1024;
 
@@ -89,7 +98,8 @@ export async function createUpload(orgId: string, testId: string, actor: Actor, 
       const jobRunId = await enqueueImport({ orgId, testId, uploadId, actorId: actor.id, sizeBytes: file.bytes.length, mapping: null }, manager);
       return { upload, jobRunId };
     });
-    return { upload: toUpload(upload, actor.name), job: await jobRuns.find(orgId, jobRunId) };
+    const sameFiles = await sameFilesOf(orgId, [upload]);
+    return { upload: toUpload(upload, actor.name, sameFiles.get(upload.id) ?? []), job: await jobRuns.find(orgId, jobRunId) };
   } catch (error) {
     await removeUploadObject(objectKey).catch((removeError: unknown) => logger.error({ err: removeError, objectKey }, 'could not remove the object of a failed upload'));
     throw error;
@@ -110,7 +120,8 @@ async function uploaderNames(ids: string[]): Promise<Map<string, string>> {
 
 export async function findUpload(orgId: string, uploadId: string): Promise<Upload> {
   const row = await findUploadRow(orgId, uploadId);
-  return toUpload(row, (await uploaderNames([row.uploadedById])).get(row.uploadedById) ?? '');
+  const sameFiles = await sameFilesOf(orgId, [row]);
+  return toUpload(row, (await uploaderNames([row.uploadedById])).get(row.uploadedById) ?? '', sameFiles.get(row.id) ?? []);
 }
 
 /** The test's uploads, newest first. */
@@ -118,13 +129,14 @@ export async function listUploads(orgId: string, testId: string): Promise<Upload
   await findTestOrThrow(orgId, testId);
   const rows = await dataSource.getRepository(UploadEntity).find({ where: { organisationId: orgId, testId }, order: { createdAt: 'DESC' } });
   const names = await uploaderNames([...new Set(rows.map((row) => row.uploadedById))]);
-  return rows.map((row) => toUpload(row, names.get(row.uploadedById) ?? ''));
+  const sameFiles = await sameFilesOf(orgId, rows);
+  return rows.map((row) => toUpload(row, names.get(row.uploadedById) ?? '', sameFiles.get(row.id) ?? []));
 }
 
 /** The original bytes, as uploaded, with the name they had. */
 export async function openDownload(orgId: string, uploadId: string): Promise<{ upload: Upload; contentType: string; stream: Readable }> {
   const row = await findUploadRow(orgId, uploadId);
-  return { upload: toUpload(row, ''), contentType: CONTENT_TYPES[row.detectedType], stream: await streamUploadObject(row.objectKey) };
+  return { upload: toUpload(row, '', []), contentType: CONTENT_TYPES[row.detectedType], stream: await streamUploadObject(row.objectKey) };
 }
 
 /**
@@ -138,27 +150,59 @@ async function previewBytes(row: UploadEntity): Promise<Buffer> {
   return lastLineEnd > 0 ? start.subarray(0, lastLineEnd + 1) : start;
 }
 
-/** The first rows, the detected layout and a suggested mapping, for the mapping step. */
-export async function previewUpload(orgId: string, uploadId: string, delimiter?: CsvDelimiter): Promise<UploadPreview> {
+/**
+ * The first rows (title rows included), the header row — the one asked for, or the one
+ * detected below any title rows — its column names and the rows below it, and the mapping
+ * to start from: a saved profile that fits the file, else a guess from its header and
+ * values (guessMapping), with what each guess rests on and what is left to choose.
+ */
+export async function previewUpload(orgId: string, uploadId: string, query: { delimiter?: CsvDelimiter | undefined; headerRow?: number | undefined } = {}): Promise<UploadPreview> {
+  const row = await findUploadRow(orgId, uploadId);
+  const bytes = await previewBytes(row);
+  let table;
+  try {
+    ({ table } = await parseOffThread(
+      { kind: 'preview', bytes, type: row.detectedType, limits: importLimits(), delimiter: query.delimiter, previewRows: GUESS_ROWS },
+      parseDeadlineMs(bytes.length, 'preview'),
+    ));
+  } catch (error) {
+    if (error instanceof ImportProblem) throw fileRefused(error);
+    throw error;
+  }
+  const layout = detectLayout(table);
+  const chosenRow = query.headerRow ?? null;
+  const guessed = guessMapping(table, chosenRow);
+  const profile = matchingProfile(table, await importProfiles.list(orgId), chosenRow);
+  const suggestion = layout === 'canonical' && (chosenRow ?? 1) === 1 ? canonicalSuggestion() : profile ? profileSuggestion(profile) : guessedSuggestion(guessed);
+  const headerRow = suggestion.guess.headerRow;
+  const rows = firstSheetRows(table);
+  return {
+    uploadId,
+    detectedType: row.detectedType,
+    layout,
+    delimiter: table.delimiter,
+    headerRow,
+    detectedHeaderRow: guessed.detectedHeaderRow,
+    topRows: rows.slice(0, TOP_ROWS).map((r) => ({ rowNumber: r.rowNumber, cells: [...r.cells] })),
+    columns: headerOf(rows, headerRow),
+    rows: rows.filter((r) => r.rowNumber > headerRow).slice(0, PREVIEW_ROWS).map((r) => [...r.cells]),
+    sheets: row.detectedType === 'xlsx' ? table.sheets.map((sheet) => sheet.name ?? '') : [],
+    suggestion,
+    specimen: table.specimen,
+  };
+}
+
+/**
+ * Reads the first increment of a stored upload with a mapping, before importing: each
+ * reading's cells as written beside the minutes and millimetres they become, and the
+ * problems in those rows. Reads what a preview reads (a CSV's first 256 kB), on a parse thread.
+ */
+export async function trialImport(orgId: string, uploadId: string, mapping: ImportMapping): Promise<ImportTrial> {
   const row = await findUploadRow(orgId, uploadId);
   const bytes = await previewBytes(row);
   try {
-    const { table } = await parseOffThread(
-      { kind: 'preview', bytes, type: row.detectedType, limits: importLimits(), delimiter, previewRows: PREVIEW_ROWS + 1 },
-      parseDeadlineMs(bytes.length, 'preview'),
-    );
-    const layout = detectLayout(table);
-    const columns = headerOf(table);
-    return {
-      uploadId,
-      detectedType: row.detectedType,
-      layout,
-      delimiter: table.delimiter,
-      columns,
-      rows: table.rows.slice(1, PREVIEW_ROWS + 1).map((r) => [...r.cells]),
-      suggestedMapping: layout === 'canonical' ? null : suggestMapping(columns),
-      specimen: table.specimen,
-    };
+    const { trial } = await parseOffThread({ kind: 'trial', bytes, type: row.detectedType, limits: importLimits(), mapping, previewRows: GUESS_ROWS }, parseDeadlineMs(bytes.length, 'preview'));
+    return trial;
   } catch (error) {
     if (error instanceof ImportProblem) throw fileRefused(error);
     throw error;
@@ -173,15 +217,27 @@ export async function requestImport(orgId: string, uploadId: string, actor: Acto
   const row = await findUploadRow(orgId, uploadId);
   await assertReadingsMayChange(orgId, row.testId);
   const jobRunId = await dataSource.transaction(async (manager) => {
+    // A stored file may be mapped again at any time (nothing is uploaded again), but not while it is being read.
+    await manager.query('SELECT id FROM uploads WHERE id = $1 FOR UPDATE', [uploadId]);
+    if (await importUnderWay(manager, uploadId)) throw importRunning();
     let mapping: ImportMapping;
-    if ('profileId' in request) {
+    if (request.profileId !== undefined) {
       mapping = (await importProfiles.find(orgId, request.profileId, manager)).mapping;
     } else {
-      mapping = request.mapping;
+      mapping = request.mapping as ImportMapping;
       if (request.saveAsProfile) await importProfiles.create(orgId, actor.id, { name: request.saveAsProfile, mapping }, manager);
     }
     await manager.getRepository(UploadEntity).update({ organisationId: orgId, id: uploadId }, { status: 'importing', mapping, failure: null });
     return enqueueImport({ orgId, testId: row.testId, uploadId, actorId: actor.id, sizeBytes: row.sizeBytes, mapping }, manager);
   });
   return jobRuns.find(orgId, jobRunId);
+}
+
+async function importUnderWay(manager: EntityManager, uploadId: string): Promise<boolean> {
+  const rows = (await manager.query(
+    `SELECT 1 FROM job_runs WHERE upload_id = $1 AND kind = $2 AND state IN ('queued', 'running')
+        AND updated_at > now() - make_interval(mins => $3) LIMIT 1`,
+    [uploadId, IMPORT_READINGS_QUEUE, STALE_RUNNING_MINUTES],
+  )) as unknown[];
+  return rows.length > 0;
 }

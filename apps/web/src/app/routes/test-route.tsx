@@ -109,7 +109,7 @@ function ReadingsSection({ orgId, test, canImport }: { orgId: string; test: Test
   return (
     <div className="space-y-6">
       <Panel title="Readings file" description="The canonical layout imports at once; any other layout asks which column holds what.">
-        <UploadPanel orgId={orgId} testId={test.id} canUpload={canImport} />
+        <UploadPanel orgId={orgId} testId={test.id} canUpload={canImport} specimenHeightMm={test.specimen.initialHeightMm} />
       </Panel>
       <Panel title="All readings" flush>
         <ReadingsTable key={test.latestUploadId ?? 'none'} orgId={orgId} testId={test.id} />

@@ -3,10 +3,12 @@ import { CANONICAL_MAPPING, detectLayout } from '../detect-layout.js';
 import { LOGGER_MAPPING } from '../demo-files.js';
 import { ImportProblem } from '../import-problem.js';
 import { parseXlsxTable } from '../parse-xlsx-table.js';
-import { readReadings } from '../read-readings.js';
+import { readReadings as readWithNotes } from '../read-readings.js';
+import { firstSheetRows } from '../raw-table.js';
 import { fixture, workbook } from './import-test-files.js';
 
 const LIMITS = { maxFileBytes: 40 * 1024 * 1024, maxRows: 500_000 };
+const readReadings = (...args: Parameters<typeof readWithNotes>) => readWithNotes(...args).readings;
 
 async function problemOf(run: () => Promise<unknown>): Promise<ImportProblem> {
   const error = await run().then(
@@ -63,7 +65,7 @@ describe('parseXlsxTable(bytes)', () => {
     });
     const problem = await problemOf(() => parseXlsxTable(bytes, LIMITS));
     expect(problem.message).toBe("Sheet 'readings' has merged cells (B2:B4). Readings need one value per cell: unmerge the cells, fill in each row's value, save and upload again.");
-    expect(problem.issues).toEqual([{ row: 2, column: 'B2:B4', message: 'Cells B2:B4 are merged; unmerge them and give each row its own value.' }]);
+    expect(problem.issues).toEqual([{ row: 2, column: 'B2:B4', message: 'Cells B2:B4 are merged; unmerge them and give each row its own value.', sheet: 'readings' }]);
   });
 
   it('refuses a damaged workbook with advice to save it again', async () => {
@@ -89,13 +91,13 @@ describe('parseXlsxTable(bytes)', () => {
       sheet.addRow([1, 25, 0, 0, null, 'kept out', null, null]);
     });
     const parsed = await parseXlsxTable(bytes, LIMITS, { keepColumns: { headerRow: 1, names: ['increment', 'stress_kpa', 'elapsed_min', 'deformation_mm'] } });
-    expect(parsed.rows[0]?.cells).toEqual(['increment', 'stress_kpa', 'elapsed_min', 'deformation_mm', null, 'logger note']);
-    expect(parsed.rows[1]?.cells).toEqual([1, 25, 0, 0]);
+    expect(firstSheetRows(parsed)[0]?.cells).toEqual(['increment', 'stress_kpa', 'elapsed_min', 'deformation_mm', null, 'logger note']);
+    expect(firstSheetRows(parsed)[1]?.cells).toEqual([1, 25, 0, 0]);
   });
 
   it('stops a preview at its rows and still reads the specimen sheet after them', async () => {
     const parsed = await parseXlsxTable(fixture('canonical.xlsx'), LIMITS, { previewRows: 5 });
-    expect(parsed.rows.map((row) => row.rowNumber)).toEqual([1, 2, 3, 4, 5]);
+    expect(firstSheetRows(parsed).map((row) => row.rowNumber)).toEqual([1, 2, 3, 4, 5]);
     expect(parsed.specimen).toMatchObject({ initial_height_mm: 20, drainage: 'double' });
   });
 });

@@ -2,13 +2,17 @@ import type { ImportMapping } from '@porestack/types';
 import { describe, expect, it } from 'vitest';
 import { demoReadings } from '../demo-readings.js';
 import { LOGGER_MAPPING } from '../demo-files.js';
-import { CANONICAL_MAPPING, detectLayout, headerOf, suggestMapping } from '../detect-layout.js';
+import { CANONICAL_MAPPING, detectLayout } from '../detect-layout.js';
+import { firstSheetRows, headerOf } from '../raw-table.js';
 import { ImportProblem } from '../import-problem.js';
 import { parseCsvTable } from '../parse-csv-table.js';
-import { readReadings } from '../read-readings.js';
+import { readReadings as readWithNotes } from '../read-readings.js';
 import { csv, fixture } from './import-test-files.js';
 
 const LIMITS = { maxFileBytes: 40 * 1024 * 1024, maxRows: 500_000 };
+
+/** The readings alone (the notes are looked at where a test is about them). */
+const readReadings = (...args: Parameters<typeof readWithNotes>) => readWithNotes(...args).readings;
 
 function table(bytes: Buffer, limits = LIMITS) {
   return parseCsvTable(bytes.toString('utf8'), limits);
@@ -40,7 +44,7 @@ describe('parseCsvTable(text) and detectLayout(table)', () => {
     const parsed = table(fixture('bench-logger.csv'));
     expect(parsed.delimiter).toBe(';');
     expect(detectLayout(parsed)).toBe('needs_mapping');
-    expect(headerOf(parsed)).toEqual(['Stage', 'Load (kgf/cm2)', 'Time (s)', 'Dial (div)']);
+    expect(headerOf(firstSheetRows(parsed))).toEqual(['Stage', 'Load (kgf/cm2)', 'Time (s)', 'Dial (div)']);
   });
 
   it('when the chosen delimiter finds one column, names the delimiter the file seems to use', () => {
@@ -56,8 +60,8 @@ describe('parseCsvTable(text) and detectLayout(table)', () => {
 
   it('drops blank lines and lines of empty cells but keeps each row’s number as a spreadsheet shows it', () => {
     const parsed = table(Buffer.from(`increment,stress_kpa,elapsed_min,deformation_mm\n${'\n'.repeat(50_000)},,,,\n1,25,0,0\n`));
-    expect(parsed.rows.map((row) => row.rowNumber)).toEqual([1, 50_003]);
-    expect(parsed.rows[1]?.cells).toEqual(['1', '25', '0', '0']);
+    expect(firstSheetRows(parsed).map((row) => row.rowNumber)).toEqual([1, 50_003]);
+    expect(firstSheetRows(parsed)[1]?.cells).toEqual(['1', '25', '0', '0']);
   });
 
   it('refuses a row wider than 256 columns, naming the row', () => {
@@ -116,11 +120,16 @@ describe('readReadings(table, mapping)', () => {
     expect(problem.issues[1]?.message).toContain('time goes backwards within increment 1: 2 after 4 at row 3');
   });
 
-  it('rejects a repeated row and a second reading at the same time', () => {
-    const problem = problemOf(() => read(csv('1,25,0,0', '1,25,1,0.1', '1,25,1,0.1', '1,25,2,0.2', '1,25,2,0.25')));
-    expect(problem.issues.map((issue) => issue.message)).toEqual([
-      'Row 4: repeats row 3 (increment 1 at 1); remove the duplicate row.',
-      'Row 6: a second reading of increment 1 at 2 (row 5 has one); keep one reading per time.',
+  it('drops a row repeating the one before it and keeps the later of two readings at one time, listing both as notes', () => {
+    const { readings, notes, noteCount } = readWithNotes(table(csv('1,25,0,0', '1,25,1,0.1', '1,25,1,0.1', '1,25,2,0.2', '1,25,2,0.25', '1,25,3,0.3')), CANONICAL_MAPPING);
+    expect(Array.from(readings.elapsedMin)).toEqual([0, 1, 2, 3]);
+    expect(Array.from(readings.deformationMm)).toEqual([0, 0.1, 0.25, 0.3]);
+    // The kept reading is traced to the row it came from.
+    expect(Array.from(readings.rowNumber)).toEqual([2, 3, 6, 7]);
+    expect(noteCount).toBe(2);
+    expect(notes).toEqual([
+      { kind: 'dropped', row: 4, column: null, message: 'Row 4 repeats row 3 exactly (increment 1 at 1); the repeat was dropped.' },
+      { kind: 'replaced', row: 6, column: 'deformation_mm', message: 'Row 6 is a second reading of increment 1 at 2 (0.25; row 5 read 0.2); the later reading was kept.' },
     ]);
   });
 
@@ -191,12 +200,4 @@ describe('readReadings(table, mapping)', () => {
     expect(Array.from(readings.deformationMm).map((d) => Math.round(d * 1000) / 1000)).toEqual([0, 0.2, 0.2, 0.6]);
   });
 
-  it('suggests the logger mapping from its column names', () => {
-    expect(suggestMapping(['Stage', 'Load (kgf/cm2)', 'Time (s)', 'Dial (div)'])).toMatchObject({
-      columns: LOGGER_MAPPING.columns,
-      units: LOGGER_MAPPING.units,
-      deformationReading: { kind: 'dial', increasesWithCompression: true },
-    });
-    expect(suggestMapping(['a', 'b'])).toBeNull();
-  });
 });

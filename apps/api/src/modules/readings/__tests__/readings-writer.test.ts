@@ -14,6 +14,7 @@ function syntheticReadings(count: number, duplicateAt?: number): ParsedReadings 
   const readings = {
     count,
     incrementCount: 20,
+    sheetIndex: new Int16Array(count),
     rowNumber: new Int32Array(count),
     incrementIndex: new Int32Array(count),
     stressKpa: new Float64Array(count),

@@ -5,7 +5,7 @@ import { createApp } from '../../../app.js';
 import { dataSource } from '../../../data-source.js';
 import { stopJobQueue } from '../../../jobs/boss.js';
 import { createMember, signedInBrowser, signUpAdmin, type Browser } from '../../../testing/browser.js';
-import { readingCount, sendFile, startImportWorker, stopImportWorker, storedObjectCount, uploadAndWait, uploadRowCount } from '../../../testing/import-harness.js';
+import { finishedJob, readingCount, sendFile, startImportWorker, stopImportWorker, storedObjectCount, uploadAndWait, uploadRowCount } from '../../../testing/import-harness.js';
 import { draftTest } from '../../../testing/lab-fixtures.js';
 import { csv, fixture, workbook } from '../../readings-import/__tests__/import-test-files.js';
 
@@ -125,10 +125,6 @@ describe('files stored but rejected by the import: the job says why and the old 
     expect((await rejected(csv('1,25,0,0', '1,25,8,0.1', '1,25,4,0.2'), 'backwards.csv')).message).toContain('Row 4, column elapsed_min: time goes backwards within increment 1: 4 after 8 at row 3');
   });
 
-  it('duplicate rows', async () => {
-    expect((await rejected(csv('1,25,0,0', '1,25,1,0.1', '1,25,1,0.1'), 'duplicate.csv')).message).toContain('Row 4: repeats row 3 (increment 1 at 1); remove the duplicate row.');
-  });
-
   it('an XLSX with a formula that has no saved result', async () => {
     const bytes = await workbook((sheet) => {
       sheet.addRow([1, 25, 0, 0]);
@@ -151,5 +147,51 @@ describe('files stored but rejected by the import: the job says why and the old 
     const rows = Array.from({ length: 500_001 }, (_, i) => `1,25,${i},0`);
     const bytes = Buffer.from(`increment,stress_kpa,elapsed_min,deformation_mm\n${rows.join('\n')}\n`);
     expect((await rejected(bytes, 'long.csv')).message).toContain('more than 500,000 rows of readings, the most one upload may hold');
+  });
+});
+
+describe('files imported with notes: nothing dropped or doubted in silence', () => {
+  it('when a logger repeats a row and writes two readings at one time, then the repeat is dropped, the later reading kept, and both are listed on the upload and in the job', async () => {
+    const { testId: fresh } = await draftTest(orgId, technicianId);
+    const { upload, job } = await uploadAndWait(technician, orgId, fresh, csv('1,25,0,0', '1,25,1,0.1', '1,25,1,0.1', '1,25,2,0.2', '1,25,2,0.22', '2,50,0,0.3', '2,50,1,0.5'), 'repeats.csv');
+    expect(job).toMatchObject({ state: 'succeeded' });
+    expect(job.message).toBe('Imported 5 readings in 2 increments; the analysis is queued. 1 repeated row dropped; 1 reading at a repeated time replaced by the later one: see the notes on the upload.');
+    const stored = (await technician.get(`/api/orgs/${orgId}/uploads/${upload.id}`).expect(200)).body as Upload;
+    expect(stored.noteCount).toBe(2);
+    expect(stored.notes.map((note) => [note.kind, note.row])).toEqual([
+      ['dropped', 4],
+      ['replaced', 6],
+    ]);
+    const kept = (await dataSource.query('SELECT row_number, deformation_mm FROM readings WHERE test_id = $1 ORDER BY row_number', [fresh])) as Array<{ row_number: number; deformation_mm: number }>;
+    expect(kept.map((row) => [row.row_number, row.deformation_mm])).toEqual([
+      [2, 0],
+      [3, 0.1],
+      [6, 0.22],
+      [7, 0.3],
+      [8, 0.5],
+    ]);
+  });
+
+  it('when the deformations are far too small for the specimen (inches read as 0.001 mm divisions), then the file is imported with a check that says what to look at', async () => {
+    const { testId: fresh } = await draftTest(orgId, technicianId);
+    const { upload } = await uploadAndWait(technician, orgId, fresh, Buffer.from('inc,p,t,dial\n1,25,0,0.5\n1,25,1,0.498\n1,25,2,0.496\n'), 'inches.csv');
+    const mapping = {
+      columns: { increment: 'inc', stress: 'p', elapsedTime: 't', deformation: 'dial' },
+      units: { stress: 'kPa', time: 'min', deformation: 'mm' },
+      deformationReading: { kind: 'dial', divisionSize: 0.001, increasesWithCompression: false },
+    };
+    const run = (await technician.post(`/api/orgs/${orgId}/uploads/${upload.id}/import`, { mapping }).expect(202)).body as { id: string };
+    const job = await finishedJob(technician, orgId, run.id);
+    expect(job.state).toBe('succeeded');
+    const stored = (await technician.get(`/api/orgs/${orgId}/uploads/${upload.id}`).expect(200)).body as Upload;
+    // 0.004 divisions of 0.001 mm = 0.000004 mm on the 20 mm specimen of the fixture: 0.00002 %.
+    expect(stored.notes).toEqual([
+      {
+        kind: 'check',
+        row: null,
+        column: null,
+        message: "The largest compression is 0.000004 mm, 0.00002 % of the specimen's 20 mm height — too little for a consolidation test. Check the gauge's division size and the deformation unit in the mapping (a reading in mm or inches taken as divisions gives this), then import again.",
+      },
+    ]);
   });
 });

@@ -98,8 +98,8 @@ describe('uploading the canonical layout', () => {
       offset: 15,
       limit: 2,
       readings: [
-        { rowNumber: 17, incrementIndex: 2, stressKpa: 25, elapsedMin: 0, deformationMm: demoReadings()[15]?.deformationMm },
-        { rowNumber: 18, incrementIndex: 2, stressKpa: 25, elapsedMin: 0.1, deformationMm: demoReadings()[16]?.deformationMm },
+        { sheetIndex: 0, rowNumber: 17, incrementIndex: 2, stressKpa: 25, elapsedMin: 0, deformationMm: demoReadings()[15]?.deformationMm },
+        { sheetIndex: 0, rowNumber: 18, incrementIndex: 2, stressKpa: 25, elapsedMin: 0.1, deformationMm: demoReadings()[16]?.deformationMm },
       ],
     });
   });
@@ -145,14 +145,20 @@ describe('the mapping step and import profiles', () => {
     const { testId } = await draftTest(orgId, technicianId);
     const { upload, job } = await uploadAndWait(technician, orgId, testId, fixture('bench-logger.xlsx'), 'logger.xlsx');
     expect(job).toMatchObject({ state: 'succeeded', result: { needsMapping: true } });
-    expect(job.message).toContain('choose which column holds what');
+    expect(job.message).toContain('check the mapping guessed below');
     expect(await readingCount(testId)).toBe(0);
 
     const preview = (await technician.get(`/api/orgs/${orgId}/uploads/${upload.id}/preview`).expect(200)).body as UploadPreview;
     expect(preview).toMatchObject({ layout: 'needs_mapping', detectedType: 'xlsx', columns: ['Stage', 'Load (kgf/cm2)', 'Time (s)', 'Dial (div)'] });
     expect(preview.rows[0]).toEqual([1, 0.127465, 0, 5000]);
     expect(preview.rows).toHaveLength(20);
-    expect(preview.suggestedMapping?.columns).toEqual(LOGGER_MAPPING.columns);
+    // Everything is guessed from the header and the values but the size of a "div": that is asked.
+    expect(preview.suggestion).toMatchObject({ source: 'guess', open: ['dialDivision'], mapping: null });
+    expect(preview.suggestion.guess).toMatchObject({
+      columns: LOGGER_MAPPING.columns,
+      units: LOGGER_MAPPING.units,
+      deformationReading: { kind: 'dial', zeroReading: null, divisionSize: null, increasesWithCompression: false },
+    });
 
     const imported = (await technician.post(`/api/orgs/${orgId}/uploads/${upload.id}/import`, { mapping: LOGGER_MAPPING, saveAsProfile: 'Bench logger B' }).expect(202)).body as JobRun;
     expect((await finishedJob(technician, orgId, imported.id)).state).toBe('succeeded');
@@ -170,6 +176,19 @@ describe('the mapping step and import profiles', () => {
     const job = (await technician.post(`/api/orgs/${orgId}/uploads/${upload.id}/import`, { profileId: profile.id }).expect(202)).body as JobRun;
     expect((await finishedJob(technician, orgId, job.id)).state).toBe('succeeded');
     expect(await readingCount(testId)).toBe(150);
+  });
+
+  it('when a saved profile maps columns the file has, then the preview starts from the profile, not a guess; asked for another header row, from the guess', async () => {
+    await technician.post(`/api/orgs/${orgId}/import-profiles`, { name: 'Bench logger (profile test)', mapping: LOGGER_MAPPING }).expect(201);
+    const { testId } = await draftTest(orgId, technicianId);
+    const { upload } = await uploadAndWait(technician, orgId, testId, fixture('bench-logger.csv'), 'logger.csv');
+    const preview = (await technician.get(`/api/orgs/${orgId}/uploads/${upload.id}/preview`).expect(200)).body as UploadPreview;
+    expect(preview.suggestion).toMatchObject({ source: 'profile', open: [], mapping: LOGGER_MAPPING });
+    expect(preview.suggestion.profile?.name).toEqual(expect.any(String));
+    const other = (await technician.get(`/api/orgs/${orgId}/uploads/${upload.id}/preview?headerRow=2`).expect(200)).body as UploadPreview;
+    expect(other.suggestion.source).toBe('guess');
+    expect(other.headerRow).toBe(2);
+    expect(other.columns).toEqual(['1', '0.127465', '0', '5000']);
   });
 
   it('when a profile name is taken (in any case), then 409 names it', async () => {

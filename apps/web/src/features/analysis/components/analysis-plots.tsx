@@ -1,4 +1,4 @@
-import { useMemo } from 'react';
+import { useMemo, useState } from 'react';
 import { ErrorMessage } from '../../../components/error-message';
 import { PlotlyChart, type PlotLayout } from '../../../components/plot/plotly-chart';
 import { Select } from '../../../components/select';
@@ -9,7 +9,7 @@ import { coefficientTraces, compressionTraces, logTimeTraces, PLOT_COLOURS, tayl
 
 const LOG_STRESS = { title: { text: 'Effective vertical stress σ′ (kPa)' }, type: 'log' as const };
 
-type Proposal = { preconsolidationStressKpa?: number; t90Min?: number; t50Min?: number };
+type Proposal = { preconsolidationStressKpa?: number; t90Min?: number; t50Min?: number; d100Mm?: number };
 
 /** e–log σ′ and ε–log σ′ with both σ′p constructions; a click on a point proposes σ′p there. */
 export function CompressionPlots({ result, onPropose }: { result: ConsolidationTestResult; onPropose: (p: Proposal) => void }) {
@@ -50,10 +50,12 @@ type TimePlotsProps = {
   incrementIndex: number;
   onIncrementChange: (index: number) => void;
   onPropose: (p: Proposal) => void;
+  canPick: boolean;
 };
 
 /** One increment's deformation against √t (Taylor) and log t (Casagrande); clicks propose t90 or t50. */
-export function TimePlots({ orgId, testId, result, incrementIndex, onIncrementChange, onPropose }: TimePlotsProps) {
+export function TimePlots({ orgId, testId, result, incrementIndex, onIncrementChange, onPropose, canPick }: TimePlotsProps) {
+  const [logClick, setLogClick] = useState<'t50' | 'd100'>('t50');
   const increment = result.increments.find((i) => i.index === incrementIndex) ?? result.increments[0];
   const where = increment ? readingOffsets(result).get(increment.index) : undefined;
   const readings = useIncrementReadings(orgId, testId, increment?.index ?? -1, where?.offset ?? 0, where?.count ?? 0);
@@ -65,10 +67,11 @@ export function TimePlots({ orgId, testId, result, incrementIndex, onIncrementCh
       <Select
         label="Increment"
         className="w-72"
-        options={result.increments.map((i) => ({ value: String(i.index), label: `${i.index}: ${i.stressKpa.toFixed(0)} kPa (${i.kind}, ${i.readingCount} readings)` }))}
+        options={result.increments.map((i) => ({ value: String(i.index), label: `${i.index}: ${i.stressKpa.toFixed(0)} kPa (${i.kind}, ${i.readingCount} readings)${i.excludedReason ? ' — left out' : ''}` }))}
         value={String(increment.index)}
         onChange={(e) => onIncrementChange(Number(e.target.value))}
       />
+      {increment.excludedReason ? <p className="text-sm font-medium text-red-700">Left out of the analysis: {increment.excludedReason}. Its readings are shown; no construction is drawn.</p> : null}
       {readings.isPending ? (
         <LoadingBlock label="Loading the increment's readings…" />
       ) : readings.error ? (
@@ -80,8 +83,20 @@ export function TimePlots({ orgId, testId, result, incrementIndex, onIncrementCh
             <p className="mt-1 text-xs text-slate-500">Click a reading to propose t90 at its time.</p>
           </div>
           <div>
-            <PlotlyChart label={`Increment ${increment.index}: deformation against log time, Casagrande construction`} data={logTime} layout={LOG_TIME_LAYOUT} onPointClick={(p) => onPropose({ t50Min: Math.round(p.x * 1000) / 1000 })} />
-            <p className="mt-1 text-xs text-slate-500">Click a reading to propose t50 at its time.</p>
+            <PlotlyChart
+              label={`Increment ${increment.index}: deformation against log time, Casagrande construction`}
+              data={logTime}
+              layout={LOG_TIME_LAYOUT}
+              onPointClick={(p) => onPropose(logClick === 't50' ? { t50Min: Math.round(p.x * 1000) / 1000 } : { d100Mm: Math.round(p.y * 10_000) / 10_000 })}
+            />
+            {canPick ? (
+              <fieldset className="mt-1 flex flex-wrap gap-4 text-xs text-slate-600">
+                <legend className="sr-only">A click on the log-time plot proposes</legend>
+                <span>Click a reading to propose</span>
+                <label className="flex items-center gap-1"><input type="radio" name="log-click" checked={logClick === 't50'} onChange={() => setLogClick('t50')} /> t50 at its time</label>
+                <label className="flex items-center gap-1"><input type="radio" name="log-click" checked={logClick === 'd100'} onChange={() => setLogClick('d100')} /> d100 at its deformation</label>
+              </fieldset>
+            ) : null}
           </div>
         </div>
       )}

@@ -7,7 +7,7 @@ import { JobProgress } from '../../../components/job-progress';
 import { isJobRunning, useJob } from '../../../lib/jobs';
 import { useSavePicks } from '../api/save-picks';
 import { CoefficientPlots, CompressionPlots, TimePlots, type Proposal } from './analysis-plots';
-import { draftFromPicks, picksUpdateFromDraft, type PicksDraft, type PicksErrors } from './picks-draft';
+import { draftFromPicks, EMPTY_INCREMENT, picksUpdateFromDraft, type IncrementDraft, type PicksDraft, type PicksErrors } from './picks-draft';
 import { PicksForm } from './picks-form';
 
 type CurvesWorkspaceProps = {
@@ -42,8 +42,8 @@ export function CurvesWorkspace({ orgId, testId, analysis, canPick, pendingJobId
       setDraft((d) => ({ ...d, preconsolidationStressKpa: String(p.preconsolidationStressKpa) }));
       setProposed(`σ′p ${p.preconsolidationStressKpa} kPa proposed from the plot. Give a reason and save to use it.`);
     }
-    const patchIncrement = (patch: { t90Min?: string; t50Min?: string }) =>
-      setDraft((d) => ({ ...d, increments: { ...d.increments, [incrementIndex]: { t90Min: '', t50Min: '', ...d.increments[incrementIndex], ...patch } } }));
+    const patchIncrement = (patch: Partial<IncrementDraft>) =>
+      setDraft((d) => ({ ...d, increments: { ...d.increments, [incrementIndex]: { ...EMPTY_INCREMENT, ...d.increments[incrementIndex], ...patch } } }));
     if (p.t90Min !== undefined) {
       patchIncrement({ t90Min: String(p.t90Min) });
       setProposed(`t90 ${p.t90Min} min proposed for increment ${incrementIndex}. Give a reason and save to use it.`);
@@ -51,6 +51,10 @@ export function CurvesWorkspace({ orgId, testId, analysis, canPick, pendingJobId
     if (p.t50Min !== undefined) {
       patchIncrement({ t50Min: String(p.t50Min) });
       setProposed(`t50 ${p.t50Min} min proposed for increment ${incrementIndex}. Give a reason and save to use it.`);
+    }
+    if (p.d100Mm !== undefined) {
+      patchIncrement({ d100Mm: String(p.d100Mm) });
+      setProposed(`d100 ${p.d100Mm} mm proposed for increment ${incrementIndex}. Give a reason and save to use it.`);
     }
   };
 
@@ -86,7 +90,7 @@ export function CurvesWorkspace({ orgId, testId, analysis, canPick, pendingJobId
       </section>
       <section aria-label="Time curves" className="space-y-2">
         <h3 className="text-sm font-semibold text-slate-900">Time curves of one increment</h3>
-        <TimePlots orgId={orgId} testId={testId} result={result} incrementIndex={incrementIndex} onIncrementChange={setIncrementIndex} onPropose={propose} />
+        <TimePlots orgId={orgId} testId={testId} result={result} incrementIndex={incrementIndex} onIncrementChange={setIncrementIndex} onPropose={propose} canPick={canPick} />
       </section>
       {canPick ? (
         <section aria-label="Override picks" className="space-y-2 rounded-md border border-slate-200 p-4">

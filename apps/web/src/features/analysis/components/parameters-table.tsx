@@ -127,7 +127,10 @@ export function IncrementParametersTable({ result }: { result: ConsolidationTest
               <tr key={i.index} className="border-b border-slate-100 last:border-b-0">
                 <th scope="row" className="px-3 py-1.5 font-medium text-slate-800">{i.index}</th>
                 <td className="px-3 py-1.5 tabular-nums">{i.stressKpa.toFixed(1)}</td>
-                <td className="px-3 py-1.5 text-slate-600">{i.kind}</td>
+                <td className="px-3 py-1.5 text-slate-600">
+                  {i.kind}
+                  {i.excludedReason ? <span className="ml-1 block text-xs font-medium text-red-700" title={i.excludedReason}>left out: {i.excludedReason}</span> : null}
+                </td>
                 <td className="px-3 py-1.5"><ParameterCell compact value={i.casagrande?.t50Min ?? null} digits={2} warning={warning} picked={i.casagrande?.t50Source === 'pick'} /></td>
                 <td className="px-3 py-1.5"><ParameterCell compact value={i.taylor?.t90Min ?? null} digits={2} warning={warning} picked={i.taylor?.t90Source === 'pick'} /></td>
                 <td className="px-3 py-1.5"><ParameterCell compact value={i.cvTaylorM2PerYr} digits={2} warning={warning} /></td>

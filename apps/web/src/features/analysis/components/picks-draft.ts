@@ -6,23 +6,33 @@ export type PicksDraft = {
   preconsolidationStressKpa: string;
   virginFirst: string;
   virginLast: string;
-  /** Per increment index: t90 (Taylor) and t50 (Casagrande), minutes. */
-  increments: Record<number, { t90Min: string; t50Min: string }>;
+  /** Per increment index: t90 (Taylor) and t50 (Casagrande), minutes; d100 (Casagrande), mm. */
+  increments: Record<number, IncrementDraft>;
+  /** Increments left out of the analysis: index → the reason as typed. */
+  excluded: Record<number, string>;
   reason: string;
 };
 
-export type PicksErrors = Partial<Record<'preconsolidationStressKpa' | 'virginLine' | 'reason' | `t90-${number}` | `t50-${number}`, string>>;
+export type IncrementDraft = { t90Min: string; t50Min: string; d100Mm: string };
+export const EMPTY_INCREMENT: IncrementDraft = { t90Min: '', t50Min: '', d100Mm: '' };
+
+export type PicksErrors = Partial<Record<'preconsolidationStressKpa' | 'virginLine' | 'reason' | `t90-${number}` | `t50-${number}` | `d100-${number}` | `exclude-${number}`, string>>;
 
 export function draftFromPicks(picks: Picks): PicksDraft {
   const increments: PicksDraft['increments'] = {};
   for (const p of picks.increments ?? []) {
-    increments[p.index] = { t90Min: p.taylor?.t90Min === undefined ? '' : String(p.taylor.t90Min), t50Min: p.casagrande?.t50Min === undefined ? '' : String(p.casagrande.t50Min) };
+    increments[p.index] = {
+      t90Min: p.taylor?.t90Min === undefined ? '' : String(p.taylor.t90Min),
+      t50Min: p.casagrande?.t50Min === undefined ? '' : String(p.casagrande.t50Min),
+      d100Mm: p.casagrande?.d100Mm === undefined ? '' : String(p.casagrande.d100Mm),
+    };
   }
   return {
     preconsolidationStressKpa: picks.preconsolidationStressKpa === undefined ? '' : String(picks.preconsolidationStressKpa),
     virginFirst: picks.virginLine ? String(picks.virginLine.firstIncrementIndex) : '',
     virginLast: picks.virginLine ? String(picks.virginLine.lastIncrementIndex) : '',
     increments,
+    excluded: Object.fromEntries((picks.excludedIncrements ?? []).map((e) => [e.index, e.reason])),
     reason: '',
   };
 }
@@ -33,7 +43,7 @@ const positiveOrError = (text: string, message: string): { value?: number; error
   return typeof n === 'number' && n > 0 ? { value: n } : { error: message };
 };
 
-/** Checks the draft and builds the PUT body; d0/d100 picks already saved for an increment are kept. */
+/** Checks the draft and builds the PUT body; d0 picks already saved for an increment are kept. */
 export function picksUpdateFromDraft(draft: PicksDraft, saved: Picks): { ok: true; body: PicksUpdate } | { ok: false; errors: PicksErrors } {
   const errors: PicksErrors = {};
   const picks: Picks = {};
@@ -49,16 +59,18 @@ export function picksUpdateFromDraft(draft: PicksDraft, saved: Picks): { ok: tru
   const increments: NonNullable<Picks['increments']> = [];
   const indices = new Set([...Object.keys(draft.increments).map(Number), ...(saved.increments ?? []).map((p) => p.index)]);
   for (const index of [...indices].sort((a, b) => a - b)) {
-    const entry = draft.increments[index] ?? { t90Min: '', t50Min: '' };
+    const entry = draft.increments[index] ?? EMPTY_INCREMENT;
     const before = saved.increments?.find((p) => p.index === index);
     const t90 = positiveOrError(entry.t90Min, `Increment ${index}: enter t90 in minutes above zero, or leave it blank.`);
     const t50 = positiveOrError(entry.t50Min, `Increment ${index}: enter t50 in minutes above zero, or leave it blank.`);
+    const d100 = numberOrNull(entry.d100Mm);
     if (t90.error) errors[`t90-${index}`] = t90.error;
     if (t50.error) errors[`t50-${index}`] = t50.error;
+    if (d100 !== null && typeof d100 !== 'number') errors[`d100-${index}`] = `Increment ${index}: enter d100 as a deformation in mm (as on the plot), or leave it blank.`;
     const taylor = { ...(before?.taylor?.d0Mm === undefined ? {} : { d0Mm: before.taylor.d0Mm }), ...(t90.value === undefined ? {} : { t90Min: t90.value }) };
     const casagrande = {
       ...(before?.casagrande?.d0Mm === undefined ? {} : { d0Mm: before.casagrande.d0Mm }),
-      ...(before?.casagrande?.d100Mm === undefined ? {} : { d100Mm: before.casagrande.d100Mm }),
+      ...(typeof d100 === 'number' ? { d100Mm: d100 } : {}),
       ...(t50.value === undefined ? {} : { t50Min: t50.value }),
     };
     const hasTaylor = Object.keys(taylor).length > 0;
@@ -66,10 +78,15 @@ export function picksUpdateFromDraft(draft: PicksDraft, saved: Picks): { ok: tru
     if (hasTaylor || hasCasagrande) increments.push({ index, ...(hasTaylor ? { taylor } : {}), ...(hasCasagrande ? { casagrande } : {}) });
   }
   if (increments.length > 0) picks.increments = increments;
+  const excluded = Object.entries(draft.excluded).map(([index, reason]) => ({ index: Number(index), reason: reason.trim() }));
+  for (const { index, reason } of excluded) if (reason.length < 3) errors[`exclude-${index}`] = `Increment ${index}: say why it is left out of the analysis (a few words at least).`;
+  if (excluded.length > 0) picks.excludedIncrements = excluded.sort((a, b) => a.index - b.index);
   const parsed = PicksUpdateSchema.safeParse({ picks, reason: draft.reason });
   if (!parsed.success) {
     for (const issue of parsed.error.issues) {
       if (issue.path[0] === 'reason') errors.reason ??= issue.message;
+      // Each left-out increment's reason is checked above, under its own field.
+      else if (issue.path[1] === 'excludedIncrements') continue;
       else errors.preconsolidationStressKpa ??= issue.message;
     }
   }

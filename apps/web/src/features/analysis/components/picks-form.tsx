@@ -4,7 +4,7 @@ import { ErrorMessage } from '../../../components/error-message';
 import { Select } from '../../../components/select';
 import { TextField } from '../../../components/text-field';
 import type { ConsolidationTestResult } from '@porestack/types';
-import type { PicksDraft, PicksErrors } from './picks-draft';
+import { EMPTY_INCREMENT, type PicksDraft, type PicksErrors } from './picks-draft';
 
 type PicksFormProps = {
   result: ConsolidationTestResult;
@@ -20,7 +20,14 @@ type PicksFormProps = {
 
 /** The same overrides the plots propose, typed in; a reason is always required. */
 export function PicksForm({ result, draft, incrementIndex, errors, pending, error, disabled, onChange, onSave }: PicksFormProps) {
-  const entry = draft.increments[incrementIndex] ?? { t90Min: '', t50Min: '' };
+  const entry = draft.increments[incrementIndex] ?? EMPTY_INCREMENT;
+  const excluded = draft.excluded[incrementIndex];
+  const setExcluded = (reason: string | null) => {
+    const next = { ...draft.excluded };
+    if (reason === null) delete next[incrementIndex];
+    else next[incrementIndex] = reason;
+    onChange({ ...draft, excluded: next });
+  };
   const setIncrement = (patch: Partial<typeof entry>) => onChange({ ...draft, increments: { ...draft.increments, [incrementIndex]: { ...entry, ...patch } } });
   const incrementOptions = [{ value: '', label: 'Automatic' }, ...result.increments.filter((i) => i.kind === 'loading').map((i) => ({ value: String(i.index), label: `${i.index}: ${i.stressKpa.toFixed(0)} kPa` }))];
   const onSubmit = (event: FormEvent<HTMLFormElement>) => {
@@ -39,11 +46,21 @@ export function PicksForm({ result, draft, incrementIndex, errors, pending, erro
         <legend className="mb-2 text-sm font-semibold text-slate-900">Increment {incrementIndex}</legend>
         <TextField label={`t90 of increment ${incrementIndex} (min)`} name={`t90-${incrementIndex}`} inputMode="decimal" hint="Blank: Taylor's construction" value={entry.t90Min} onChange={(e) => setIncrement({ t90Min: e.target.value })} error={errors[`t90-${incrementIndex}`]} />
         <TextField label={`t50 of increment ${incrementIndex} (min)`} name={`t50-${incrementIndex}`} inputMode="decimal" hint="Blank: Casagrande's construction" value={entry.t50Min} onChange={(e) => setIncrement({ t50Min: e.target.value })} error={errors[`t50-${incrementIndex}`]} />
+        <TextField label={`d100 of increment ${incrementIndex} (mm)`} name={`d100-${incrementIndex}`} inputMode="decimal" hint="Blank: the tangent and secondary lines' meeting" value={entry.d100Mm} onChange={(e) => setIncrement({ d100Mm: e.target.value })} error={errors[`d100-${incrementIndex}`]} />
+        <div className="sm:col-span-3 space-y-2">
+          <label className="flex items-center gap-2 text-sm text-slate-800">
+            <input type="checkbox" checked={excluded !== undefined} onChange={(e) => setExcluded(e.target.checked ? '' : null)} />
+            Leave increment {incrementIndex} out of the analysis
+          </label>
+          {excluded !== undefined ? (
+            <TextField label={`Why increment ${incrementIndex} is left out`} name={`exclude-${incrementIndex}`} hint="Kept in the readings and shown on the plots and in the report with this reason" value={excluded} onChange={(e) => setExcluded(e.target.value)} error={errors[`exclude-${incrementIndex}`]} />
+          ) : null}
+        </div>
       </fieldset>
       <TextField label="Reason for the override" name="reason" disabled={disabled} hint="Kept with the analysis and shown to the reviewer" value={draft.reason} onChange={(e) => onChange({ ...draft, reason: e.target.value })} error={errors.reason} />
-      {Object.keys(errors).some((k) => k.startsWith('t90-') || k.startsWith('t50-')) ? (
+      {Object.keys(errors).some((k) => /^(t90|t50|d100|exclude)-/.test(k)) ? (
         <ul className="text-sm text-red-700">
-          {Object.entries(errors).filter(([k]) => k.startsWith('t')).map(([k, m]) => <li key={k}>{m}</li>)}
+          {Object.entries(errors).filter(([k]) => /^(t90|t50|d100|exclude)-/.test(k)).map(([k, m]) => <li key={k}>{m}</li>)}
         </ul>
       ) : null}
       {error ? <ErrorMessage error={error} title="The picks were not saved" /> : null}

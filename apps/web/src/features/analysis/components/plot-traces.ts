@@ -44,18 +44,33 @@ export function compressionTraces(result: ConsolidationTestResult, axis: Compres
   const e0 = result.initialVoidRatio;
   const toY = axis === 'voidRatio' ? (e: number) => e : (e: number) => strainPercentAt(e, e0);
   const traces: PlotData[] = [];
-  const increments = result.increments;
+  const y = (i: ConsolidationIncrementResult) => (axis === 'voidRatio' ? i.voidRatioEnd : i.strainEnd * 100);
+  // Increments left out of the analysis are marked apart: the curve the constructions stand on runs without them.
+  const increments = result.increments.filter((i) => !i.excludedReason);
+  const leftOut = result.increments.filter((i) => i.excludedReason);
   traces.push({
     type: 'scatter',
     mode: 'lines+markers',
     name: 'Test (end of each increment)',
     x: increments.map((i) => i.stressKpa),
-    y: increments.map((i) => (axis === 'voidRatio' ? i.voidRatioEnd : i.strainEnd * 100)),
+    y: increments.map(y),
     text: increments.map((i) => `Increment ${i.index} (${i.kind})`),
     line: { color: PLOT_COLOURS.measured, width: 1 },
     marker: { size: 7, color: PLOT_COLOURS.measured },
     hovertemplate: '%{text}<br>σ′ %{x:.1f} kPa<br>%{y:.4f}<extra></extra>',
   });
+  if (leftOut.length > 0) {
+    traces.push({
+      type: 'scatter',
+      mode: 'markers',
+      name: 'Left out of the analysis',
+      x: leftOut.map((i) => i.stressKpa),
+      y: leftOut.map(y),
+      text: leftOut.map((i) => `Increment ${i.index}, left out: ${i.excludedReason ?? ''}`),
+      marker: { size: 11, symbol: 'x-open', color: PLOT_COLOURS.pick },
+      hovertemplate: '%{text}<br>σ′ %{x:.1f} kPa<br>%{y:.4f}<extra></extra>',
+    });
+  }
 
   const casagrande = result.preconsolidation.casagrande;
   if (casagrande && summary) {
@@ -102,7 +117,7 @@ export function compressionTraces(result: ConsolidationTestResult, axis: Compres
 
   const adopted = result.preconsolidation.adoptedKpa;
   if (adopted !== null && (summary || result.preconsolidation.adoptedFrom === 'pick')) {
-    const ys = increments.map((i) => (axis === 'voidRatio' ? i.voidRatioEnd : i.strainEnd * 100));
+    const ys = result.increments.map(y);
     const low = Math.min(...ys);
     const high = Math.max(...ys);
     traces.push({

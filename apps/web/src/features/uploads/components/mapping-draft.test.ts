@@ -1,8 +1,20 @@
+import { guessFromMapping, type ImportMapping, type MappingGuess } from '@porestack/types';
 import { describe, expect, it } from 'vitest';
-import { draftFromMapping, mappingFromDraft } from './mapping-draft';
+import { draftFromGuess, mappingFromDraft } from './mapping-draft';
 import { LENGTH_UNIT_OPTIONS, STRESS_UNIT_OPTIONS, TIME_UNIT_OPTIONS } from './unit-options';
 
-const complete = { ...draftFromMapping(null, ';'), stress: 'Load (kgf/cm2)', elapsedTime: 'Time (s)', deformation: 'Dial' };
+/** The guess for a logger whose gauge reads in divisions of an unknown size ("Dial (div)"). */
+const guess: MappingGuess = {
+  delimiter: ';',
+  decimalSeparator: '.',
+  headerRow: 1,
+  sheets: 'first',
+  stressFrom: 'column',
+  columns: { increment: 'Stage', stress: 'Load (kgf/cm2)', elapsedTime: 'Time (s)', deformation: 'Dial (div)' },
+  units: { stress: 'kgfPerCm2', time: 's', deformation: 'mm' },
+  time: { format: 'number', origin: 'increment', dateOrder: 'dmy' },
+  deformationReading: { kind: 'dial', zeroReading: null, divisionSize: null, increasesWithCompression: false },
+};
 
 describe('unit option lists', () => {
   it('offer every stress unit the issue names, with kgf/cm² written as labs write it', () => {
@@ -10,49 +22,63 @@ describe('unit option lists', () => {
     expect(STRESS_UNIT_OPTIONS.map((o) => o.value)).toEqual(expect.arrayContaining(['kPa', 'kgfPerCm2', 'tsf', 'psi']));
   });
 
-  it('offer minutes, seconds and hours, and mm and inches', () => {
-    expect(TIME_UNIT_OPTIONS.map((o) => o.value)).toEqual(['min', 's', 'h']);
+  it('offer minutes, seconds, hours and days, and mm and inches', () => {
+    expect(TIME_UNIT_OPTIONS.map((o) => o.value)).toEqual(['min', 's', 'h', 'd']);
     expect(LENGTH_UNIT_OPTIONS.map((o) => o.value)).toEqual(['mm', 'in']);
   });
 });
 
+describe('draftFromGuess(guess, open)', () => {
+  it('fills in what was guessed and leaves blank what the file does not tell: no default division or direction', () => {
+    const draft = draftFromGuess(guess, ['dialDivision']);
+    expect(draft).toMatchObject({ stress: 'Load (kgf/cm2)', stressUnit: 'kgfPerCm2', timeUnit: 's', deformationKind: 'dial', dialDivision: '', dialDirection: 'decreases', dialZero: '' });
+    expect(draftFromGuess({ ...guess, deformationReading: { ...guess.deformationReading, increasesWithCompression: null } }, ['dialDirection']).dialDirection).toBe('');
+    expect(draftFromGuess(guess, ['stressUnit', 'timeUnit']).stressUnit).toBe('');
+  });
+});
+
 describe('mappingFromDraft(draft)', () => {
-  it('asks for each required column that was not chosen', () => {
-    const result = mappingFromDraft(draftFromMapping(null, null));
+  it('asks for the division and every unit left blank, each under its own setting', () => {
+    const result = mappingFromDraft(draftFromGuess(guess, ['dialDivision', 'stressUnit', 'deformationUnit']));
     expect(result.ok).toBe(false);
+    if (!result.ok) expect(Object.keys(result.errors).sort()).toEqual(['deformationUnit', 'dialDivision', 'stressUnit']);
+  });
+
+  it('asks for each required column that was not chosen, but not the stress when it comes from the sheet names', () => {
+    const blank = { ...draftFromGuess(guess), dialDivision: '1', stress: '', elapsedTime: '', deformation: '' };
+    const result = mappingFromDraft(blank);
     if (!result.ok) expect(Object.keys(result.errors).sort()).toEqual(['deformation', 'elapsedTime', 'stress']);
+    const bySheet = mappingFromDraft({ ...blank, sheets: 'each', stressFrom: 'sheetName', elapsedTime: 'Time (s)', deformation: 'Dial (div)' });
+    expect(bySheet.ok && bySheet.mapping.columns.stress).toBeNull();
   });
 
   it('refuses one column used for two fields', () => {
-    const result = mappingFromDraft({ ...complete, elapsedTime: 'Load (kgf/cm2)' });
+    const result = mappingFromDraft({ ...draftFromGuess(guess), dialDivision: '0.001', elapsedTime: 'Load (kgf/cm2)' });
     expect(result.ok).toBe(false);
     if (!result.ok) expect(result.errors.elapsedTime).toMatch(/already chosen/);
   });
 
-  it('needs the division size of a dial gauge', () => {
-    const result = mappingFromDraft({ ...complete, deformationKind: 'dial', dialDivision: '' });
-    expect(result.ok).toBe(false);
-    if (!result.ok) expect(result.errors.dialDivision).toMatch(/one gauge division/);
-  });
-
-  it('builds the mapping the API takes, with units, delimiter and dial settings', () => {
-    const result = mappingFromDraft({ ...complete, stressUnit: 'kgfPerCm2', timeUnit: 's', deformationKind: 'dial', dialZero: '5.000', dialDivision: '0.01', dialDirection: 'decreases' });
+  it('builds the mapping the API takes, with units, delimiter, time and dial settings', () => {
+    const result = mappingFromDraft({ ...draftFromGuess(guess, ['dialDivision']), dialDivision: '0.001', dialZero: '5000' });
     expect(result).toEqual({
       ok: true,
       mapping: {
         delimiter: ';',
         decimalSeparator: '.',
         headerRow: 1,
-        columns: { increment: null, stress: 'Load (kgf/cm2)', elapsedTime: 'Time (s)', deformation: 'Dial' },
-        units: { stress: 'kgfPerCm2', time: 's', deformation: 'mm' },
-        deformationReading: { kind: 'dial', divisionSize: 0.01, increasesWithCompression: false, zeroReading: 5 },
+        sheets: 'first',
+        stressFrom: 'column',
+        columns: guess.columns,
+        units: guess.units,
+        time: guess.time,
+        deformationReading: { kind: 'dial', divisionSize: 0.001, increasesWithCompression: false, zeroReading: 5000 },
       },
     });
   });
 
   it('round-trips a saved mapping through the form', () => {
-    const first = mappingFromDraft({ ...complete, increment: 'Stage' });
+    const first = mappingFromDraft({ ...draftFromGuess(guess), dialDivision: '0.002' });
     expect(first.ok).toBe(true);
-    if (first.ok) expect(mappingFromDraft(draftFromMapping(first.mapping, null))).toEqual(first);
+    if (first.ok) expect(mappingFromDraft(draftFromGuess(guessFromMapping(first.mapping as ImportMapping)))).toEqual(first);
   });
 });

@@ -1,74 +1,110 @@
-import { ImportMappingSchema, type CsvDelimiter, type ImportMapping, type LengthUnit, type StressUnit, type TimeUnit } from '@porestack/types';
+import {
+  ImportMappingSchema,
+  type CsvDelimiter,
+  type DateOrder,
+  type ImportMapping,
+  type LengthUnit,
+  type MappingGuess,
+  type MappingSetting,
+  type SheetLayout,
+  type StressSource,
+  type StressUnit,
+  type TimeFormat,
+  type TimeOrigin,
+  type TimeUnit,
+} from '@porestack/types';
 import { numberOrNull } from '../../../lib/form-numbers';
 
-/** The mapping form's state: every value as the inputs hold it (strings, '' = not chosen). */
+/** The mapping form's state: every value as the inputs hold it ('' = not chosen yet). */
 export type MappingDraft = {
+  headerRow: string;
+  delimiter: CsvDelimiter | null;
+  decimalSeparator: '.' | ',';
+  sheets: SheetLayout;
+  stressFrom: StressSource;
   increment: string;
   stress: string;
   elapsedTime: string;
   deformation: string;
-  stressUnit: StressUnit;
-  timeUnit: TimeUnit;
-  deformationUnit: LengthUnit;
+  stressUnit: StressUnit | '';
+  timeUnit: TimeUnit | '';
+  deformationUnit: LengthUnit | '';
+  timeFormat: TimeFormat;
+  timeOrigin: TimeOrigin;
+  dateOrder: DateOrder | '';
   deformationKind: 'deformation' | 'dial';
   dialZero: string;
+  /** No default: a wrong division imports wrong deformations without a sound. */
   dialDivision: string;
-  dialDirection: 'increases' | 'decreases';
-  headerRow: string;
-  decimalSeparator: '.' | ',';
-  delimiter: CsvDelimiter | null;
+  /** No default, for the same reason. */
+  dialDirection: 'increases' | 'decreases' | '';
 };
 
-export type MappingErrors = Partial<Record<keyof MappingDraft, string>>;
+export type MappingErrors = Partial<Record<MappingSetting, string>>;
 
-/** A draft from a saved or suggested mapping, or empty choices for the person to make. */
-export function draftFromMapping(mapping: ImportMapping | null, delimiter: CsvDelimiter | null): MappingDraft {
-  const dial = mapping?.deformationReading.kind === 'dial' ? mapping.deformationReading : null;
+/**
+ * The form's start from the suggestion (a profile, or a guess): what was guessed is filled in,
+ * and every setting the file does not tell (`open`) is left blank for the person to choose.
+ */
+export function draftFromGuess(guess: MappingGuess, open: readonly MappingSetting[] = []): MappingDraft {
+  const blank = (setting: MappingSetting) => open.includes(setting);
+  const dial = guess.deformationReading;
   return {
-    increment: mapping?.columns.increment ?? '',
-    stress: mapping?.columns.stress ?? '',
-    elapsedTime: mapping?.columns.elapsedTime ?? '',
-    deformation: mapping?.columns.deformation ?? '',
-    stressUnit: mapping?.units.stress ?? 'kPa',
-    timeUnit: mapping?.units.time ?? 'min',
-    deformationUnit: mapping?.units.deformation ?? 'mm',
-    deformationKind: dial ? 'dial' : 'deformation',
-    dialZero: dial?.zeroReading === undefined ? '' : String(dial.zeroReading),
-    dialDivision: dial ? String(dial.divisionSize) : '0.001',
-    dialDirection: dial && !dial.increasesWithCompression ? 'decreases' : 'increases',
-    headerRow: String(mapping?.headerRow ?? 1),
-    decimalSeparator: mapping?.decimalSeparator ?? '.',
-    delimiter: mapping?.delimiter ?? delimiter,
+    headerRow: String(guess.headerRow),
+    delimiter: guess.delimiter,
+    decimalSeparator: guess.decimalSeparator,
+    sheets: guess.sheets,
+    stressFrom: guess.stressFrom,
+    increment: guess.columns.increment ?? '',
+    stress: guess.columns.stress ?? '',
+    elapsedTime: guess.columns.elapsedTime ?? '',
+    deformation: guess.columns.deformation ?? '',
+    stressUnit: blank('stressUnit') ? '' : guess.units.stress,
+    timeUnit: blank('timeUnit') ? '' : guess.units.time,
+    deformationUnit: blank('deformationUnit') ? '' : guess.units.deformation,
+    timeFormat: guess.time.format,
+    timeOrigin: guess.time.origin,
+    dateOrder: blank('dateOrder') ? '' : guess.time.dateOrder,
+    deformationKind: dial.kind,
+    dialZero: dial.zeroReading === null ? '' : String(dial.zeroReading),
+    dialDivision: dial.divisionSize === null || blank('dialDivision') ? '' : String(dial.divisionSize),
+    dialDirection: dial.increasesWithCompression === null || blank('dialDirection') ? '' : dial.increasesWithCompression ? 'increases' : 'decreases',
   };
 }
 
-const REQUIRED: readonly ['stress' | 'elapsedTime' | 'deformation', string][] = [
+const REQUIRED_COLUMNS: readonly ['stress' | 'elapsedTime' | 'deformation', string][] = [
   ['stress', 'Choose the column that holds the applied stress.'],
-  ['elapsedTime', 'Choose the column that holds the time since the load went on.'],
-  ['deformation', 'Choose the column that holds the deformation or dial reading.'],
+  ['elapsedTime', 'Choose the column that holds the time.'],
+  ['deformation', 'Choose the column that holds the deformation or gauge reading.'],
 ];
 
 /**
  * Checks a draft and turns it into the mapping the API takes. Beyond the shared schema it
- * refuses one column used for two fields, which the schema cannot see.
+ * refuses one column used for two fields, and asks for every unit, division and direction
+ * the draft leaves blank, each under its own control.
  */
 export function mappingFromDraft(draft: MappingDraft): { ok: true; mapping: ImportMapping } | { ok: false; errors: MappingErrors } {
   const errors: MappingErrors = {};
-  for (const [field, message] of REQUIRED) if (draft[field] === '') errors[field] = message;
-  const chosen: [keyof MappingDraft, string][] = (['increment', 'stress', 'elapsedTime', 'deformation'] as const).map((f) => [f, draft[f]]);
+  const stressFromName = draft.stressFrom === 'sheetName';
+  for (const [field, message] of REQUIRED_COLUMNS) if (draft[field] === '' && !(field === 'stress' && stressFromName)) errors[field] = message;
+  const chosen = (['increment', 'stress', 'elapsedTime', 'deformation'] as const).filter((f) => !(f === 'stress' && stressFromName)).map((f) => [f, draft[f]] as const);
   chosen.forEach(([field, column], n) => {
     if (column === '' || errors[field]) return;
-    const earlier = chosen.slice(0, n).find(([, other]) => other === column);
-    if (earlier) errors[field] = `“${column}” is already chosen for another field; each field needs its own column.`;
+    if (chosen.slice(0, n).some(([, other]) => other === column)) errors[field] = `“${column}” is already chosen for another field; each field needs its own column.`;
   });
   const headerRow = numberOrNull(draft.headerRow);
   if (typeof headerRow !== 'number' || !Number.isInteger(headerRow) || headerRow < 1) errors.headerRow = 'Give the row of the column names as a whole number, 1 or more.';
+  if (draft.stressUnit === '') errors.stressUnit = 'Choose the unit the stresses are written in.';
+  if (draft.timeFormat === 'number' && draft.timeUnit === '') errors.timeUnit = 'Choose the unit the times are written in.';
+  if (draft.timeFormat === 'datetime' && draft.dateOrder === '') errors.dateOrder = 'Say whether the dates put the day or the month first.';
+  if (draft.deformationUnit === '') errors.deformationUnit = 'Choose the unit of the deformation (or of one gauge division).';
   let deformationReading: ImportMapping['deformationReading'] = { kind: 'deformation' };
   if (draft.deformationKind === 'dial') {
     const division = numberOrNull(draft.dialDivision);
     const zero = numberOrNull(draft.dialZero);
-    if (typeof division !== 'number' || division <= 0) errors.dialDivision = 'Enter the size of one gauge division, e.g. 0.001 (in the deformation unit).';
+    if (typeof division !== 'number' || division <= 0) errors.dialDivision = 'Enter the size of one gauge division (1 when the gauge reads in mm or inches), e.g. 0.001.';
     if (zero !== null && typeof zero !== 'number') errors.dialZero = 'Enter the zero reading as a number, or leave it blank to use the first reading.';
+    if (draft.dialDirection === '') errors.dialDirection = 'Say whether the reading rises or falls as the specimen compresses.';
     deformationReading = {
       kind: 'dial',
       divisionSize: typeof division === 'number' ? division : Number.NaN,
@@ -81,13 +117,16 @@ export function mappingFromDraft(draft: MappingDraft): { ok: true; mapping: Impo
     ...(draft.delimiter ? { delimiter: draft.delimiter } : {}),
     decimalSeparator: draft.decimalSeparator,
     headerRow,
-    columns: { increment: draft.increment === '' ? null : draft.increment, stress: draft.stress, elapsedTime: draft.elapsedTime, deformation: draft.deformation },
-    units: { stress: draft.stressUnit, time: draft.timeUnit, deformation: draft.deformationUnit },
+    sheets: draft.sheets,
+    stressFrom: draft.stressFrom,
+    columns: { increment: draft.increment === '' ? null : draft.increment, stress: stressFromName || draft.stress === '' ? null : draft.stress, elapsedTime: draft.elapsedTime, deformation: draft.deformation },
+    units: { stress: draft.stressUnit, time: draft.timeUnit === '' ? 'min' : draft.timeUnit, deformation: draft.deformationUnit },
+    time: { format: draft.timeFormat, origin: draft.timeOrigin, dateOrder: draft.dateOrder === '' ? 'dmy' : draft.dateOrder },
     deformationReading,
   });
   if (!parsed.success) {
     const first = parsed.error.issues[0];
-    return { ok: false, errors: { deformation: first ? first.message : 'The mapping is not complete.' } };
+    return { ok: false, errors: { [first?.path.at(-1) === 'stressFrom' ? 'stressFrom' : 'deformation']: first ? first.message : 'The mapping is not complete.' } };
   }
   return { ok: true, mapping: parsed.data };
 }

@@ -1,4 +1,4 @@
-import type { Upload } from '@porestack/types';
+import type { ImportRequest, Upload } from '@porestack/types';
 import { useQueryClient } from '@tanstack/react-query';
 import { useEffect, useState } from 'react';
 import { Alert } from '../../../components/alert';
@@ -6,17 +6,18 @@ import { ErrorMessage } from '../../../components/error-message';
 import { JobProgress } from '../../../components/job-progress';
 import { ProgressBar } from '../../../components/progress-bar';
 import { LoadingBlock } from '../../../components/spinner';
-import { apiPaths } from '../../../config/paths';
+import { Link } from 'react-router-dom';
+import { apiPaths, paths } from '../../../config/paths';
 import type { UploadProgress } from '../../../lib/api-client';
 import { formatDateTime } from '../../../lib/format';
 import { isJobRunning, useJob } from '../../../lib/jobs';
-import { useUploadPreview } from '../api/get-upload-preview';
 import { useUploads } from '../api/get-uploads';
 import { useStartImport } from '../api/start-import';
 import { useUploadReadingsFile } from '../api/upload-readings-file';
 import { FileDropZone } from './file-drop-zone';
 import { ImportIssuesTable } from './import-issues-table';
-import { MappingForm } from './mapping-form';
+import { MappingStep } from './mapping-step';
+import { UploadNotes } from './upload-notes';
 
 const STATUS_WORDS: Record<Upload['status'], string> = {
   stored: 'Stored, waiting to be read',
@@ -30,9 +31,10 @@ const megabytes = (bytes: number) => (bytes < 1_048_576 ? `${Math.max(1, Math.ro
 
 /**
  * Upload with a real progress bar, then follow the import job; a file in another layout gets the
- * mapping step, a rejected one its list of rows to fix. Nothing here blocks the rest of the page.
+ * mapping step (guessed, to confirm), a rejected or imported one can be mapped again from storage,
+ * and what an import dropped, replaced or doubts is listed. Nothing here blocks the rest of the page.
  */
-export function UploadPanel({ orgId, testId, canUpload }: { orgId: string; testId: string; canUpload: boolean }) {
+export function UploadPanel({ orgId, testId, canUpload, specimenHeightMm }: { orgId: string; testId: string; canUpload: boolean; specimenHeightMm: number | null }) {
   const queryClient = useQueryClient();
   const uploads = useUploads(orgId, testId);
   const send = useUploadReadingsFile(orgId, testId);
@@ -40,6 +42,7 @@ export function UploadPanel({ orgId, testId, canUpload }: { orgId: string; testI
   const [progress, setProgress] = useState<UploadProgress | null>(null);
   const [fileName, setFileName] = useState<string | null>(null);
   const [jobId, setJobId] = useState<string | null>(null);
+  const [remapId, setRemapId] = useState<string | null>(null);
   const job = useJob(orgId, jobId);
   // A successful import queues the analysis; follow that job too, so a failure there is seen here.
   const analysisJobId = typeof job.data?.result?.['analysisJobId'] === 'string' ? job.data.result['analysisJobId'] : null;
@@ -57,13 +60,18 @@ export function UploadPanel({ orgId, testId, canUpload }: { orgId: string; testI
     setFileName(file.name);
     setProgress({ loadedBytes: 0, totalBytes: file.size });
     setJobId(null);
+    setRemapId(null);
     send.mutate(
       { file, onProgress: setProgress },
       { onSuccess: (created) => setJobId(created.job?.id ?? null), onSettled: () => setProgress(null) },
     );
   };
+  const importUpload = (uploadId: string, body: ImportRequest) =>
+    startImport.mutate({ uploadId, body }, { onSuccess: (started) => { setJobId(started.id); setRemapId(null); } });
 
   const latest = uploads.data?.[0];
+  const mapping = latest && latest.status === 'needs_mapping' ? latest : (uploads.data?.find((u) => u.id === remapId) ?? null);
+  const running = job.data !== undefined && isJobRunning(job.data);
   return (
     <div className="space-y-4">
       <div className="flex flex-wrap gap-x-4 gap-y-1 text-sm">
@@ -88,17 +96,22 @@ export function UploadPanel({ orgId, testId, canUpload }: { orgId: string; testI
         <ErrorMessage error={uploads.error} title="The uploads could not be loaded" onRetry={() => void uploads.refetch()} />
       ) : latest ? (
         <>
-          <LatestUpload orgId={orgId} upload={latest} />
-          {latest.status === 'needs_mapping' && canUpload ? (
+          <LatestUpload orgId={orgId} upload={latest} canRemap={canUpload && !running && mapping === null} onRemap={() => setRemapId(latest.id)} />
+          {mapping && canUpload ? (
             <MappingStep
+              key={mapping.id}
               orgId={orgId}
-              uploadId={latest.id}
+              uploadId={mapping.id}
+              fileName={mapping.originalName}
+              again={mapping.status !== 'needs_mapping'}
+              specimenHeightMm={specimenHeightMm}
               pending={startImport.isPending}
               error={startImport.error}
-              onImport={(body) => startImport.mutate({ uploadId: latest.id, body }, { onSuccess: (started) => setJobId(started.id) })}
+              onImport={(body) => importUpload(mapping.id, body)}
+              onCancel={mapping.status !== 'needs_mapping' ? () => setRemapId(null) : undefined}
             />
           ) : null}
-          {uploads.data.length > 1 ? <EarlierUploads orgId={orgId} uploads={uploads.data.slice(1)} /> : null}
+          {uploads.data.length > 1 ? <EarlierUploads orgId={orgId} uploads={uploads.data.slice(1)} canRemap={canUpload && !running} onRemap={setRemapId} /> : null}
         </>
       ) : (
         <p className="text-sm text-slate-600">No file uploaded yet.</p>
@@ -107,7 +120,7 @@ export function UploadPanel({ orgId, testId, canUpload }: { orgId: string; testI
   );
 }
 
-function LatestUpload({ orgId, upload }: { orgId: string; upload: Upload }) {
+function LatestUpload({ orgId, upload, canRemap, onRemap }: { orgId: string; upload: Upload; canRemap: boolean; onRemap: () => void }) {
   return (
     <div className="space-y-3 rounded-md border border-slate-200 p-4" aria-label="Latest upload">
       <div className="flex flex-wrap items-baseline justify-between gap-2">
@@ -117,9 +130,12 @@ function LatestUpload({ orgId, upload }: { orgId: string; upload: Upload }) {
             {upload.detectedType.toUpperCase()} · {megabytes(upload.sizeBytes)} · by {upload.uploadedBy.name}, {formatDateTime(upload.createdAt)}
           </span>
         </p>
-        <a href={apiPaths.uploadDownload(orgId, upload.id)} className="text-sm font-medium text-accent-700 hover:underline" download>
-          Download the original
-        </a>
+        <span className="flex flex-wrap gap-4 text-sm">
+          {canRemap && (upload.status === 'imported' || upload.status === 'failed') ? (
+            <button type="button" className="font-medium text-accent-700 hover:underline" onClick={onRemap}>Change the mapping</button>
+          ) : null}
+          <a href={apiPaths.uploadDownload(orgId, upload.id)} className="font-medium text-accent-700 hover:underline" download>Download the original</a>
+        </span>
       </div>
       <p className="text-sm">
         <span className="font-medium text-slate-800">{STATUS_WORDS[upload.status]}</span>
@@ -128,6 +144,15 @@ function LatestUpload({ orgId, upload }: { orgId: string; upload: Upload }) {
         ) : null}
       </p>
       <p className="break-all font-mono text-xs text-slate-500" title="SHA-256 of the file as received">SHA-256 {upload.sha256}</p>
+      {upload.sameFileIn.length > 0 ? (
+        <Alert tone="warning" title="The same file is in another test">
+          {upload.sameFileIn.map((same) => (
+            <span key={same.uploadId} className="block">
+              Test <Link className="font-medium underline" to={paths.org.test.to(orgId, same.testId)}>{same.testReference}</Link> holds “{same.originalName}”, uploaded {formatDateTime(same.uploadedAt)}, byte for byte the same. One of the two is likely the wrong file.
+            </span>
+          ))}
+        </Alert>
+      ) : null}
       {upload.status === 'failed' && upload.failure ? (
         <>
           <Alert tone="error" title="The file was not imported; no readings were kept from it">
@@ -136,23 +161,12 @@ function LatestUpload({ orgId, upload }: { orgId: string; upload: Upload }) {
           {upload.failure.issues.length > 0 ? <ImportIssuesTable issues={upload.failure.issues} total={upload.failure.issueCount} /> : null}
         </>
       ) : null}
+      {upload.status === 'imported' ? <UploadNotes upload={upload} /> : null}
     </div>
   );
 }
 
-function MappingStep({ orgId, uploadId, pending, error, onImport }: { orgId: string; uploadId: string; pending: boolean; error: unknown; onImport: Parameters<typeof MappingForm>[0]['onImport'] }) {
-  const preview = useUploadPreview(orgId, uploadId);
-  if (preview.isPending) return <LoadingBlock label="Reading the first rows…" />;
-  if (preview.error) return <ErrorMessage error={preview.error} title="The file's first rows could not be read" onRetry={() => void preview.refetch()} />;
-  return (
-    <section aria-label="Map the columns" className="space-y-3">
-      <h3 className="text-sm font-semibold text-slate-900">This file is not in the standard layout: say which column holds what</h3>
-      <MappingForm orgId={orgId} preview={preview.data} pending={pending} error={error} onImport={onImport} />
-    </section>
-  );
-}
-
-function EarlierUploads({ orgId, uploads }: { orgId: string; uploads: readonly Upload[] }) {
+function EarlierUploads({ orgId, uploads, canRemap, onRemap }: { orgId: string; uploads: readonly Upload[]; canRemap: boolean; onRemap: (uploadId: string) => void }) {
   return (
     <details className="text-sm">
       <summary className="cursor-pointer text-slate-700">Earlier uploads ({uploads.length})</summary>
@@ -160,6 +174,12 @@ function EarlierUploads({ orgId, uploads }: { orgId: string; uploads: readonly U
         {uploads.map((u) => (
           <li key={u.id} className="text-slate-600">
             <a href={apiPaths.uploadDownload(orgId, u.id)} className="text-accent-700 hover:underline" download>{u.originalName}</a> · {STATUS_WORDS[u.status]} · {formatDateTime(u.createdAt)}
+            {canRemap ? (
+              <>
+                {' · '}
+                <button type="button" className="text-accent-700 hover:underline" onClick={() => onRemap(u.id)} aria-label={`Map ${u.originalName} again`}>map again</button>
+              </>
+            ) : null}
           </li>
         ))}
       </ul>
