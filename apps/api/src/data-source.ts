@@ -21,10 +21,18 @@ import { SoilRecordEntity } from './modules/soil-records/soil-record.entity.js';
 import { ImportProfileEntity } from './modules/import-profiles/import-profile.entity.js';
 import { ReadingEntity } from './modules/readings/reading.entity.js';
 import { UploadEntity } from './modules/uploads/upload.entity.js';
+import { CharacteristicSetRevisionEntity } from './modules/characteristic-sets/characteristic-set-revision.entity.js';
+import { CharacteristicSetEntity } from './modules/characteristic-sets/characteristic-set.entity.js';
+import { GroundModelRevisionEntity } from './modules/ground-models/ground-model-revision.entity.js';
+import { GroundModelEntity } from './modules/ground-models/ground-model.entity.js';
+import { CheckRevisionEntity } from './modules/settlement-checks/check-revision.entity.js';
+import { FootingResultEntity } from './modules/settlement-checks/footing-result.entity.js';
+import { SettlementCheckEntity } from './modules/settlement-checks/settlement-check.entity.js';
 import { Init1796179339734 } from './migrations/1796179339734-init.js';
 import { LabRecords1796180920952 } from './migrations/1796180920952-lab-records.js';
 import { ReadingsImport1796181181337 } from './migrations/1796181181337-readings-import.js';
 import { ReadingsOneForeignKey1796181664432 } from './migrations/1796181664432-readings-one-foreign-key.js';
+import { Design1796314148424 } from './migrations/1796314148424-design.js';
 
 /**
  * The one DataSource (the TypeORM CLI requires exactly one export here). Entities and
@@ -37,8 +45,10 @@ export const dataSource = new DataSource({
   entities: [UserEntity, OrganisationEntity, MembershipEntity, InvitationEntity, PasswordResetTokenEntity, AuditEntryEntity,
     ProjectEntity, ProjectMemberEntity, BoreholeEntity, SampleEntity, ConsolidationTestEntity, AnalysisEntity, ReviewEventEntity,
     SoilRecordEntity, SoilRecordVersionEntity, SoilRecordSupersessionEntity, JobRunEntity,
-    UploadEntity, ReadingEntity, ImportProfileEntity],
-  migrations: [Init1796179339734, LabRecords1796180920952, ReadingsImport1796181181337, ReadingsOneForeignKey1796181664432],
+    UploadEntity, ReadingEntity, ImportProfileEntity,
+    GroundModelEntity, GroundModelRevisionEntity, CharacteristicSetEntity, CharacteristicSetRevisionEntity,
+    SettlementCheckEntity, CheckRevisionEntity, FootingResultEntity],
+  migrations: [Init1796179339734, LabRecords1796180920952, ReadingsImport1796181181337, ReadingsOneForeignKey1796181664432, Design1796314148424],
   // gen_random_uuid() is built into PostgreSQL 13+, so no extension is needed on a managed server.
   uuidExtension: 'pgcrypto',
   synchronize: false,

@@ -1,0 +1,39 @@
+import { verticalStressAtDepth } from '@porestack/geo-core';
+import type { GroundModelContent, SetMember, StressProfile } from '@porestack/types';
+import { soilProfileFromContent } from './soil-profile-from-content.js';
+
+const POINTS_PER_LAYER = 12;
+
+/**
+ * What the profile drawing plots: σv, u, σ′v0 and the σ′p the check will use against depth,
+ * layer by layer (each layer's points run from its top to its bottom, so σ′p may jump at a
+ * boundary), and the samples whose values the layers use.
+ */
+export function stressProfile(content: GroundModelContent, setMembers: ReadonlyMap<string, readonly SetMember[]>): StressProfile {
+  const { profile, preconsolidation, warnings } = soilProfileFromContent(content, { immediate: true, secondary: true });
+  const points = content.layers.flatMap((layer, index) => {
+    const pre = preconsolidation[index] ?? { ocr: null, preconsolidationKpa: null };
+    return Array.from({ length: POINTS_PER_LAYER }, (_, step) => {
+      const depthM = layer.topDepthM + (layer.thicknessM * step) / (POINTS_PER_LAYER - 1);
+      const state = verticalStressAtDepth(profile, depthM);
+      const preconsolidationKpa = pre.ocr !== null ? pre.ocr * state.effectiveStressKpa : pre.preconsolidationKpa;
+      return { depthM, ...state, preconsolidationKpa: layer.kind === 'compressible' ? (preconsolidationKpa ?? state.effectiveStressKpa) : null };
+    });
+  });
+  const samples = content.layers.flatMap((layer, layerIndex) => {
+    const source = layer.source;
+    if (source?.kind === 'record') {
+      return [{ layerIndex, label: `${source.boreholeName} ${source.sampleReference} (${source.testReference} v${source.version})`, depthM: source.sampleDepthM, preconsolidationKpa: layer.parameters?.preconsolidationKpa.value ?? null }];
+    }
+    if (source?.kind === 'set') {
+      return (setMembers.get(source.setRevisionId) ?? []).map((member) => ({
+        layerIndex,
+        label: `${member.boreholeName} ${member.sampleReference} (${member.testReference} v${member.version}, in ${source.name})`,
+        depthM: member.depthM,
+        preconsolidationKpa: member.values.preconsolidationKpa,
+      }));
+    }
+    return [];
+  });
+  return { points, samples, warnings };
+}
