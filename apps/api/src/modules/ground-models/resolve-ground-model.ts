@@ -1,3 +1,4 @@
+import { WATER_UNIT_WEIGHT_KN_PER_M3 } from '@porestack/geo-core';
 import { CompressibleParametersInputSchema, GroundModelContentInputSchema, type GroundModelContent, type GroundModelLayer, type ResolvedCompressibleParameters } from '@porestack/types';
 import type { z } from 'zod';
 import type { FieldIssue } from '../../errors/domain-error.js';
@@ -101,6 +102,13 @@ export async function resolveGroundModel(orgId: string, projectId: string, input
   });
   const content: GroundModelContent = { groundLevelM: input.groundLevelM, waterTableDepthM: input.waterTableDepthM, waterUnitWeightKnPerM3: input.waterUnitWeightKnPerM3, layers };
   errors.push(...missingParameters(content));
+  if (Math.abs(input.waterUnitWeightKnPerM3 - WATER_UNIT_WEIGHT_KN_PER_M3) > 1e-9) {
+    // Until geo-core takes γw on the profile, any other value would be silently replaced by 9.81.
+    errors.push({
+      path: 'waterUnitWeightKnPerM3',
+      message: `This version of the settlement engine works with γw = ${WATER_UNIT_WEIGHT_KN_PER_M3} kN/m³ only; ${input.waterUnitWeightKnPerM3} kN/m³ cannot be used yet. Enter ${WATER_UNIT_WEIGHT_KN_PER_M3}.`,
+    });
+  }
   if (input.waterTableDepthM > topDepthM) {
     errors.push({
       path: 'waterTableDepthM',

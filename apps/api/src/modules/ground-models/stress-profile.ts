@@ -11,10 +11,12 @@ const POINTS_PER_LAYER = 12;
  */
 export function stressProfile(content: GroundModelContent, setMembers: ReadonlyMap<string, readonly SetMember[]>): StressProfile {
   const { profile, preconsolidation, warnings } = soilProfileFromContent(content, { immediate: true, secondary: true });
+  // Summed as geo-core sums it, so the last point is never a rounding error below the profile.
+  const bottomM = profile.layers.reduce((sum, layer) => sum + layer.thicknessM, 0);
   const points = content.layers.flatMap((layer, index) => {
     const pre = preconsolidation[index] ?? { ocr: null, preconsolidationKpa: null };
     return Array.from({ length: POINTS_PER_LAYER }, (_, step) => {
-      const depthM = layer.topDepthM + (layer.thicknessM * step) / (POINTS_PER_LAYER - 1);
+      const depthM = Math.min(bottomM, step === POINTS_PER_LAYER - 1 ? layer.bottomDepthM : layer.topDepthM + (layer.thicknessM * step) / (POINTS_PER_LAYER - 1));
       const state = verticalStressAtDepth(profile, depthM);
       const preconsolidationKpa = pre.ocr !== null ? pre.ocr * state.effectiveStressKpa : pre.preconsolidationKpa;
       return { depthM, ...state, preconsolidationKpa: layer.kind === 'compressible' ? (preconsolidationKpa ?? state.effectiveStressKpa) : null };
