@@ -15,7 +15,7 @@ const HEADING_WORDS: Record<Column, readonly string[]> = {
   lengthM: ['l', 'length', 'lm', 'lengthm'],
   depthM: ['depth', 'df', 'foundingdepth', 'depthm', 'level'],
   loadKind: ['loadkind', 'kind'],
-  load: ['load', 'q', 'p', 'pressure', 'loadknorpressurekpa', 'loadkn', 'pressurekpa', 'bearingpressure', 'value'],
+  load: ['load', 'q', 'p', 'pressure', 'loadorpressure', 'bearingpressure', 'value'],
   loadBasis: ['basis', 'grossornet', 'grossnet', 'netgross'],
   xM: ['x', 'xm', 'easting'],
   yM: ['y', 'ym', 'northing'],
