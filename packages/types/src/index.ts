@@ -162,6 +162,7 @@ export {
   GroundModelRevisionSchema,
   GroundModelSummarySchema,
   GroundModelDetailSchema,
+  GroundModelPreviewSchema,
 } from './design/ground-model.js';
 export type {
   LayerKind,
@@ -182,6 +183,7 @@ export type {
   GroundModelRevision,
   GroundModelSummary,
   GroundModelDetail,
+  GroundModelPreview,
 } from './design/ground-model.js';
 export {
   SET_PARAMETERS,

@@ -15,8 +15,12 @@ describe('navItemsFor(role)', () => {
     expect(navItemsFor('lab_manager').map((item) => item.label)).toEqual(['Home', 'Projects', 'Tests', 'Review queue', 'Soil records']);
   });
 
-  it.each(['designer', 'client'] as const)('gives a %s the soil records only', (role) => {
-    expect(navItemsFor(role).map((item) => item.label)).toEqual(['Home', 'Soil records']);
+  it('gives designers the projects they work on and the soil records', () => {
+    expect(navItemsFor('designer').map((item) => item.label)).toEqual(['Home', 'Projects', 'Soil records']);
+  });
+
+  it('gives a client the soil records only', () => {
+    expect(navItemsFor('client').map((item) => item.label)).toEqual(['Home', 'Soil records']);
   });
 
   it('builds links inside the organisation in the URL', () => {

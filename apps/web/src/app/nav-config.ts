@@ -20,7 +20,8 @@ export const NAV_ITEMS = [
   { id: 'home', label: 'Home', to: paths.org.home.to, roles: ROLES, end: true },
   { id: 'members', label: 'Members', to: paths.org.members.to, roles: ['admin'] },
   { id: 'activity', label: 'Activity', to: paths.org.activity.to, roles: ['admin'] },
-  { id: 'projects', label: 'Projects', to: paths.org.projects.to, roles: ['admin', 'technician', 'lab_manager'] },
+  // Designers see the projects they are on (the API scopes the list), with their design work.
+  { id: 'projects', label: 'Projects', to: paths.org.projects.to, roles: ['admin', 'technician', 'lab_manager', 'designer'] },
   { id: 'tests', label: 'Tests', to: paths.org.tests.to, roles: ['admin', 'technician', 'lab_manager'] },
   // Reviewing is the lab manager's alone (the API refuses administrators), so the queue is not offered to them.
   { id: 'review-queue', label: 'Review queue', to: paths.org.reviewQueue.to, roles: ['lab_manager'] },

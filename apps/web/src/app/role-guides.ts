@@ -34,8 +34,8 @@ export const ROLE_GUIDES: Record<Role, { summary: string; tasks: readonly RoleTa
   designer: {
     summary: 'Designers use approved parameters to check the settlement of footings.',
     tasks: [
-      { text: 'Pick approved soil parameters for a project.', available: false },
-      { text: 'Run settlement checks for footings and keep the results with the project.', available: false },
+      { text: 'Pick approved soil parameters for a project: ground models and characteristic sets.', available: true },
+      { text: 'Run settlement checks for footings and keep the results with the project.', available: true },
     ],
   },
   client: {

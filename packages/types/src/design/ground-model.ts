@@ -190,3 +190,12 @@ export const GroundModelDetailSchema = GroundModelSummarySchema.extend({
   revisions: z.array(z.object({ revision: z.number().int(), note: z.string(), createdBy: ActorSchema, createdAt: isoDateTime })),
 });
 export type GroundModelDetail = z.infer<typeof GroundModelDetailSchema>;
+
+/** A ground model being edited, resolved without saving: values, stresses, and what is wrong with it. */
+export const GroundModelPreviewSchema = z.object({
+  content: GroundModelContentSchema,
+  profile: StressProfileSchema.nullable(),
+  errors: z.array(z.object({ path: z.string(), message: z.string() })),
+  warnings: z.array(z.object({ path: z.string(), message: z.string() })),
+});
+export type GroundModelPreview = z.infer<typeof GroundModelPreviewSchema>;

@@ -10,6 +10,8 @@ import { useProjectTests } from '../../features/projects/api/get-project-tests';
 import { BoreholesSection } from '../../features/projects/components/boreholes-section';
 import { ProjectEditForm } from '../../features/projects/components/project-edit-form';
 import { DisclosureForm } from '../../components/disclosure-form';
+import { DesignOverview } from '../../features/design/components/design-overview';
+import { designPermissions } from '../design-permissions';
 import { labPermissions } from '../lab-permissions';
 import { rolesFor } from '../nav-config';
 import { useCurrentOrg } from '../org-context';
@@ -53,6 +55,13 @@ function ProjectPage() {
           <DisclosureForm openLabel="Edit project and designers">
             {(close) => <ProjectEditForm orgId={orgId} project={p} onDone={close} />}
           </DisclosureForm>
+        </div>
+      ) : null}
+      {designPermissions(membership.role).read ? (
+        <div className="mb-6">
+          <Panel title="Design" description="Ground models built from the approved soil records, characteristic sets of each stratum, and settlement checks of footings.">
+            <DesignOverview orgId={orgId} projectId={projectId} canEdit={designPermissions(membership.role).edit} />
+          </Panel>
         </div>
       ) : null}
       <Panel title="Boreholes, samples and tests" description="Open a test to upload its readings, check the curves and send it for review.">

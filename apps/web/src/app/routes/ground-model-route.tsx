@@ -1,0 +1,93 @@
+import { Link, useNavigate, useParams, useSearchParams } from 'react-router-dom';
+import { EngineeringCaution } from '../../components/engineering-caution';
+import { ErrorMessage } from '../../components/error-message';
+import { PageHeader } from '../../components/page-header';
+import { Panel } from '../../components/panel';
+import { LoadingBlock } from '../../components/spinner';
+import { paths } from '../../config/paths';
+import { formatDateTime } from '../../lib/format';
+import { useGroundModel } from '../../features/design/api/ground-models';
+import { draftFromContent, emptyModel } from '../../features/design/components/ground-model-draft';
+import { GroundModelEditor } from '../../features/design/components/ground-model-editor';
+import { GroundModelView } from '../../features/design/components/ground-model-view';
+import { DESIGN_READERS, designPermissions } from '../design-permissions';
+import { useCurrentOrg } from '../org-context';
+import { RoleGate } from '../role-gate';
+
+export function GroundModelRoute() {
+  return (
+    <RoleGate roles={DESIGN_READERS} purpose="a project's design work">
+      <GroundModelPage />
+    </RoleGate>
+  );
+}
+
+function GroundModelPage() {
+  const { orgId, membership } = useCurrentOrg();
+  const { projectId = '', modelId = 'new' } = useParams();
+  const [search] = useSearchParams();
+  const navigate = useNavigate();
+  const isNew = modelId === 'new';
+  const revisionParam = search.get('revision');
+  const model = useGroundModel(orgId, projectId, isNew ? '' : modelId, revisionParam === null ? null : Number(revisionParam));
+  const canEdit = designPermissions(membership.role).edit;
+  const back = (
+    <p className="mb-2 text-sm">
+      <Link to={paths.org.project.to(orgId, projectId)} className="text-accent-700 hover:underline">
+        ← Project
+      </Link>
+    </p>
+  );
+  const saved = (id: string) => navigate(paths.org.groundModel.to(orgId, projectId, id));
+  if (isNew) {
+    return (
+      <>
+        {back}
+        <PageHeader title="New ground model" description="Layers from the top down; each clay takes its parameters from an approved soil record, a characteristic set or your own entries." />
+        {canEdit ? <GroundModelEditor orgId={orgId} projectId={projectId} modelId={null} initial={emptyModel()} onSaved={(m) => saved(m.id)} /> : <p className="text-sm">Only the project's designers build ground models.</p>}
+      </>
+    );
+  }
+  if (model.isPending) return <LoadingBlock label="Loading the ground model…" />;
+  if (model.error) return <ErrorMessage error={model.error} title="The ground model could not be loaded" onRetry={() => void model.refetch()} />;
+  const m = model.data;
+  const isCurrent = m.current.revision === m.currentRevision;
+  return (
+    <>
+      {back}
+      <PageHeader title={m.name} description={`Ground model · revision ${m.current.revision}${isCurrent ? ' (current)' : ` of ${m.currentRevision}`} · saved ${formatDateTime(m.current.createdAt)} by ${m.current.createdBy.name}`} />
+      <div className="grid items-start gap-6 lg:grid-cols-[minmax(0,1fr)_14rem]">
+        <div className="space-y-4">
+          <EngineeringCaution />
+          {canEdit && isCurrent ? (
+            <GroundModelEditor key={m.current.id} orgId={orgId} projectId={projectId} modelId={m.id} initial={draftFromContent(m.current.content, m.name)} onSaved={(saved) => navigate(paths.org.groundModel.to(orgId, projectId, saved.id), { replace: true })} />
+          ) : (
+            <Panel title={`Revision ${m.current.revision}`}>
+              <GroundModelView revision={m.current} />
+            </Panel>
+          )}
+        </div>
+        <nav aria-label="Revisions" className="rounded-lg border border-slate-200 bg-white">
+          <h2 className="border-b border-slate-200 px-4 py-2 text-sm font-semibold text-slate-900">Revisions</h2>
+          <ul>
+            {m.revisions.map((r) => (
+              <li key={r.revision}>
+                <Link
+                  to={`${paths.org.groundModel.to(orgId, projectId, m.id)}${r.revision === m.currentRevision ? '' : `?revision=${r.revision}`}`}
+                  aria-current={r.revision === m.current.revision ? 'page' : undefined}
+                  className={`block px-4 py-2 text-sm ${r.revision === m.current.revision ? 'bg-accent-50 font-medium text-accent-800' : 'text-slate-700 hover:bg-slate-50'}`}
+                >
+                  Revision {r.revision}
+                  <span className="block text-xs font-normal text-slate-500">
+                    {formatDateTime(r.createdAt)}
+                    {r.note ? ` · ${r.note}` : ''}
+                  </span>
+                </Link>
+              </li>
+            ))}
+          </ul>
+        </nav>
+      </div>
+    </>
+  );
+}
