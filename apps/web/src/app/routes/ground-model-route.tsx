@@ -55,38 +55,36 @@ function GroundModelPage() {
   return (
     <>
       {back}
-      <PageHeader title={m.name} description={`Ground model · revision ${m.current.revision}${isCurrent ? ' (current)' : ` of ${m.currentRevision}`} · saved ${formatDateTime(m.current.createdAt)} by ${m.current.createdBy.name}`} />
-      <div className="grid items-start gap-6 lg:grid-cols-[minmax(0,1fr)_14rem]">
-        <div className="space-y-4">
-          <EngineeringCaution />
-          {canEdit && isCurrent ? (
-            <GroundModelEditor key={m.current.id} orgId={orgId} projectId={projectId} modelId={m.id} initial={draftFromContent(m.current.content, m.name)} onSaved={(saved) => navigate(paths.org.groundModel.to(orgId, projectId, saved.id), { replace: true })} />
-          ) : (
-            <Panel title={`Revision ${m.current.revision}`}>
-              <GroundModelView revision={m.current} />
-            </Panel>
-          )}
-        </div>
-        <nav aria-label="Revisions" className="rounded-lg border border-slate-200 bg-white">
-          <h2 className="border-b border-slate-200 px-4 py-2 text-sm font-semibold text-slate-900">Revisions</h2>
-          <ul>
-            {m.revisions.map((r) => (
-              <li key={r.revision}>
+      <PageHeader
+        title={m.name}
+        description={`Ground model · revision ${m.current.revision}${isCurrent ? ' (current)' : ` of ${m.currentRevision}`} · saved ${formatDateTime(m.current.createdAt)} by ${m.current.createdBy.name}${m.current.note ? ` · ${m.current.note}` : ''}`}
+        actions={
+          m.revisions.length > 1 ? (
+            <nav aria-label="Revisions" className="flex flex-wrap gap-2 text-sm">
+              {m.revisions.map((r) => (
                 <Link
+                  key={r.revision}
                   to={`${paths.org.groundModel.to(orgId, projectId, m.id)}${r.revision === m.currentRevision ? '' : `?revision=${r.revision}`}`}
                   aria-current={r.revision === m.current.revision ? 'page' : undefined}
-                  className={`block px-4 py-2 text-sm ${r.revision === m.current.revision ? 'bg-accent-50 font-medium text-accent-800' : 'text-slate-700 hover:bg-slate-50'}`}
+                  title={`${formatDateTime(r.createdAt)}${r.note ? ` · ${r.note}` : ''}`}
+                  className={r.revision === m.current.revision ? 'font-semibold text-slate-900' : 'text-accent-700 hover:underline'}
                 >
-                  Revision {r.revision}
-                  <span className="block text-xs font-normal text-slate-500">
-                    {formatDateTime(r.createdAt)}
-                    {r.note ? ` · ${r.note}` : ''}
-                  </span>
+                  rev. {r.revision}
                 </Link>
-              </li>
-            ))}
-          </ul>
-        </nav>
+              ))}
+            </nav>
+          ) : undefined
+        }
+      />
+      <div className="space-y-4">
+        <EngineeringCaution />
+        {canEdit && isCurrent ? (
+          <GroundModelEditor key={m.current.id} orgId={orgId} projectId={projectId} modelId={m.id} initial={draftFromContent(m.current.content, m.name)} onSaved={(saved) => navigate(paths.org.groundModel.to(orgId, projectId, saved.id), { replace: true })} />
+        ) : (
+          <Panel title={`Revision ${m.current.revision}`}>
+            <GroundModelView revision={m.current} />
+          </Panel>
+        )}
       </div>
     </>
   );

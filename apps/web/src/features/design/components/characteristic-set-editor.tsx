@@ -60,7 +60,7 @@ export function CharacteristicSetEditor({ orgId, projectId, setId, initial, canE
   );
   const listed = (records.data ?? []).filter((r) => borehole === '' || r.boreholeName.toLowerCase().includes(borehole.toLowerCase()) || versionIds.includes(r.versionId));
   // Members kept from an earlier revision may be older versions than the ones listed.
-  const olderMembers = versionIds.filter((id) => !(records.data ?? []).some((r) => r.versionId === id));
+  const olderMembers = records.data ? versionIds.filter((id) => !records.data.some((r) => r.versionId === id)) : [];
 
   return (
     <form
@@ -81,7 +81,7 @@ export function CharacteristicSetEditor({ orgId, projectId, setId, initial, canE
         <div className="mt-3 overflow-x-auto rounded-md border border-slate-200">
           <table className="w-full text-left text-sm">
             <caption className="sr-only">Approved soil records of the project</caption>
-            <thead className="bg-slate-50 text-xs uppercase tracking-wide text-slate-500">
+            <thead className="bg-slate-50 text-xs text-slate-600">
               <tr>
                 {['In set', 'Record', 'Depth (m)', 'e0', 'Cc', 'Cr', 'Cs', 'σ′p (kPa)', 'OCR', 'cv (m²/yr)', 'Cα', 'Quality'].map((h) => (
                   <th key={h} scope="col" className="whitespace-nowrap px-3 py-2 font-medium">
@@ -135,7 +135,7 @@ export function CharacteristicSetEditor({ orgId, projectId, setId, initial, canE
             <div className="overflow-x-auto">
               <table className="w-full text-left text-sm">
                 <caption className="sr-only">Statistics of each parameter and the value adopted</caption>
-                <thead className="bg-slate-50 text-xs uppercase tracking-wide text-slate-500">
+                <thead className="bg-slate-50 text-xs text-slate-600">
                   <tr>
                     {['Parameter', 'n', 'Mean', 'SD', 'COV', '95 % bound', 'Schneider', 'Unfavourable side', 'Adopt', 'Value', 'Note'].map((h) => (
                       <th key={h} scope="col" className="whitespace-nowrap px-2 py-2 font-medium">
@@ -147,7 +147,7 @@ export function CharacteristicSetEditor({ orgId, projectId, setId, initial, canE
                 <tbody>
                   {SET_PARAMETERS.map((parameter) => {
                     const stats = statsOf(parameter);
-                    const adoption = adopted[parameter] ?? { basis: 'student-t-bound' as AdoptionBasis, value: '', note: '' };
+                    const adoption = adopted[parameter] ?? { basis: 'chosen' as AdoptionBasis, value: '', note: '' };
                     const label = SET_PARAMETER_LABELS[parameter];
                     const update = (next: Adoption) => setAdopted((all) => ({ ...all, [parameter]: next }));
                     return (
@@ -158,7 +158,7 @@ export function CharacteristicSetEditor({ orgId, projectId, setId, initial, canE
                         <td className="px-2 py-2">{stats?.count ?? 0}</td>
                         <td className="px-2 py-2">{formatNumber(stats?.mean)}</td>
                         <td className="px-2 py-2">{stats?.scale === 'log' ? `${formatNumber(stats.standardDeviation)} (log10)` : formatNumber(stats?.standardDeviation)}</td>
-                        <td className="px-2 py-2">{stats?.coefficientOfVariation == null ? '—' : `${(stats.coefficientOfVariation * 100).toFixed(0)} %`}</td>
+                        <td className="whitespace-nowrap px-2 py-2">{stats?.coefficientOfVariation == null ? '—' : `${(stats.coefficientOfVariation * 100).toFixed(0)} %`}</td>
                         <td className="px-2 py-2">{formatNumber(stats?.characteristicStudentT)}</td>
                         <td className="px-2 py-2">{formatNumber(stats?.characteristicSchneider)}</td>
                         <td className="max-w-56 px-2 py-2 text-xs text-slate-600">{stats?.unfavourableReason}</td>
@@ -166,7 +166,7 @@ export function CharacteristicSetEditor({ orgId, projectId, setId, initial, canE
                           <select
                             aria-label={`How ${label} is adopted`}
                             disabled={!canEdit}
-                            className="h-8 rounded-md border border-slate-300 bg-white px-2 text-sm"
+                            className="h-8 w-44 rounded-md border border-slate-300 bg-white px-2 text-sm"
                             value={adoption.basis}
                             onChange={(e) => {
                               const basis = e.target.value as AdoptionBasis;
@@ -184,7 +184,7 @@ export function CharacteristicSetEditor({ orgId, projectId, setId, initial, canE
                           <input aria-label={`Adopted ${label}`} disabled={!canEdit} inputMode="decimal" className="h-8 w-24 rounded-md border border-slate-300 px-2 text-sm" value={adoption.value} onChange={(e) => update({ ...adoption, basis: 'chosen', value: e.target.value })} />
                         </td>
                         <td className="px-2 py-2">
-                          <input aria-label={`Note on ${label}`} disabled={!canEdit} className="h-8 w-48 rounded-md border border-slate-300 px-2 text-sm" value={adoption.note} onChange={(e) => update({ ...adoption, note: e.target.value })} />
+                          <input aria-label={`Note on ${label}`} disabled={!canEdit} className="h-8 w-40 rounded-md border border-slate-300 px-2 text-sm" value={adoption.note} onChange={(e) => update({ ...adoption, note: e.target.value })} />
                         </td>
                       </tr>
                     );
@@ -192,13 +192,7 @@ export function CharacteristicSetEditor({ orgId, projectId, setId, initial, canE
                 </tbody>
               </table>
             </div>
-            {statistics.data.statistics.flatMap((s) => s.warnings.map((w) => `${SET_PARAMETER_LABELS[s.parameter]}: ${w}`)).length > 0 ? (
-              <ul className="mt-3 list-disc space-y-0.5 pl-5 text-xs text-amber-900">
-                {[...new Set(statistics.data.statistics.flatMap((s) => s.warnings.map((w) => `${SET_PARAMETER_LABELS[s.parameter]}: ${w}`)))].map((w) => (
-                  <li key={w}>{w}</li>
-                ))}
-              </ul>
-            ) : null}
+            <SetWarnings statistics={statistics.data.statistics} />
           </Panel>
           <Panel title="Against depth">
             <SetDepthPlots members={statistics.data.members} adopted={adoptedValues} />
@@ -217,5 +211,21 @@ export function CharacteristicSetEditor({ orgId, projectId, setId, initial, canE
         </Panel>
       ) : null}
     </form>
+  );
+}
+
+/** The statistics' warnings, each said once with the parameters it concerns. */
+function SetWarnings({ statistics }: { statistics: readonly ParameterStatistics[] }) {
+  const byMessage = new Map<string, string[]>();
+  for (const s of statistics) for (const w of s.warnings) byMessage.set(w, [...(byMessage.get(w) ?? []), SET_PARAMETER_LABELS[s.parameter]]);
+  if (byMessage.size === 0) return null;
+  return (
+    <ul className="mt-3 list-disc space-y-0.5 pl-5 text-xs text-amber-900">
+      {[...byMessage].map(([message, parameters]) => (
+        <li key={message}>
+          {parameters.join(', ')}: {message}
+        </li>
+      ))}
+    </ul>
   );
 }

@@ -8,7 +8,9 @@ export function formatNumber(value: number | null | undefined, digits = 3): stri
   if (value === null || value === undefined || !Number.isFinite(value)) return '—';
   if (value === 0) return '0';
   const magnitude = Math.floor(Math.log10(Math.abs(value)));
-  return magnitude >= digits || magnitude < -3 ? value.toPrecision(digits) : value.toFixed(Math.max(0, digits - 1 - magnitude));
+  // Large values (moduli in kPa) read best whole, grouped: 12,000 rather than 1.20e+4.
+  if (magnitude >= digits) return Math.round(Number(value.toPrecision(digits))).toLocaleString('en-GB');
+  return magnitude < -3 ? value.toPrecision(digits) : value.toFixed(Math.max(0, digits - 1 - magnitude));
 }
 
 export function formatFixed(value: number | null | undefined, digits: number): string {

@@ -236,7 +236,7 @@ export function FootingScheduleEditor({ orgId, projectId, check, canEdit, onRun,
       ) : null}
       <div className="overflow-x-auto rounded-md border border-slate-200 bg-white">
         <table className="w-full text-left text-sm" aria-label="Footing schedule">
-          <thead className="bg-slate-50 text-xs uppercase tracking-wide text-slate-500">
+          <thead className="bg-slate-50 text-xs text-slate-600">
             {table.getHeaderGroups().map((group) => (
               <tr key={group.id}>
                 {group.headers.map((header) => (

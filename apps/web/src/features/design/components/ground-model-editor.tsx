@@ -99,7 +99,7 @@ export function GroundModelEditor({ orgId, projectId, modelId, initial, onSaved 
   return (
     <form
       aria-label="Ground model"
-      className="grid items-start gap-6 xl:grid-cols-[minmax(0,3fr)_minmax(0,2fr)]"
+      className="grid items-start gap-6 lg:grid-cols-[minmax(0,1fr)_24rem]"
       onSubmit={(event) => {
         event.preventDefault();
         submit(false);
@@ -107,8 +107,8 @@ export function GroundModelEditor({ orgId, projectId, modelId, initial, onSaved 
     >
       <div className="space-y-4">
         <Panel title="Site">
-          <div className="grid gap-3 sm:grid-cols-2 lg:grid-cols-4">
-            <TextField label="Ground model name" name="name" value={draft.name} onChange={(e) => setDraft({ ...draft, name: e.target.value })} error={issueFor('name')} className="lg:col-span-2" />
+          <div className="grid gap-3 sm:grid-cols-2">
+            <TextField label="Ground model name" name="name" value={draft.name} onChange={(e) => setDraft({ ...draft, name: e.target.value })} error={issueFor('name')} className="sm:col-span-2" />
             <TextField label="Ground level (m)" name="groundLevelM" inputMode="decimal" value={draft.groundLevelM} onChange={(e) => setDraft({ ...draft, groundLevelM: e.target.value })} error={issueFor('groundLevelM')} hint="reported only; depths are below it" />
             <TextField label="Water table depth (m)" name="waterTableDepthM" inputMode="decimal" value={draft.waterTableDepthM} onChange={(e) => setDraft({ ...draft, waterTableDepthM: e.target.value })} error={issueFor('waterTableDepthM')} />
             <TextField
@@ -168,7 +168,7 @@ export function GroundModelEditor({ orgId, projectId, modelId, initial, onSaved 
           </div>
         </Panel>
       </div>
-      <div className="space-y-3 xl:sticky xl:top-4">
+      <div className="space-y-3 lg:sticky lg:top-4">
         <Panel title="Profile" description="Layers to scale with the water table; stresses and the σ′p the check will use, with the samples at their depths.">
           {preview?.profile ? (
             <GroundProfilePlot content={preview.content} profile={preview.profile} />

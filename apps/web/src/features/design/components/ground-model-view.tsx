@@ -25,7 +25,7 @@ export function GroundModelView({ revision }: { revision: GroundModelRevision })
       <div className="overflow-x-auto rounded-md border border-slate-200">
         <table className="w-full text-left text-sm">
           <caption className="sr-only">Layers of the ground model</caption>
-          <thead className="bg-slate-50 text-xs uppercase tracking-wide text-slate-500">
+          <thead className="bg-slate-50 text-xs text-slate-600">
             <tr>
               {['Layer', 'Depth (m)', 'γ / γsat', 'E′, ν', 'Source', 'e0', 'Cc', 'Cr/Cs', 'σ′p (kPa)', 'OCR', 'cv (m²/yr)', 'Cα'].map((h) => (
                 <th key={h} scope="col" className="whitespace-nowrap px-3 py-2 font-medium">

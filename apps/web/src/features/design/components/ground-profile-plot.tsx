@@ -10,7 +10,7 @@ const LAYER_FILL = { granular: '#f2e3bf', compressible: '#c9d6e3' } as const;
  */
 export function GroundProfilePlot({ content, profile }: { content: GroundModelContent; profile: StressProfile }) {
   const { data, layout } = useMemo(() => build(content, profile), [content, profile]);
-  return <PlotlyChart data={data} layout={layout} heightPx={460} label="Ground model to scale with the water table, and total, pore and effective stress and σ′p against depth, with the samples marked" />;
+  return <PlotlyChart data={data} layout={layout} heightPx={520} label="Ground model to scale with the water table, and total, pore and effective stress and σ′p against depth, with the samples marked" />;
 }
 
 function build(content: GroundModelContent, profile: StressProfile): { data: PlotData[]; layout: Partial<PlotLayout> } {
@@ -78,9 +78,9 @@ function build(content: GroundModelContent, profile: StressProfile): { data: Plo
     y: (layer.topDepthM + layer.bottomDepthM) / 2,
     text: layer.name,
     showarrow: false,
-    font: { size: 11, color: '#1e293b' },
+    font: { size: 10, color: '#1e293b' },
   }));
-  annotations.push({ xref: 'x', yref: 'y', x: 1, y: content.waterTableDepthM, xanchor: 'right', yanchor: 'bottom', text: '▽ water table', showarrow: false, font: { size: 10, color: '#1d4ed8' } });
+  annotations.push({ xref: 'x', yref: 'y', x: 0, y: content.waterTableDepthM, xanchor: 'right', yanchor: 'middle', text: '▽ WT', showarrow: false, font: { size: 10, color: '#1d4ed8' } });
   return {
     data,
     layout: {

@@ -35,9 +35,10 @@ export function LayerFields({ index, count, layer, resolved, records, sets, issu
         {label}
         {layer.name ? ` — ${layer.name}` : ''}
       </legend>
-      <div className="grid gap-3 sm:grid-cols-2 lg:grid-cols-6">
-        <TextField label="Name" name="name" value={layer.name} onChange={(e) => set('name', e.target.value)} error={issues.get('name')} className="lg:col-span-2" />
+      <div className="flex flex-wrap items-start gap-3">
+        <TextField label="Name" name="name" value={layer.name} onChange={(e) => set('name', e.target.value)} error={issues.get('name')} className="w-full sm:w-56" />
         <Select
+          className="w-full sm:w-60"
           label="Kind"
           value={layer.kind}
           onChange={(e) => set('kind', e.target.value as LayerDraft['kind'])}
@@ -46,22 +47,23 @@ export function LayerFields({ index, count, layer, resolved, records, sets, issu
             { value: 'compressible', label: 'compressible (consolidates)' },
           ]}
         />
-        <TextField label="Thickness (m)" name="thicknessM" inputMode="decimal" value={layer.thicknessM} onChange={(e) => set('thicknessM', e.target.value)} error={issues.get('thicknessM')} />
-        <TextField label="γ above water (kN/m³)" name="unitWeightKnPerM3" inputMode="decimal" value={layer.unitWeightKnPerM3} onChange={(e) => set('unitWeightKnPerM3', e.target.value)} error={issues.get('unitWeightKnPerM3')} />
+        <TextField label="Thickness (m)" name="thicknessM" className="w-32" inputMode="decimal" value={layer.thicknessM} onChange={(e) => set('thicknessM', e.target.value)} error={issues.get('thicknessM')} />
+        <TextField label="γ above water (kN/m³)" name="unitWeightKnPerM3" className="w-40" inputMode="decimal" value={layer.unitWeightKnPerM3} onChange={(e) => set('unitWeightKnPerM3', e.target.value)} error={issues.get('unitWeightKnPerM3')} />
         <TextField
           label="γ below water (kN/m³)"
           name="saturatedUnitWeightKnPerM3"
+          className="w-40"
           inputMode="decimal"
           value={layer.saturatedUnitWeightKnPerM3}
           onChange={(e) => set('saturatedUnitWeightKnPerM3', e.target.value)}
           error={issues.get('saturatedUnitWeightKnPerM3')}
         />
-        <TextField label="E′ (kPa)" name="elasticModulusKpa" inputMode="decimal" value={layer.elasticModulusKpa} onChange={(e) => set('elasticModulusKpa', e.target.value)} error={issues.get('elasticModulusKpa')} hint="for immediate settlement" />
-        <TextField label="ν" name="poissonRatio" inputMode="decimal" value={layer.poissonRatio} onChange={(e) => set('poissonRatio', e.target.value)} error={issues.get('poissonRatio')} />
+        <TextField label="E′ (kPa)" name="elasticModulusKpa" className="w-32" inputMode="decimal" value={layer.elasticModulusKpa} onChange={(e) => set('elasticModulusKpa', e.target.value)} error={issues.get('elasticModulusKpa')} hint="for immediate settlement" />
+        <TextField label="ν" name="poissonRatio" className="w-32" inputMode="decimal" value={layer.poissonRatio} onChange={(e) => set('poissonRatio', e.target.value)} error={issues.get('poissonRatio')} />
         {layer.kind === 'compressible' ? (
           <>
-            <Select label="Drainage at the top" value={layer.drainageTop} onChange={(e) => set('drainageTop', e.target.value as LayerDraft['drainageTop'])} options={DRAINAGE} />
-            <Select label="Drainage at the bottom" value={layer.drainageBottom} onChange={(e) => set('drainageBottom', e.target.value as LayerDraft['drainageBottom'])} options={DRAINAGE} />
+            <Select className="w-40" label="Drainage at the top" value={layer.drainageTop} onChange={(e) => set('drainageTop', e.target.value as LayerDraft['drainageTop'])} options={DRAINAGE} />
+            <Select className="w-40" label="Drainage at the bottom" value={layer.drainageBottom} onChange={(e) => set('drainageBottom', e.target.value as LayerDraft['drainageBottom'])} options={DRAINAGE} />
           </>
         ) : null}
       </div>
@@ -114,11 +116,12 @@ function CompressibleFields({ layer, resolved, records, sets, issues, onChange }
         ))}
       </div>
       {layer.sourceKind === 'record' ? (
-        <div className="grid gap-3 sm:grid-cols-[repeat(3,minmax(0,8rem))_minmax(0,1fr)]">
+        <div className="grid gap-3 sm:grid-cols-3">
           <TextField label="Borehole contains" name="borehole" value={borehole} onChange={(e) => setBorehole(e.target.value)} />
           <TextField label="Depth from (m)" name="fromM" inputMode="decimal" value={fromM} onChange={(e) => setFromM(e.target.value)} />
           <TextField label="Depth to (m)" name="toM" inputMode="decimal" value={toM} onChange={(e) => setToM(e.target.value)} />
           <Select
+            className="sm:col-span-3"
             label="Approved soil record"
             value={layer.versionId}
             error={issues.get('source')}
@@ -147,7 +150,7 @@ function CompressibleFields({ layer, resolved, records, sets, issues, onChange }
         />
       ) : null}
       {issues.get('parameters') ? <p className="text-sm text-red-700">{issues.get('parameters')}</p> : null}
-      <div className="grid gap-3 sm:grid-cols-3 lg:grid-cols-7">
+      <div className="grid grid-cols-2 gap-3 sm:grid-cols-4 lg:grid-cols-7">
         {PARAMETER_NAMES.map((name) => (
           <ParameterField key={name} layer={layer} name={name} resolvedValue={p ? resolvedValue(p, name) : null} onChange={onChange} error={issues.get(`parameters.${name}`)} />
         ))}

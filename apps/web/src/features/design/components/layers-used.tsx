@@ -14,7 +14,7 @@ export function LayersUsed({ orgId, revision }: { orgId: string; revision: Check
     <div className="overflow-x-auto">
       <table className="w-full text-left text-sm">
         <caption className="sr-only">Layers and parameters used by the run, each traceable to its source</caption>
-        <thead className="bg-slate-50 text-xs uppercase tracking-wide text-slate-500">
+        <thead className="bg-slate-50 text-xs text-slate-600">
           <tr>
             {['Layer', 'Depth (m)', 'Source', 'e0', 'Cc', 'Cr/Cs used', 'σ′p basis', 'cv (m²/yr)', 'Cα', 'Drainage path (m)', 'End of primary'].map((h) => (
               <th key={h} scope="col" className="whitespace-nowrap px-2 py-2 font-medium">

@@ -132,11 +132,12 @@ export function PlanView({ footings, pairs, limitLabel, selectedId, onSelect }: 
       context.stroke();
     }
     if (footings.length <= 60) {
-      context.fillStyle = '#0f172a';
       context.font = '11px "IBM Plex Sans", sans-serif';
       context.textAlign = 'center';
       for (const f of footings) {
         const centre = toPx(f.xM, f.yM);
+        // Light text on the dark end of the scale, dark text on the light end.
+        context.fillStyle = high > low && (f.totalM - low) / (high - low) > 0.55 ? '#ffffff' : '#0f172a';
         context.fillText(f.id, centre.x, centre.y + 4);
       }
     }

@@ -13,13 +13,13 @@ function ResultTable<Row>({ table, caption, onRowClick, selected, rowId }: { tab
       <div className="overflow-x-auto rounded-md border border-slate-200 bg-white">
         <table className="w-full text-left text-sm">
           <caption className="sr-only">{caption}</caption>
-          <thead className="bg-slate-50 text-xs uppercase tracking-wide text-slate-500">
+          <thead className="bg-slate-50 text-xs text-slate-600">
             {table.getHeaderGroups().map((group) => (
               <tr key={group.id}>
                 {group.headers.map((header) => (
                   <th key={header.id} scope="col" className="whitespace-nowrap px-2 py-2 font-medium" aria-sort={header.column.getIsSorted() === 'asc' ? 'ascending' : header.column.getIsSorted() === 'desc' ? 'descending' : undefined}>
                     {header.column.getCanSort() ? (
-                      <button type="button" className="inline-flex items-center gap-1 uppercase hover:text-slate-800" onClick={header.column.getToggleSortingHandler()}>
+                      <button type="button" className="inline-flex items-center gap-1 hover:text-slate-900" onClick={header.column.getToggleSortingHandler()}>
                         {flexRender(header.column.columnDef.header, header.getContext())}
                         <span aria-hidden="true">{header.column.getIsSorted() === 'asc' ? '▲' : header.column.getIsSorted() === 'desc' ? '▼' : '↕'}</span>
                       </button>

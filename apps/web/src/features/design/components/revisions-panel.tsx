@@ -21,7 +21,7 @@ export function RevisionsPanel({ orgId, projectId, check, onOpen }: RevisionsPan
       <div className="overflow-x-auto rounded-md border border-slate-200">
         <table className="w-full text-left text-sm">
           <caption className="sr-only">Revisions of the check</caption>
-          <thead className="bg-slate-50 text-xs uppercase tracking-wide text-slate-500">
+          <thead className="bg-slate-50 text-xs text-slate-600">
             <tr>
               {['Revision', 'Why it was run', 'Run', 'Footings', 'Largest total (mm)', 'Over the total limit', 'Pairs over the limit'].map((h) => (
                 <th key={h} scope="col" className="whitespace-nowrap px-3 py-2 font-medium">
@@ -70,7 +70,7 @@ export function RevisionsPanel({ orgId, projectId, check, onOpen }: RevisionsPan
             <div className="grid gap-4 xl:grid-cols-2">
               <div className="overflow-x-auto rounded-md border border-slate-200">
                 <table className="w-full text-left text-sm" aria-label="Inputs that differ">
-                  <thead className="bg-slate-50 text-xs uppercase tracking-wide text-slate-500">
+                  <thead className="bg-slate-50 text-xs text-slate-600">
                     <tr>
                       <th scope="col" className="px-3 py-2 font-medium">Input that differs</th>
                       <th scope="col" className="px-3 py-2 font-medium">Revision {comparison.data.a.revision}</th>
@@ -100,7 +100,7 @@ export function RevisionsPanel({ orgId, projectId, check, onOpen }: RevisionsPan
               </div>
               <div className="overflow-x-auto rounded-md border border-slate-200">
                 <table className="w-full text-left text-sm" aria-label="Settlement of each footing before and after">
-                  <thead className="bg-slate-50 text-xs uppercase tracking-wide text-slate-500">
+                  <thead className="bg-slate-50 text-xs text-slate-600">
                     <tr>
                       <th scope="col" className="px-3 py-2 font-medium">Footing</th>
                       <th scope="col" className="px-3 py-2 font-medium">Total, rev. {comparison.data.a.revision} (mm)</th>

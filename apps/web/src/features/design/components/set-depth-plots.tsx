@@ -44,7 +44,13 @@ export function SetDepthPlots({ members, adopted }: { members: readonly SetMembe
         data.push({ type: 'scatter', mode: 'lines', x: [value, value], y: [0, maxDepth], xaxis: `x${axis}`, yaxis: `y${axis}`, line: { color: '#b45309', dash: 'dash' }, hoverinfo: 'skip' } as PlotData);
       }
       const layoutRecord = layout as Record<string, unknown>;
-      layoutRecord[`xaxis${axis}`] = { domain: [x0, x0 + width - 0.07], type: panel.log ? 'log' : 'linear', anchor: `y${axis}`, tickfont: { size: 10 } };
+      // The range holds the points and the adopted value, with a margin, so the dashed line never sits on the frame.
+      const shown = [...members.map((m) => m.values[panel.key]), value].filter((v): v is number => v !== null && (!panel.log || v > 0));
+      const low = Math.min(...shown);
+      const high = Math.max(...shown);
+      const pad = (high - low || Math.abs(high) || 1) * 0.15;
+      const range = shown.length === 0 ? undefined : panel.log ? [Math.log10(low) - 0.1, Math.log10(high) + 0.1] : [low - pad, high + pad];
+      layoutRecord[`xaxis${axis}`] = { domain: [x0, x0 + width - 0.07], type: panel.log ? 'log' : 'linear', anchor: `y${axis}`, tickfont: { size: 10 }, nticks: 4, ...(range ? { range } : {}) };
       layoutRecord[`yaxis${axis}`] = { domain: [y1 - 0.4, y1], range: [maxDepth, 0], anchor: `x${axis}`, title: column === 0 ? { text: 'depth (m)' } : undefined, tickfont: { size: 10 } };
       (layout.annotations as NonNullable<PlotLayout['annotations']>).push({ text: panel.label, xref: 'paper', yref: 'paper', x: x0 + (width - 0.07) / 2, y: y1 + 0.04, showarrow: false, font: { size: 12 } });
     });

@@ -60,7 +60,7 @@ export function SettlementDetail({ point, layerNames }: { point: SettlementBelow
       <div className="overflow-x-auto">
         <table className="w-full text-left text-sm">
           <caption className="sr-only">Sublayers below {point.label}</caption>
-          <thead className="bg-slate-50 text-xs uppercase tracking-wide text-slate-500">
+          <thead className="bg-slate-50 text-xs text-slate-600">
             <tr>
               {['Layer', 'Mid-depth (m)', 'Thickness (m)', 'σ′v0 (kPa)', 'σ′p (kPa)', 'Δσ own (kPa)', 'Δσ neighbours (kPa)', 'Case', 'Primary (mm)', 'Secondary (mm)'].map((h) => (
                 <th key={h} scope="col" className="whitespace-nowrap px-2 py-2 font-medium">
@@ -72,7 +72,7 @@ export function SettlementDetail({ point, layerNames }: { point: SettlementBelow
           <tbody>
             {point.sublayers.map((row) => (
               <tr key={`${row.layerIndex}-${row.midDepthM}`} className="border-t border-slate-100">
-                <td className="px-2 py-1">{row.layerName}</td>
+                <td className="whitespace-nowrap px-2 py-1">{row.layerName}</td>
                 <td className="px-2 py-1">{row.midDepthM.toFixed(2)}</td>
                 <td className="px-2 py-1">{row.thicknessM.toFixed(2)}</td>
                 <td className="px-2 py-1">{formatNumber(row.initialEffectiveStressKpa)}</td>
