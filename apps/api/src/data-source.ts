@@ -32,6 +32,7 @@ import { Init1796179339734 } from './migrations/1796179339734-init.js';
 import { LabRecords1796180920952 } from './migrations/1796180920952-lab-records.js';
 import { ReadingsImport1796181181337 } from './migrations/1796181181337-readings-import.js';
 import { ReadingsOneForeignKey1796181664432 } from './migrations/1796181664432-readings-one-foreign-key.js';
+import { MembershipRoles1796313749156 } from './migrations/1796313749156-membership-roles.js';
 import { Design1796314148424 } from './migrations/1796314148424-design.js';
 
 /**
@@ -48,7 +49,7 @@ export const dataSource = new DataSource({
     UploadEntity, ReadingEntity, ImportProfileEntity,
     GroundModelEntity, GroundModelRevisionEntity, CharacteristicSetEntity, CharacteristicSetRevisionEntity,
     SettlementCheckEntity, CheckRevisionEntity, FootingResultEntity],
-  migrations: [Init1796179339734, LabRecords1796180920952, ReadingsImport1796181181337, ReadingsOneForeignKey1796181664432, Design1796314148424],
+  migrations: [Init1796179339734, LabRecords1796180920952, ReadingsImport1796181181337, ReadingsOneForeignKey1796181664432, MembershipRoles1796313749156, Design1796314148424],
   // gen_random_uuid() is built into PostgreSQL 13+, so no extension is needed on a managed server.
   uuidExtension: 'pgcrypto',
   synchronize: false,

@@ -4,6 +4,7 @@ import { env } from './config/env.js';
 import { dataSource } from './data-source.js';
 import { logger } from './http/logger.js';
 import { closeMailer } from './mail/mailer.js';
+import { closeParsePool } from './modules/readings-import/parse-pool.js';
 import { ensureBucket } from './storage/storage.js';
 
 const config = env();
@@ -22,7 +23,7 @@ function shutdown(signal: string): void {
   // Stop taking connections, let requests in flight finish, then close the pool.
   server.close(() => {
     closeMailer();
-    dataSource.destroy().finally(() => process.exit(0));
+    Promise.allSettled([closeParsePool(), dataSource.destroy()]).finally(() => process.exit(0));
   });
   server.closeIdleConnections();
   setTimeout(() => process.exit(1), 10_000).unref();

@@ -5,6 +5,7 @@ import { createBoss } from './jobs/boss.js';
 import { JOBS } from './jobs/index.js';
 import { registerJobs } from './jobs/register-jobs.js';
 import { closeMailer } from './mail/mailer.js';
+import { closeParsePool } from './modules/readings-import/parse-pool.js';
 import { ensureBucket } from './storage/storage.js';
 
 await dataSource.initialize();
@@ -23,6 +24,7 @@ async function shutdown(signal: string): Promise<void> {
   setTimeout(() => process.exit(1), 15_000).unref();
   // Let jobs in progress finish before the pool closes.
   await boss.stop({ graceful: true, wait: true });
+  await closeParsePool();
   closeMailer();
   await dataSource.destroy();
   process.exit(0);

@@ -14,7 +14,7 @@ test('an admin invites a technician, who joins from the e-mailed link and sees o
   await expect(page.getByRole('heading', { level: 1, name: 'Members' })).toBeVisible();
   const inviteForm = page.getByRole('form', { name: 'Invite a colleague' });
   await inviteForm.getByLabel('E-mail address').fill(technician.email);
-  await inviteForm.getByLabel('Role').selectOption('technician');
+  await expect(inviteForm.getByRole('checkbox', { name: 'Technician' })).toBeChecked();
   await inviteForm.getByRole('button', { name: 'Send invitation' }).click();
   await expect(page.getByText(`Invitation sent to ${technician.email}`)).toBeVisible();
   const pending = page.getByRole('region', { name: 'Pending invitations' });
@@ -51,12 +51,16 @@ test('an admin invites a technician, who joins from the e-mailed link and sees o
   await page.reload();
   const members = page.getByRole('region', { name: 'Members', exact: true });
   const row = members.getByRole('row').filter({ hasText: technician.email });
-  await expect(row.getByRole('combobox', { name: `Role of ${technician.name}` })).toHaveValue('technician');
+  const roles = row.getByRole('group', { name: `Roles of ${technician.name}` });
+  await expect(roles.getByRole('checkbox', { name: 'Technician' })).toBeChecked();
+  await expect(roles.getByRole('checkbox', { name: 'Lab manager' })).not.toBeChecked();
   await expect(page.getByText('No invitations waiting')).toBeVisible();
 
-  // Role changes take effect and are logged.
-  await row.getByRole('combobox', { name: `Role of ${technician.name}` }).selectOption('lab_manager');
-  await expect(row.getByRole('combobox', { name: `Role of ${technician.name}` })).toHaveValue('lab_manager');
+  // Role changes take effect and are logged: the technician becomes lab manager as well.
+  await roles.getByRole('checkbox', { name: 'Lab manager' }).check();
+  await page.reload();
+  await expect(roles.getByRole('checkbox', { name: 'Lab manager' })).toBeChecked();
+  await expect(roles.getByRole('checkbox', { name: 'Technician' })).toBeChecked();
   await page.getByRole('navigation', { name: 'Organisation' }).getByRole('link', { name: 'Activity' }).click();
   await expect(page.getByRole('heading', { level: 1, name: 'Activity' })).toBeVisible();
   await expect(page.getByRole('cell', { name: 'Sent an invitation' })).toBeVisible();
@@ -69,7 +73,8 @@ test('an admin revokes an invitation and the link stops working', async ({ page,
   await page.getByRole('navigation', { name: 'Organisation' }).getByRole('link', { name: 'Members' }).click();
   const inviteForm = page.getByRole('form', { name: 'Invite a colleague' });
   await inviteForm.getByLabel('E-mail address').fill(invitee.email);
-  await inviteForm.getByLabel('Role').selectOption('designer');
+  await inviteForm.getByRole('checkbox', { name: 'Technician' }).uncheck();
+  await inviteForm.getByRole('checkbox', { name: 'Designer' }).check();
   await inviteForm.getByRole('button', { name: 'Send invitation' }).click();
   await expect(page.getByText(`Invitation sent to ${invitee.email}`)).toBeVisible();
 
@@ -86,4 +91,26 @@ test('an admin revokes an invitation and the link stops working', async ({ page,
   await expect(other.getByRole('heading', { name: 'This invitation cannot be used' })).toBeVisible();
   await expect(other.getByRole('alert')).toContainText('withdrawn');
   await context.close();
+});
+
+test('the only administrator of a one-person lab makes herself lab manager too, from the keyboard, and gets the review queue', async ({ page }) => {
+  const admin = newPerson('one-person-lab');
+  await signUp(page, admin);
+  const nav = page.getByRole('navigation', { name: 'Organisation' });
+  await expect(nav.getByRole('link', { name: 'Review queue' })).toHaveCount(0);
+  await nav.getByRole('link', { name: 'Members' }).click();
+
+  const own = page.getByRole('group', { name: `Roles of ${admin.name}` });
+  await own.getByRole('checkbox', { name: 'Administrator' }).focus();
+  await page.keyboard.press('Tab');
+  await page.keyboard.press('Tab');
+  await expect(own.getByRole('checkbox', { name: 'Lab manager' })).toBeFocused();
+  await page.keyboard.press('Space');
+  await expect(own.getByRole('checkbox', { name: 'Lab manager' })).toBeChecked();
+
+  await expect(nav.getByRole('link', { name: 'Review queue' })).toBeVisible();
+  await nav.getByRole('link', { name: 'Home' }).click();
+  await expect(page.getByText('administrator and lab manager', { exact: true })).toBeVisible();
+  await nav.getByRole('link', { name: 'Review queue' }).click();
+  await expect(page.getByRole('heading', { level: 1, name: 'Review queue' })).toBeVisible();
 });

@@ -43,9 +43,10 @@ test('screenshots of every page', async ({ page, browser }) => {
   await inviteForm.getByLabel('E-mail address').fill(invitee.email);
   await inviteForm.getByRole('button', { name: 'Send invitation' }).click();
   await expect(page.getByText(`Invitation sent to ${invitee.email}`)).toBeVisible();
-  for (const role of ['designer', 'lab_manager']) {
-    await inviteForm.getByLabel('E-mail address').fill(newPerson(role).email);
-    await inviteForm.getByLabel('Role').selectOption(role);
+  for (const role of ['Designer', 'Lab manager']) {
+    await inviteForm.getByLabel('E-mail address').fill(newPerson(role.toLowerCase().replace(' ', '-')).email);
+    await inviteForm.getByRole('checkbox', { name: 'Technician' }).uncheck();
+    await inviteForm.getByRole('checkbox', { name: role }).check();
     await inviteForm.getByRole('button', { name: 'Send invitation' }).click();
   }
   await inviteForm.getByLabel('E-mail address').fill('broken');
@@ -73,6 +74,13 @@ test('screenshots of every page', async ({ page, browser }) => {
   await page.goto(`/orgs/${orgId}/members`);
   await expect(page.getByRole('cell', { name: invitee.email, exact: true })).toBeVisible();
   await shot(page, 'members-after-accept');
+  // A one-person lab: the only administrator takes the lab manager role as well.
+  await page.getByRole('group', { name: `Roles of ${admin.name}` }).getByRole('checkbox', { name: 'Lab manager' }).check();
+  await expect(page.getByRole('navigation', { name: 'Organisation' }).getByRole('link', { name: 'Review queue' })).toBeVisible();
+  await shot(page, 'members-two-roles');
+  await page.goto(`/orgs/${orgId}`);
+  await expect(page.getByRole('heading', { name: 'What your roles cover' })).toBeVisible();
+  await shot(page, 'org-home-two-roles');
   await page.goto(`/orgs/${orgId}/activity`);
   await expect(page.getByRole('heading', { level: 1, name: 'Activity' })).toBeVisible();
   await shot(page, 'activity');
@@ -85,6 +93,8 @@ test('screenshots of every page', async ({ page, browser }) => {
   await page.goto(`/orgs/${orgId}/members`);
   await expect(page.getByRole('heading', { level: 1, name: 'Members' })).toBeVisible();
   await shot(page, 'members-narrow');
+  await page.goto(`/orgs/${orgId}`);
+  await shot(page, 'org-home-two-roles-narrow');
 });
 
 /** The lab pages, on the demo organisation's lab (whatever tests it holds in each status). */

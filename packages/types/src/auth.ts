@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { RoleSchema } from './roles.js';
+import { RolesSchema } from './roles.js';
 
 const email = z.email({ message: 'Enter a valid e-mail address, like name@example.org.' }).trim().toLowerCase();
 const password = z
@@ -37,7 +37,7 @@ export type User = z.infer<typeof UserSchema>;
 export const MembershipSchema = z.object({
   organisationId: z.uuid(),
   organisationName: z.string(),
-  role: RoleSchema,
+  roles: RolesSchema,
 });
 export type Membership = z.infer<typeof MembershipSchema>;
 

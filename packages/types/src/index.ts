@@ -1,5 +1,18 @@
-export { ROLES, RoleSchema, ROLE_LABELS } from './roles.js';
+export { ROLES, RoleSchema, RolesSchema, ROLE_LABELS, LAB_STAFF_ROLES, canonicalRoles, holdsAnyRole, roleList } from './roles.js';
 export type { Role } from './roles.js';
+export { ROLE_ACCESS } from './role-access.js';
+export {
+  TEST_STATUSES,
+  TestStatusSchema,
+  TEST_STATUS_LABELS,
+  TEST_STATUS_HINTS,
+  FROZEN_TEST_STATUSES,
+  isFrozenTestStatus,
+  REVIEW_DECISIONS,
+  JOB_STATES,
+  JobStateSchema,
+} from './lab/states.js';
+export type { TestStatus, ReviewDecision, ReviewOutcome, JobState } from './lab/states.js';
 export { ApiErrorSchema, API_ERROR_CODES } from './errors.js';
 export type { ApiError, ApiErrorCode } from './errors.js';
 export {
@@ -19,7 +32,7 @@ export {
   InvitationSchema,
   InvitationPreviewSchema,
   InvitationAcceptSchema,
-  MemberRoleUpdateSchema,
+  MemberRolesUpdateSchema,
   AuditEntrySchema,
 } from './organisations.js';
 export type {
@@ -28,13 +41,10 @@ export type {
   Invitation,
   InvitationPreview,
   InvitationAccept,
-  MemberRoleUpdate,
+  MemberRolesUpdate,
   AuditEntry,
 } from './organisations.js';
 export {
-  TEST_STATUSES,
-  TestStatusSchema,
-  TEST_STATUS_LABELS,
   ProjectSummarySchema,
   ProjectDesignerSchema,
   ProjectDetailSchema,
@@ -56,7 +66,6 @@ export {
   TestListQuerySchema,
 } from './lab/records.js';
 export type {
-  TestStatus,
   ProjectSummary,
   ProjectDesigner,
   ProjectDetail,
@@ -76,13 +85,12 @@ export type {
   TestDetail,
   TestListQuery,
 } from './lab/records.js';
-export { IncrementPicksSchema, PicksSchema, PicksUpdateSchema, AnalysisSchema, JOB_STATES, JobStateSchema, JobRunSchema } from './lab/analysis.js';
-export type { IncrementPicksInput, Picks, PicksUpdate, Analysis, JobState, JobRun } from './lab/analysis.js';
+export { IncrementPicksSchema, PicksSchema, PicksUpdateSchema, AnalysisSchema, JobRunSchema } from './lab/analysis.js';
+export type { IncrementPicksInput, Picks, PicksUpdate, Analysis, JobRun } from './lab/analysis.js';
 export {
   ReviewQueueItemSchema,
   ChangeRequestSchema,
   ApprovalSchema,
-  REVIEW_DECISIONS,
   ReviewEventSchema,
   SoilRecordVersionSchema,
   SoilRecordSummarySchema,

@@ -1,25 +1,26 @@
 import { z } from 'zod';
-import { RoleSchema } from './roles.js';
+import { RolesSchema } from './roles.js';
 
 export const MemberSchema = z.object({
   userId: z.uuid(),
   name: z.string(),
   email: z.string(),
-  role: RoleSchema,
+  roles: RolesSchema,
   joinedAt: z.iso.datetime({ offset: true }),
 });
 export type Member = z.infer<typeof MemberSchema>;
 
 export const InvitationCreateSchema = z.object({
   email: z.email({ message: 'Enter a valid e-mail address, like name@example.org.' }).trim().toLowerCase(),
-  role: RoleSchema,
+  /** The roles the invitee gets on accepting: one or more. */
+  roles: RolesSchema,
 });
 export type InvitationCreate = z.infer<typeof InvitationCreateSchema>;
 
 export const InvitationSchema = z.object({
   id: z.uuid(),
   email: z.string(),
-  role: RoleSchema,
+  roles: RolesSchema,
   invitedBy: z.string(),
   createdAt: z.iso.datetime({ offset: true }),
   expiresAt: z.iso.datetime({ offset: true }),
@@ -30,7 +31,7 @@ export type Invitation = z.infer<typeof InvitationSchema>;
 export const InvitationPreviewSchema = z.object({
   organisationName: z.string(),
   email: z.string(),
-  role: RoleSchema,
+  roles: RolesSchema,
   invitedBy: z.string(),
   accountExists: z.boolean(),
   expiresAt: z.iso.datetime({ offset: true }),
@@ -44,8 +45,9 @@ export const InvitationAcceptSchema = z.object({
 });
 export type InvitationAccept = z.infer<typeof InvitationAcceptSchema>;
 
-export const MemberRoleUpdateSchema = z.object({ role: RoleSchema });
-export type MemberRoleUpdate = z.infer<typeof MemberRoleUpdateSchema>;
+/** The member's whole new set of roles (PATCH /api/orgs/:orgId/members/:userId). */
+export const MemberRolesUpdateSchema = z.object({ roles: RolesSchema });
+export type MemberRolesUpdate = z.infer<typeof MemberRolesUpdateSchema>;
 
 export const AuditEntrySchema = z.object({
   id: z.uuid(),

@@ -32,6 +32,11 @@ const EnvSchema = z.object({
   IMPORT_MAX_FILE_MB: z.coerce.number().positive().default(40),
   /** Most rows of readings one file may hold. */
   IMPORT_MAX_ROWS: z.coerce.number().int().positive().default(500_000),
+  /**
+   * Seconds a file's parse may take, plus 4 s per MB (a tenth and 0.5 s per MB for a
+   * preview, which reads only the first rows); a parse past it is stopped as unreadable.
+   */
+  IMPORT_PARSE_SECONDS: z.coerce.number().positive().default(20),
   /** Folder of the built web app served in production. */
   WEB_DIST: z.string().optional(),
 });

@@ -1,4 +1,4 @@
-import { ROLE_LABELS, type Role } from '@porestack/types';
+import { holdsAnyRole, ROLE_LABELS, roleList, type Role } from '@porestack/types';
 import type { Request } from 'express';
 import { dataSource } from '../data-source.js';
 import { DomainError, NotFoundError } from '../errors/domain-error.js';
@@ -19,8 +19,9 @@ export async function authenticate(req: Request): Promise<UserEntity> {
 }
 
 /**
- * The caller's membership in `:orgId`. Not a member answers exactly as a missing
- * organisation (404), so ids of other tenants reveal nothing.
+ * The caller's membership in `:orgId`, let in when any role it holds is among `roles`.
+ * Not a member answers exactly as a missing organisation (404), so ids of other tenants
+ * reveal nothing.
  */
 export async function resolveTenant(userId: string, orgId: string | undefined, roles: readonly Role[]): Promise<TenantContext> {
   if (!orgId || !UUID_PATTERN.test(orgId)) throw new NotFoundError('organisation');
@@ -29,12 +30,13 @@ export async function resolveTenant(userId: string, orgId: string | undefined, r
     relations: { organisation: true },
   });
   if (!membership) throw new NotFoundError('organisation');
-  if (!roles.includes(membership.role)) {
+  if (!holdsAnyRole(membership.roles, roles)) {
+    const held = membership.roles.length === 1 ? 'role' : 'roles';
     const allowed = roles.map((role) => ROLE_LABELS[role]).join(', ');
     throw new DomainError(
       'forbidden',
-      `Your role in ${membership.organisation.name} (${ROLE_LABELS[membership.role]}) cannot do this; it needs: ${allowed}. Ask an administrator of the organisation if you need it.`,
+      `Your ${held} in ${membership.organisation.name} (${roleList(membership.roles)}) cannot do this; it needs one of: ${allowed}. Ask an administrator of the organisation if you need it.`,
     );
   }
-  return { orgId, organisationName: membership.organisation.name, role: membership.role };
+  return { orgId, organisationName: membership.organisation.name, roles: membership.roles };
 }

@@ -6,7 +6,8 @@ import type { UserEntity } from '../modules/users/user.entity.js';
 export interface TenantContext {
   orgId: string;
   organisationName: string;
-  role: Role;
+  /** Every role the caller holds here (one or more, in ROLES' order); the guard let them in on any of them. */
+  roles: readonly Role[];
 }
 
 declare global {

@@ -13,17 +13,19 @@ import { authenticate, resolveTenant } from './authenticate.js';
  *
  *   access: 'public'       anyone, signed in or not
  *   access: 'signed-in'    any signed-in user          → req.user
- *   access: ['admin', …]   a member of `:orgId` holding one of these roles
- *                          → req.user and req.tenant; a non-member gets 404
- *                          (as for a missing organisation), a member with
- *                          another role 403. The path must contain `:orgId`.
+ *   access: ['admin', …]   (a list from ROLE_ACCESS in @porestack/types, which the
+ *                          web reads too) a member of `:orgId` holding at least one of these
+ *                          roles (a membership may hold several) → req.user and
+ *                          req.tenant; a non-member gets 404 (as for a missing
+ *                          organisation), a member holding none of them 403.
+ *                          The path must contain `:orgId`.
  *
  * Adding a resource under an organisation:
  *
  *   export function testsRouter(): Router {
  *     return defineRoutes('/api/orgs/:orgId/tests', [
- *       { method: 'get', path: '/', access: ['technician', 'lab_manager', 'designer'], handler: list },
- *       { method: 'post', path: '/', access: ['technician'], before: [upload.single('file')], handler: create },
+ *       { method: 'get', path: '/', access: ROLE_ACCESS.labReaders, handler: list },
+ *       { method: 'post', path: '/', access: ROLE_ACCESS.importers, before: [upload.single('file')], handler: create },
  *     ]);
  *   }
  *   // and in app.ts: app.use(testsRouter());

@@ -4,7 +4,7 @@ import { jobRuns } from '../modules/job-runs/job-runs.service.js';
 import { importUpload } from '../modules/readings-import/import-readings.service.js';
 import { UploadEntity } from '../modules/uploads/upload.entity.js';
 import { dataSource } from '../data-source.js';
-import { IMPORT_READINGS_QUEUE, type ImportReadingsJobData } from './import-readings-queue.js';
+import { claimImportSlot, IMPORT_CONCURRENCY, IMPORT_READINGS_QUEUE, requeueImport, type ImportReadingsJobData } from './import-readings-queue.js';
 import type { JobDefinition } from './job-definition.js';
 
 /**
@@ -15,7 +15,10 @@ import type { JobDefinition } from './job-definition.js';
  * readings are replaced in one transaction.
  */
 export async function importReadings(data: ImportReadingsJobData): Promise<void> {
-  await jobRuns.update(data.jobRunId, { state: 'running', progress: 0.02, message: 'Starting the import.' });
+  if (!(await claimImportSlot(data.orgId, data.jobRunId))) {
+    await requeueImport(data);
+    return;
+  }
   try {
     const outcome = await importUpload(data, (progress, message) => jobRuns.update(data.jobRunId, { progress, message }));
     if (outcome.kind === 'needs_mapping') {
@@ -59,5 +62,7 @@ export const importReadingsJob: JobDefinition = {
   name: IMPORT_READINGS_QUEUE,
   // The upload page shows this job's progress: pick it up quickly.
   pollingIntervalSeconds: 0.5,
+  // Several at once, so a slow or damaged file never holds up the others (see import-readings-queue.ts).
+  concurrency: IMPORT_CONCURRENCY,
   handler: (data) => importReadings(data as ImportReadingsJobData),
 };

@@ -9,4 +9,6 @@ export interface JobDefinition<Data extends object = object> {
   schedule?: string;
   /** How often an idle worker looks for new jobs (pg-boss default 2 s, minimum 0.5 s); lower for jobs a page waits on. */
   pollingIntervalSeconds?: number;
+  /** Jobs of this queue one process works at once (default 1). */
+  concurrency?: number;
 }

@@ -46,7 +46,7 @@ export async function seedDemoOrganisation(manager: EntityManager): Promise<Demo
       created += 1;
     }
     if (!(await memberships.existsBy({ organisationId: organisation.id, userId: user.id }))) {
-      await memberships.insert({ organisationId: organisation.id, userId: user.id, role: account.role });
+      await memberships.insert({ organisationId: organisation.id, userId: user.id, roles: [account.role] });
       created += 1;
     }
     userIds[account.role] = user.id;

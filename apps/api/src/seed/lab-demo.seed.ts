@@ -1,4 +1,5 @@
 import { generateSyntheticConsolidationTest, type SyntheticConsolidationParameters } from '@porestack/geo-core';
+import type { ReviewOutcome, TestStatus } from '@porestack/types';
 import type { DataSource } from 'typeorm';
 import { runAnalysis } from '../modules/analyses/analyses.service.js';
 import { AnalysisEntity } from '../modules/analyses/analysis.entity.js';
@@ -17,7 +18,7 @@ import { storeReadings } from './lab-readings-store.js';
 /** A fixed id: a later run finds the project and adds nothing. */
 export const DEMO_PROJECT_ID = '5eed0000-0000-4000-8000-00000000a001';
 
-type Target = 'draft' | 'readings_uploaded' | 'analysed' | 'submitted' | 'changes_requested' | 'approved' | 'approved_twice';
+type Target = TestStatus | 'approved_twice';
 
 interface DemoTest {
   borehole: string;
@@ -149,7 +150,7 @@ export async function seedLabDemo(dataSource: DataSource, demo: DemoOrganisation
       await moveTest(manager, test, 'submitted', technicianId, { changes: { submittedAt: new Date(), submittedById: technicianId } });
       await manager.getRepository(ReviewEventEntity).insert({ organisationId: orgId, testId, decision: 'submitted', actorId: technicianId, analysisId: test.latestAnalysisId, comment: null });
     });
-  const decide = (testId: string, decision: 'approved' | 'changes_requested', comment: string | null) =>
+  const decide = (testId: string, decision: ReviewOutcome, comment: string | null) =>
     dataSource.transaction(async (manager) => {
       const test = await lockTest(manager, orgId, testId);
       if (!test) return;

@@ -1,5 +1,5 @@
 import { randomUUID } from 'node:crypto';
-import type { Role, Session } from '@porestack/types';
+import { canonicalRoles, type Role, type Session } from '@porestack/types';
 import type { Express } from 'express';
 import request from 'supertest';
 import { dataSource } from '../data-source.js';
@@ -67,13 +67,13 @@ export async function signUpAdmin(app: Express, label = 'admin'): Promise<Signed
 /** One bcrypt hash of TEST_PASSWORD for every user the tests insert directly. */
 let testPasswordHash: Promise<string> | undefined;
 
-/** A user added straight to the database with a role in `orgId` (faster than an invitation). */
-export async function createMember(orgId: string, role: Role, label: string = role): Promise<{ userId: string; email: string }> {
+/** A user added straight to the database with a role, or several, in `orgId` (faster than an invitation). */
+export async function createMember(orgId: string, role: Role | readonly Role[], label: string = [role].flat().join('-')): Promise<{ userId: string; email: string }> {
   const email = uniqueEmail(label);
   const user = await dataSource
     .getRepository(UserEntity)
     .save({ email, name: `Test ${label}`, passwordHash: await (testPasswordHash ??= hashPassword(TEST_PASSWORD)) });
-  await dataSource.getRepository(MembershipEntity).insert({ organisationId: orgId, userId: user.id, role });
+  await dataSource.getRepository(MembershipEntity).insert({ organisationId: orgId, userId: user.id, roles: canonicalRoles([role].flat()) });
   return { userId: user.id, email };
 }
 

@@ -1,19 +1,19 @@
-import type { Role } from '@porestack/types';
+import { holdsAnyRole, ROLE_ACCESS, type Role } from '@porestack/types';
 
 /**
- * What each role may do in the laboratory pages, mirroring the API's route policies so the UI
- * never offers a button the server will refuse. The server still decides.
+ * What a member may do in the laboratory pages, from every role they hold, mirroring the API's
+ * route policies so the UI never offers a button the server will refuse. The server still decides.
  */
-export const labPermissions = (role: Role) => ({
+export const labPermissions = (roles: readonly Role[]) => ({
   /** Create and edit projects. */
-  editProjects: role === 'admin' || role === 'lab_manager',
+  editProjects: holdsAnyRole(roles, ROLE_ACCESS.projectEditors),
   /** Record boreholes, samples and tests; edit the set-up; override picks; re-run; submit. */
-  benchWork: role === 'technician' || role === 'lab_manager',
+  benchWork: holdsAnyRole(roles, ROLE_ACCESS.labWorkers),
   /** Send readings files and run imports: the technician who runs the test. */
-  importReadings: role === 'technician',
-  /** Approve or ask for changes. */
-  review: role === 'lab_manager',
+  importReadings: holdsAnyRole(roles, ROLE_ACCESS.importers),
+  /** Approve or ask for changes (never a test one ran or submitted oneself: the server refuses that). */
+  review: holdsAnyRole(roles, ROLE_ACCESS.reviewers),
 });
 
 /** Who may open a test page: the lab, and designers following a soil record back to its test. */
-export const TEST_PAGE_ROLES: readonly Role[] = ['admin', 'technician', 'lab_manager', 'designer'];
+export const TEST_PAGE_ROLES: readonly Role[] = ROLE_ACCESS.labReaders;

@@ -1,4 +1,4 @@
-import { ROLES, type Role } from '@porestack/types';
+import { holdsAnyRole, LAB_STAFF_ROLES, ROLE_ACCESS, ROLES, type Role } from '@porestack/types';
 import { paths } from '../config/paths';
 
 export type NavItem = {
@@ -6,7 +6,7 @@ export type NavItem = {
   id: string;
   label: string;
   to: (orgId: string) => string;
-  /** Roles that see the entry and may open the page. */
+  /** Roles that see the entry and may open the page: a member holding any one of them does. */
   roles: readonly Role[];
   /** Match the path exactly (the organisation home would otherwise be active everywhere). */
   end?: boolean;
@@ -18,21 +18,22 @@ export type NavItem = {
  */
 export const NAV_ITEMS = [
   { id: 'home', label: 'Home', to: paths.org.home.to, roles: ROLES, end: true },
-  { id: 'members', label: 'Members', to: paths.org.members.to, roles: ['admin'] },
-  { id: 'activity', label: 'Activity', to: paths.org.activity.to, roles: ['admin'] },
-  // Designers see the projects they are on (the API scopes the list), with their design work.
-  { id: 'projects', label: 'Projects', to: paths.org.projects.to, roles: ['admin', 'technician', 'lab_manager', 'designer'] },
-  { id: 'tests', label: 'Tests', to: paths.org.tests.to, roles: ['admin', 'technician', 'lab_manager'] },
-  // Reviewing is the lab manager's alone (the API refuses administrators), so the queue is not offered to them.
-  { id: 'review-queue', label: 'Review queue', to: paths.org.reviewQueue.to, roles: ['lab_manager'] },
+  { id: 'members', label: 'Members', to: paths.org.members.to, roles: ROLE_ACCESS.admins },
+  { id: 'activity', label: 'Activity', to: paths.org.activity.to, roles: ROLE_ACCESS.admins },
+  // The lab's working pages; designers also open the projects they are on (the API scopes the list) for their design work.
+  { id: 'projects', label: 'Projects', to: paths.org.projects.to, roles: [...LAB_STAFF_ROLES, 'designer'] },
+  { id: 'tests', label: 'Tests', to: paths.org.tests.to, roles: LAB_STAFF_ROLES },
+  // Reviewing is the lab manager's (the API refuses an administrator who is not also lab manager).
+  { id: 'review-queue', label: 'Review queue', to: paths.org.reviewQueue.to, roles: ROLE_ACCESS.reviewers },
+  // For those who approve records and those who use them; technicians work on their tests (the API would let them read records).
   { id: 'soil-records', label: 'Soil records', to: paths.org.soilRecords.to, roles: ['admin', 'lab_manager', 'designer', 'client'] },
 ] as const satisfies readonly NavItem[];
 
 export type NavItemId = (typeof NAV_ITEMS)[number]['id'];
 
-/** The entries one role sees, in order. */
-export function navItemsFor(role: Role): NavItem[] {
-  return NAV_ITEMS.filter((item) => (item.roles as readonly Role[]).includes(role));
+/** The entries a member holding `roles` sees, in order. */
+export function navItemsFor(roles: readonly Role[]): NavItem[] {
+  return NAV_ITEMS.filter((item) => holdsAnyRole(roles, item.roles));
 }
 
 /** Who may open a page: the nav and the route guard read the same list. */

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { JobStateSchema } from './states.js';
 
 /** Overrides of the automatic choices, as geo-core's ConsolidationPicks. */
 export const IncrementPicksSchema = z.object({
@@ -41,9 +42,6 @@ export const AnalysisSchema = z.object({
 });
 export type Analysis = z.infer<typeof AnalysisSchema>;
 
-export const JOB_STATES = ['queued', 'running', 'succeeded', 'failed'] as const;
-export const JobStateSchema = z.enum(JOB_STATES);
-export type JobState = z.infer<typeof JobStateSchema>;
 
 /** A background job as the page follows it (GET /api/orgs/:orgId/jobs/:jobId). */
 export const JobRunSchema = z.object({

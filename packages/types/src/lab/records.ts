@@ -1,22 +1,5 @@
 import { z } from 'zod';
-
-/**
- * Where a consolidation test stands. It moves only along
- * draft → readings_uploaded → analysed → submitted → approved | changes_requested,
- * with the way back that re-work needs (new readings, re-analysis); the server checks each move.
- */
-export const TEST_STATUSES = ['draft', 'readings_uploaded', 'analysed', 'submitted', 'approved', 'changes_requested'] as const;
-export const TestStatusSchema = z.enum(TEST_STATUSES);
-export type TestStatus = z.infer<typeof TestStatusSchema>;
-
-export const TEST_STATUS_LABELS: Record<TestStatus, string> = {
-  draft: 'Draft — waiting for readings',
-  readings_uploaded: 'Readings in — not yet analysed',
-  analysed: 'Analysed — ready to submit',
-  submitted: 'With the lab manager',
-  approved: 'Approved',
-  changes_requested: 'Sent back for changes',
-};
+import { JobStateSchema, TestStatusSchema } from './states.js';
 
 const isoDate = z.iso.date({ message: 'Give the date as YYYY-MM-DD.' });
 const isoDateTime = z.iso.datetime({ offset: true });
@@ -220,7 +203,7 @@ export const TestDetailSchema = TestSummarySchema.extend({
   latestAnalysisJob: z
     .object({
       id: z.uuid(),
-      state: z.enum(['queued', 'running', 'succeeded', 'failed']),
+      state: JobStateSchema,
       message: z.string().nullable(),
       updatedAt: isoDateTime,
     })

@@ -1,5 +1,6 @@
 import { z } from 'zod';
-import { KeyParametersSchema, TestStatusSchema } from './records.js';
+import { KeyParametersSchema } from './records.js';
+import { REVIEW_DECISIONS, TestStatusSchema } from './states.js';
 
 export const ReviewQueueItemSchema = z.object({
   testId: z.uuid(),
@@ -26,7 +27,6 @@ export type ChangeRequest = z.infer<typeof ChangeRequestSchema>;
 export const ApprovalSchema = z.object({ comment: z.string().trim().max(4000).optional() });
 export type Approval = z.infer<typeof ApprovalSchema>;
 
-export const REVIEW_DECISIONS = ['submitted', 'approved', 'changes_requested'] as const;
 export const ReviewEventSchema = z.object({
   id: z.uuid(),
   decision: z.enum(REVIEW_DECISIONS),

@@ -42,10 +42,10 @@ describe('malformed requests', () => {
     expect(await counts()).toEqual(before);
   });
 
-  it('when an admin invites with an unknown role, then 400 names the role field and no invitation is stored', async () => {
+  it('when an admin invites with an unknown role, then 400 names the roles field and no invitation is stored', async () => {
     const { browser, orgId } = await signUpAdmin(app, 'badrole');
-    const res = await browser.post(`/api/orgs/${orgId}/invitations`, { email: uniqueEmail('x'), role: 'owner' }).expect(400);
-    expect(res.body.issues[0].path).toBe('role');
+    const res = await browser.post(`/api/orgs/${orgId}/invitations`, { email: uniqueEmail('x'), roles: ['technician', 'owner'] }).expect(400);
+    expect(res.body.issues).toEqual([{ path: 'roles.1', message: 'Choose one of the listed roles: admin, technician, lab_manager, designer, client.' }]);
     const pending = await browser.get(`/api/orgs/${orgId}/invitations`).expect(200);
     expect(pending.body).toEqual([]);
   });

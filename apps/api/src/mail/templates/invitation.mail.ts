@@ -1,10 +1,10 @@
-import { ROLE_LABELS, type Role } from '@porestack/types';
+import { roleList, type Role } from '@porestack/types';
 import { renderMail, type MailContent } from './layout.js';
 
 export function invitationMail(input: {
   organisationName: string;
   invitedBy: string;
-  role: Role;
+  roles: readonly Role[];
   url: string;
   validDays: number;
 }): MailContent {
@@ -12,7 +12,7 @@ export function invitationMail(input: {
     subject: `${input.invitedBy} invited you to ${input.organisationName} on Porestack`,
     paragraphs: [
       'Hello,',
-      `${input.invitedBy} invited you to join ${input.organisationName} on Porestack as ${ROLE_LABELS[input.role]}.`,
+      `${input.invitedBy} invited you to join ${input.organisationName} on Porestack as ${roleList(input.roles)}.`,
       `Open the link below to accept. It works once, for ${input.validDays} days.`,
     ],
     action: { label: 'Accept the invitation', url: input.url },

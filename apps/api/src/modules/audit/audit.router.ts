@@ -1,3 +1,4 @@
+import { ROLE_ACCESS } from '@porestack/types';
 import type { Router } from 'express';
 import { currentTenant } from '../../http/request-context.js';
 import { defineRoutes } from '../../http/routes.js';
@@ -8,7 +9,7 @@ export function auditRouter(): Router {
     {
       method: 'get',
       path: '/',
-      access: ['admin'],
+      access: ROLE_ACCESS.admins,
       handler: async (req, res) => {
         res.json(await audit.list(currentTenant(req).orgId));
       },

@@ -35,7 +35,7 @@ async function createAccount(input: SignUp, passwordHash: string): Promise<Signe
     const user = await users.save(users.create({ email: input.email, name: input.name, passwordHash }));
     const organisations = manager.getRepository(OrganisationEntity);
     const organisation = await organisations.save(organisations.create({ name: input.organisationName }));
-    await manager.getRepository(MembershipEntity).insert({ organisationId: organisation.id, userId: user.id, role: 'admin' });
+    await manager.getRepository(MembershipEntity).insert({ organisationId: organisation.id, userId: user.id, roles: ['admin'] });
     await audit.record(
       { organisationId: null, actorUserId: user.id, action: 'user.signed_up', objectType: 'user', objectId: user.id },
       manager,

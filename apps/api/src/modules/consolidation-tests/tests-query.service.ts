@@ -1,4 +1,4 @@
-import type { TestDetail, TestListQuery, TestSummary } from '@porestack/types';
+import type { ReviewDecision, TestDetail, TestListQuery, TestSummary } from '@porestack/types';
 import { dataSource } from '../../data-source.js';
 import { NotFoundError } from '../../errors/domain-error.js';
 import { ANALYSE_TEST_QUEUE } from '../../jobs/analyse-test-queue.js';
@@ -66,8 +66,8 @@ export async function getTestDetail(orgId: string, testId: string): Promise<Test
   const latestJob = await jobRuns.latestFor(orgId, testId, ANALYSE_TEST_QUEUE);
   const [lastChangeRequest] = test.status === 'changes_requested'
     ? ((await dataSource.query(
-        `SELECT comment FROM review_events WHERE organisation_id = $1 AND test_id = $2 AND decision = 'changes_requested' ORDER BY at DESC LIMIT 1`,
-        [orgId, testId],
+        'SELECT comment FROM review_events WHERE organisation_id = $1 AND test_id = $2 AND decision = $3 ORDER BY at DESC LIMIT 1',
+        [orgId, testId, 'changes_requested' satisfies ReviewDecision],
       )) as Array<{ comment: string | null }>)
     : [];
   const stress = inSituStress(

@@ -1,12 +1,13 @@
 import type { Role } from '@porestack/types';
-import { Column, CreateDateColumn, Entity, Index, JoinColumn, ManyToOne, PrimaryGeneratedColumn, type Relation } from 'typeorm';
+import { Check, Column, CreateDateColumn, Entity, Index, JoinColumn, ManyToOne, PrimaryGeneratedColumn, type Relation } from 'typeorm';
 import { OrganisationEntity } from '../organisations/organisation.entity.js';
 import { UserEntity } from '../users/user.entity.js';
 
-/** An e-mailed offer to join an organisation with a role. Only the token's sha256 is stored. */
+/** An e-mailed offer to join an organisation with one or more roles. Only the token's sha256 is stored. */
 @Entity({ name: 'invitations' })
 @Index('invitations_organisation_id_idx', ['organisationId'])
 @Index('invitations_token_hash_key', ['tokenHash'], { unique: true })
+@Check('invitations_roles_not_empty', 'cardinality("roles") > 0')
 export class InvitationEntity {
   @PrimaryGeneratedColumn('uuid')
   id!: string;
@@ -21,8 +22,9 @@ export class InvitationEntity {
   @Column('text')
   email!: string;
 
-  @Column('text')
-  role!: Role;
+  /** The roles the membership gets on acceptance, as in MembershipEntity.roles. */
+  @Column('text', { array: true })
+  roles!: Role[];
 
   @Column('text', { name: 'token_hash' })
   tokenHash!: string;

@@ -1,4 +1,4 @@
-import { InvitationAcceptSchema, InvitationCreateSchema } from '@porestack/types';
+import { InvitationAcceptSchema, InvitationCreateSchema, ROLE_ACCESS } from '@porestack/types';
 import type { Router } from 'express';
 import { uuidParam } from '../../http/params.js';
 import { parse } from '../../http/parse.js';
@@ -44,7 +44,7 @@ export function orgInvitationsRouter(): Router {
     {
       method: 'get',
       path: '/',
-      access: ['admin'],
+      access: ROLE_ACCESS.admins,
       handler: async (req, res) => {
         res.json(await listPendingInvitations(currentTenant(req).orgId));
       },
@@ -52,7 +52,7 @@ export function orgInvitationsRouter(): Router {
     {
       method: 'post',
       path: '/',
-      access: ['admin'],
+      access: ROLE_ACCESS.admins,
       handler: async (req, res) => {
         const input = parse(InvitationCreateSchema, req.body);
         res.status(201).json(await createInvitation(currentTenant(req).orgId, currentUser(req), input));
@@ -61,7 +61,7 @@ export function orgInvitationsRouter(): Router {
     {
       method: 'delete',
       path: '/:invitationId',
-      access: ['admin'],
+      access: ROLE_ACCESS.admins,
       handler: async (req, res) => {
         await revokeInvitation(currentTenant(req).orgId, uuidParam(req, 'invitationId', 'invitation'), currentUser(req));
         res.status(204).end();

@@ -30,7 +30,7 @@ function toDto(row: InvitationEntity): Invitation {
   return {
     id: row.id,
     email: row.email,
-    role: row.role,
+    roles: row.roles,
     invitedBy: row.invitedBy.name,
     createdAt: row.createdAt.toISOString(),
     expiresAt: row.expiresAt.toISOString(),
@@ -60,7 +60,7 @@ export async function createInvitation(orgId: string, actor: UserEntity, input: 
       invitations.create({
         organisationId: orgId,
         email: input.email,
-        role: input.role,
+        roles: input.roles,
         tokenHash,
         invitedById: actor.id,
         expiresAt: new Date(Date.now() + INVITATION_DAYS * 24 * 3600_000),
@@ -73,7 +73,7 @@ export async function createInvitation(orgId: string, actor: UserEntity, input: 
         action: 'invitation.created',
         objectType: 'invitation',
         objectId: saved.id,
-        details: { email: input.email, role: input.role },
+        details: { email: input.email, roles: input.roles },
       },
       manager,
     );
@@ -86,7 +86,7 @@ export async function createInvitation(orgId: string, actor: UserEntity, input: 
         invitationMail({
           organisationName: organisation.name,
           invitedBy: actor.name,
-          role: input.role,
+          roles: input.roles,
           url: publicLink(`/invitations/${encodeURIComponent(token)}`),
           validDays: INVITATION_DAYS,
         }),
@@ -123,7 +123,7 @@ export async function revokeInvitation(orgId: string, invitationId: string, acto
         action: 'invitation.revoked',
         objectType: 'invitation',
         objectId: row.id,
-        details: { email: row.email, role: row.role },
+        details: { email: row.email, roles: row.roles },
       },
       manager,
     );
@@ -151,7 +151,7 @@ export async function previewInvitation(token: string): Promise<InvitationPrevie
   return {
     organisationName: row.organisation.name,
     email: row.email,
-    role: row.role,
+    roles: row.roles,
     invitedBy: row.invitedBy.name,
     accountExists,
     expiresAt: row.expiresAt.toISOString(),
@@ -179,7 +179,7 @@ export async function acceptInvitation(token: string, input: InvitationAccept): 
         manager,
       );
     }
-    await manager.getRepository(MembershipEntity).insert({ organisationId: row.organisationId, userId: user.id, role: row.role });
+    await manager.getRepository(MembershipEntity).insert({ organisationId: row.organisationId, userId: user.id, roles: row.roles });
     await manager.getRepository(InvitationEntity).update({ organisationId: row.organisationId, id: row.id }, { acceptedAt: new Date() });
     await audit.record(
       {
@@ -188,7 +188,7 @@ export async function acceptInvitation(token: string, input: InvitationAccept): 
         action: 'invitation.accepted',
         objectType: 'invitation',
         objectId: row.id,
-        details: { email: row.email, role: row.role },
+        details: { email: row.email, roles: row.roles },
       },
       manager,
     );

@@ -1,17 +1,17 @@
-import { MemberRoleUpdateSchema } from '@porestack/types';
+import { MemberRolesUpdateSchema, ROLE_ACCESS } from '@porestack/types';
 import type { Router } from 'express';
 import { uuidParam } from '../../http/params.js';
 import { parse } from '../../http/parse.js';
 import { currentTenant, currentUser } from '../../http/request-context.js';
 import { defineRoutes } from '../../http/routes.js';
-import { changeMemberRole, listMembers, removeMember } from './members.service.js';
+import { changeMemberRoles, listMembers, removeMember } from './members.service.js';
 
 export function membersRouter(): Router {
   return defineRoutes('/api/orgs/:orgId/members', [
     {
       method: 'get',
       path: '/',
-      access: ['admin'],
+      access: ROLE_ACCESS.admins,
       handler: async (req, res) => {
         res.json(await listMembers(currentTenant(req).orgId));
       },
@@ -19,17 +19,17 @@ export function membersRouter(): Router {
     {
       method: 'patch',
       path: '/:userId',
-      access: ['admin'],
+      access: ROLE_ACCESS.admins,
       handler: async (req, res) => {
         const userId = uuidParam(req, 'userId', 'member');
-        const { role } = parse(MemberRoleUpdateSchema, req.body);
-        res.json(await changeMemberRole(currentTenant(req).orgId, userId, role, currentUser(req)));
+        const { roles } = parse(MemberRolesUpdateSchema, req.body);
+        res.json(await changeMemberRoles(currentTenant(req).orgId, userId, roles, currentUser(req)));
       },
     },
     {
       method: 'delete',
       path: '/:userId',
-      access: ['admin'],
+      access: ROLE_ACCESS.admins,
       handler: async (req, res) => {
         await removeMember(currentTenant(req).orgId, uuidParam(req, 'userId', 'member'), currentUser(req));
         res.status(204).end();

@@ -1,10 +1,10 @@
-import type { Member, Role } from '@porestack/types';
-import type { EntityManager } from 'typeorm';
+import { canonicalRoles, type Member, type Role } from '@porestack/types';
+import { ArrayContains, type EntityManager } from 'typeorm';
 import { dataSource } from '../../data-source.js';
 import { NotFoundError } from '../../errors/domain-error.js';
 import { audit } from '../audit/audit.service.js';
 import type { UserEntity } from '../users/user.entity.js';
-import { lastAdmin } from './member.exception.js';
+import { lastAdmin, ownRolesNeedAnotherAdmin } from './member.exception.js';
 import { MembershipEntity } from './membership.entity.js';
 
 export async function listMembers(orgId: string): Promise<Member[]> {
@@ -13,7 +13,7 @@ export async function listMembers(orgId: string): Promise<Member[]> {
     relations: { user: true },
     order: { createdAt: 'ASC' },
   });
-  return rows.map((m) => ({ userId: m.userId, name: m.user.name, email: m.user.email, role: m.role, joinedAt: m.createdAt.toISOString() }));
+  return rows.map((m) => ({ userId: m.userId, name: m.user.name, email: m.user.email, roles: m.roles, joinedAt: m.createdAt.toISOString() }));
 }
 
 /**
@@ -22,18 +22,29 @@ export async function listMembers(orgId: string): Promise<Member[]> {
  */
 async function lockForChange(manager: EntityManager, orgId: string, userId: string): Promise<{ target: MembershipEntity; adminCount: number }> {
   const memberships = manager.getRepository(MembershipEntity);
-  const admins = await memberships.find({ where: { organisationId: orgId, role: 'admin' }, lock: { mode: 'pessimistic_write' } });
+  const admins = await memberships.find({ where: { organisationId: orgId, roles: ArrayContains(['admin']) }, lock: { mode: 'pessimistic_write' } });
   const target = await memberships.findOne({ where: { organisationId: orgId, userId }, lock: { mode: 'pessimistic_write' } });
   if (!target) throw new NotFoundError('member');
   return { target, adminCount: admins.length };
 }
 
-export async function changeMemberRole(orgId: string, userId: string, role: Role, actor: UserEntity): Promise<Member> {
+/**
+ * Replaces a member's roles with `roles`. Another admin may set any roles. An admin changing
+ * her own may give roles up or step down (the last-admin rule aside), but adds a role to herself
+ * while staying administrator only when she is the organisation's only one: a one-person lab has
+ * nobody else to ask, and in a larger one a colleague grants the extra role.
+ */
+export async function changeMemberRoles(orgId: string, userId: string, roles: readonly Role[], actor: UserEntity): Promise<Member> {
+  const next = canonicalRoles(roles);
   await dataSource.transaction(async (manager) => {
     const { target, adminCount } = await lockForChange(manager, orgId, userId);
-    if (target.role === role) return;
-    if (target.role === 'admin' && adminCount <= 1) throw lastAdmin('demote');
-    await manager.getRepository(MembershipEntity).update({ organisationId: orgId, id: target.id }, { role });
+    const previous = canonicalRoles(target.roles);
+    if (previous.join() === next.join()) return;
+    const isAdmin = previous.includes('admin');
+    if (isAdmin && !next.includes('admin') && adminCount <= 1) throw lastAdmin('demote');
+    const added = next.filter((role) => !previous.includes(role));
+    if (userId === actor.id && next.includes('admin') && added.length > 0 && adminCount > 1) throw ownRolesNeedAnotherAdmin();
+    await manager.getRepository(MembershipEntity).update({ organisationId: orgId, id: target.id }, { roles: next });
     await audit.record(
       {
         organisationId: orgId,
@@ -41,7 +52,7 @@ export async function changeMemberRole(orgId: string, userId: string, role: Role
         action: 'member.role_changed',
         objectType: 'user',
         objectId: userId,
-        details: { from: target.role, to: role },
+        details: { from: previous, to: next },
       },
       manager,
     );
@@ -54,10 +65,10 @@ export async function changeMemberRole(orgId: string, userId: string, role: Role
 export async function removeMember(orgId: string, userId: string, actor: UserEntity): Promise<void> {
   await dataSource.transaction(async (manager) => {
     const { target, adminCount } = await lockForChange(manager, orgId, userId);
-    if (target.role === 'admin' && adminCount <= 1) throw lastAdmin('remove');
+    if (target.roles.includes('admin') && adminCount <= 1) throw lastAdmin('remove');
     await manager.getRepository(MembershipEntity).delete({ organisationId: orgId, id: target.id });
     await audit.record(
-      { organisationId: orgId, actorUserId: actor.id, action: 'member.removed', objectType: 'user', objectId: userId, details: { role: target.role } },
+      { organisationId: orgId, actorUserId: actor.id, action: 'member.removed', objectType: 'user', objectId: userId, details: { roles: target.roles } },
       manager,
     );
   });

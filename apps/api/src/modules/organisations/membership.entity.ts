@@ -1,13 +1,14 @@
 import type { Role } from '@porestack/types';
-import { Column, CreateDateColumn, Entity, Index, JoinColumn, ManyToOne, PrimaryGeneratedColumn, type Relation } from 'typeorm';
+import { Check, Column, CreateDateColumn, Entity, Index, JoinColumn, ManyToOne, PrimaryGeneratedColumn, type Relation } from 'typeorm';
 import { UserEntity } from '../users/user.entity.js';
 import { OrganisationEntity } from './organisation.entity.js';
 
-/** One user's role in one organisation. */
+/** One user's roles in one organisation. */
 @Entity({ name: 'memberships' })
 @Index('memberships_organisation_id_idx', ['organisationId'])
 @Index('memberships_user_id_idx', ['userId'])
 @Index('memberships_organisation_user_key', ['organisationId', 'userId'], { unique: true })
+@Check('memberships_roles_not_empty', 'cardinality("roles") > 0')
 export class MembershipEntity {
   @PrimaryGeneratedColumn('uuid')
   id!: string;
@@ -26,9 +27,12 @@ export class MembershipEntity {
   @JoinColumn({ name: 'user_id', foreignKeyConstraintName: 'memberships_user_id_fkey' })
   user!: Relation<UserEntity>;
 
-  /** One of ROLES in @porestack/types; text rather than a PostgreSQL enum so new roles need no type migration. */
-  @Column('text')
-  role!: Role;
+  /**
+   * One or more of ROLES in @porestack/types, each once, in ROLES' order (canonicalRoles);
+   * text rather than a PostgreSQL enum so new roles need no type migration.
+   */
+  @Column('text', { array: true })
+  roles!: Role[];
 
   @CreateDateColumn({ name: 'created_at', type: 'timestamptz' })
   createdAt!: Date;

@@ -1,6 +1,5 @@
-import type { Role } from '@porestack/types';
+import { ROLE_ACCESS } from '@porestack/types';
 
-/** Who reads a project's design work: its designers, and the lab's managers and administrators. */
-export const DESIGN_READERS: readonly Role[] = ['admin', 'lab_manager', 'designer'];
-/** Who builds ground models, characteristic sets and checks, and runs them: the project's designers. */
-export const DESIGN_WRITERS: readonly Role[] = ['designer'];
+// The design routes' access, by name; the lists live in @porestack/types (ROLE_ACCESS), which the web reads too.
+export const DESIGN_READERS = ROLE_ACCESS.designReaders;
+export const DESIGN_WRITERS = ROLE_ACCESS.designWriters;

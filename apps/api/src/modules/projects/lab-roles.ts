@@ -1,12 +1,9 @@
-import type { Role } from '@porestack/types';
+import { ROLE_ACCESS } from '@porestack/types';
 
-/** Who sees the laboratory's records: everyone in the lab, and the designers who use them. */
-export const LAB_READERS: readonly Role[] = ['admin', 'technician', 'lab_manager', 'designer'];
-/** Who keeps projects (client, reference, designers). */
-export const PROJECT_EDITORS: readonly Role[] = ['admin', 'lab_manager'];
-/** Who records boreholes, samples and tests, and runs the analysis. */
-export const LAB_WORKERS: readonly Role[] = ['technician', 'lab_manager'];
-/** Who reviews. */
-export const REVIEWERS: readonly Role[] = ['lab_manager'];
-/** Who reads approved soil records: designers and clients too. */
-export const RECORD_READERS: readonly Role[] = ['admin', 'technician', 'lab_manager', 'designer', 'client'];
+// The lab routes' access, by name; the lists themselves live in @porestack/types (ROLE_ACCESS),
+// which the web reads too.
+export const LAB_READERS = ROLE_ACCESS.labReaders;
+export const PROJECT_EDITORS = ROLE_ACCESS.projectEditors;
+export const LAB_WORKERS = ROLE_ACCESS.labWorkers;
+export const REVIEWERS = ROLE_ACCESS.reviewers;
+export const RECORD_READERS = ROLE_ACCESS.recordReaders;

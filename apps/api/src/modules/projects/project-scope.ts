@@ -1,21 +1,22 @@
-import type { Role } from '@porestack/types';
+import { holdsAnyRole, LAB_STAFF_ROLES, type Role } from '@porestack/types';
 import type { EntityManager } from 'typeorm';
 import { dataSource } from '../../data-source.js';
 import { NotFoundError } from '../../errors/domain-error.js';
 import type { TenantContext } from '../../http/request-context.js';
 
 /** Roles that work across the whole organisation: the laboratory's own staff. */
-export const ORGANISATION_WIDE_ROLES: readonly Role[] = ['admin', 'technician', 'lab_manager'];
+export const ORGANISATION_WIDE_ROLES: readonly Role[] = LAB_STAFF_ROLES;
 
 /**
  * Which projects a member may see. Lab staff see every project of the organisation;
  * designers and clients only the projects they are on (project_members rows: a designer
- * assigned to the project, a client it was shared with).
+ * assigned to the project, a client it was shared with). A member holding any lab role
+ * beside designer or client sees the whole organisation.
  */
 export type ProjectScope = { readonly kind: 'organisation' } | { readonly kind: 'projects'; readonly projectIds: readonly string[] };
 
 export function seesWholeOrganisation(tenant: TenantContext): boolean {
-  return ORGANISATION_WIDE_ROLES.includes(tenant.role);
+  return holdsAnyRole(tenant.roles, ORGANISATION_WIDE_ROLES);
 }
 
 export async function projectScope(tenant: TenantContext, userId: string, manager: EntityManager = dataSource.manager): Promise<ProjectScope> {

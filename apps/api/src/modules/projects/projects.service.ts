@@ -1,5 +1,5 @@
-import type { ProjectCreate, ProjectDesigner, ProjectDetail, ProjectSummary, ProjectUpdate } from '@porestack/types';
-import { In, type EntityManager } from 'typeorm';
+import type { ProjectCreate, ProjectDesigner, ProjectDetail, ProjectSummary, ProjectUpdate, Role } from '@porestack/types';
+import { ArrayContains, In, type EntityManager } from 'typeorm';
 import { dataSource } from '../../data-source.js';
 import { DomainError, NotFoundError } from '../../errors/domain-error.js';
 import { audit } from '../audit/audit.service.js';
@@ -16,7 +16,7 @@ const referenceTaken = (reference: string) =>
 
 async function assertDesigners(manager: EntityManager, orgId: string, designerIds: string[]): Promise<void> {
   if (designerIds.length === 0) return;
-  const found = await manager.getRepository(MembershipEntity).findBy({ organisationId: orgId, userId: In(designerIds), role: 'designer' });
+  const found = await manager.getRepository(MembershipEntity).findBy({ organisationId: orgId, userId: In(designerIds), roles: ArrayContains(['designer']) });
   if (found.length !== new Set(designerIds).size) {
     throw new DomainError('validation_failed', 'Every designer of a project must be a member of this organisation with the designer role.', [
       { path: 'designerIds', message: 'Not all are designers of this organisation.' },
@@ -58,8 +58,8 @@ export async function listProjects(orgId: string, scope: ProjectScope = { kind: 
 /** The organisation's members with the designer role: who can be attached to a project. */
 export async function listDesignerCandidates(orgId: string): Promise<ProjectDesigner[]> {
   const rows = (await dataSource.query(
-    "SELECT u.id AS user_id, u.name, u.email FROM memberships m JOIN users u ON u.id = m.user_id WHERE m.organisation_id = $1 AND m.role = 'designer' ORDER BY u.name",
-    [orgId],
+    'SELECT u.id AS user_id, u.name, u.email FROM memberships m JOIN users u ON u.id = m.user_id WHERE m.organisation_id = $1 AND $2 = ANY(m.roles) ORDER BY u.name',
+    [orgId, 'designer' satisfies Role],
   )) as Array<{ user_id: string; name: string; email: string }>;
   return rows.map((d) => ({ userId: d.user_id, name: d.name, email: d.email }));
 }

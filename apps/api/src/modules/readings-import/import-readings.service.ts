@@ -4,11 +4,10 @@ import { markReadingsUploaded } from '../consolidation-tests/consolidation-tests
 import { replaceReadings } from '../readings/readings-writer.js';
 import { getUploadObject } from '../uploads/upload-object.js';
 import { UploadEntity } from '../uploads/upload.entity.js';
-import { CANONICAL_MAPPING, detectLayout } from './detect-layout.js';
+import { CANONICAL_MAPPING } from './detect-layout.js';
 import { ImportProblem } from './import-problem.js';
-import { importLimits } from './import-limits.js';
-import { readReadings } from './read-readings.js';
-import { readTable } from './read-table.js';
+import { importLimits, parseDeadlineMs } from './import-limits.js';
+import { parseOffThread } from './parse-pool.js';
 
 export type ImportOutcome =
   | { kind: 'imported'; readingCount: number; incrementCount: number; analysisJobId: string }
@@ -26,17 +25,10 @@ export async function importUpload(data: ImportReadingsJobData, onProgress: (fra
   const upload = await uploads.findOneByOrFail({ organisationId: data.orgId, id: data.uploadId });
   await onProgress(0.05, 'Reading the file from storage.');
   const bytes = await getUploadObject(upload.objectKey);
-  await onProgress(0.1, `Reading the ${upload.detectedType === 'xlsx' ? 'workbook' : 'CSV file'}.`);
-  let table;
-  let readings;
+  await onProgress(0.1, `Reading and checking the ${upload.detectedType === 'xlsx' ? 'workbook' : 'CSV file'}.`);
+  let outcome;
   try {
-    table = await readTable(bytes, upload.detectedType, importLimits(), { delimiter: data.mapping?.delimiter });
-    if (data.mapping === null && detectLayout(table) !== 'canonical') {
-      await uploads.update({ id: upload.id }, { status: 'needs_mapping', failure: null, specimenValues: table.specimen });
-      return { kind: 'needs_mapping' };
-    }
-    await onProgress(0.3, `Checking ${Math.max(0, table.rows.length - 1).toLocaleString('en-GB')} rows.`);
-    readings = readReadings(table, data.mapping ?? CANONICAL_MAPPING);
+    outcome = await parseOffThread({ kind: 'import', bytes, type: upload.detectedType, limits: importLimits(), mapping: data.mapping }, parseDeadlineMs(upload.sizeBytes, 'import'));
   } catch (error) {
     if (!(error instanceof ImportProblem)) throw error;
     await uploads.update(
@@ -45,6 +37,11 @@ export async function importUpload(data: ImportReadingsJobData, onProgress: (fra
     );
     return { kind: 'rejected', problem: error };
   }
+  if (outcome.kind === 'needs_mapping') {
+    await uploads.update({ id: upload.id }, { status: 'needs_mapping', failure: null, specimenValues: outcome.specimen });
+    return { kind: 'needs_mapping' };
+  }
+  const { readings, specimen } = outcome;
   await onProgress(0.45, `Writing ${readings.count.toLocaleString('en-GB')} readings.`);
   const analysisJobId = await dataSource.transaction(async (manager) => {
     // One import per test at a time: a second waits here, then replaces the first's readings.
@@ -64,7 +61,7 @@ export async function importUpload(data: ImportReadingsJobData, onProgress: (fra
         mapping: data.mapping ?? CANONICAL_MAPPING,
         readingCount: readings.count,
         incrementCount: readings.incrementCount,
-        specimenValues: table.specimen,
+        specimenValues: specimen,
         importedAt: new Date(),
       },
     );

@@ -1,12 +1,16 @@
 import { Readable } from 'node:stream';
 import ExcelJS from 'exceljs';
 import { ImportProblem } from './import-problem.js';
+import { columnKeeper, type ColumnsToKeep } from './keep-columns.js';
+import { MAX_COLUMNS, tooWide } from './max-columns.js';
 import type { Cell, ImportLimits, RawRow, RawTable } from './raw-table.js';
 import { readMergedRanges } from './read-merged-ranges.js';
 
 export interface XlsxParseOptions {
   /** Stop after this many rows of the readings sheet (a preview). */
   previewRows?: number | undefined;
+  /** Keep only these columns' cells below the header row (an import). */
+  keepColumns?: ColumnsToKeep | undefined;
 }
 
 const SPECIMEN_SHEET = /^specimen$/i;
@@ -29,6 +33,8 @@ export async function parseXlsxTable(bytes: Buffer, limits: ImportLimits, option
   const rows: RawRow[] = [];
   const specimen: Record<string, string | number> = {};
   let readingsSheet: string | null = null;
+  let previewFull = false;
+  const keep = columnKeeper(options.keepColumns);
   try {
     for await (const worksheet of reader) {
       const sheet = worksheet as unknown as WorksheetStream;
@@ -50,15 +56,22 @@ export async function parseXlsxTable(bytes: Buffer, limits: ImportLimits, option
           if (key !== '' && value !== null && value !== undefined) specimen[key] = value;
           continue;
         }
-        if (options.previewRows !== undefined && rows.length >= options.previewRows) continue;
+        // A preview stops reading the sheet once it has its rows (merged cells, listed after the
+        // rows, are then not checked: the import does that).
+        if (options.previewRows !== undefined && rows.length >= options.previewRows) {
+          previewFull = true;
+          break;
+        }
         if (rows.length >= limits.maxRows + 1) {
           throw new ImportProblem(
             `Sheet '${name}' has more than ${limits.maxRows.toLocaleString('en-GB')} rows of readings, the most one upload may hold. Split the test's readings into a file of fewer rows and upload that.`,
           );
         }
-        rows.push({ rowNumber: (row as unknown as ExcelJS.Row).number, cells });
+        const rowNumber = (row as unknown as ExcelJS.Row).number;
+        const kept = keep(rowNumber, cells);
+        if (kept !== null) rows.push({ rowNumber, cells: kept });
       }
-      const ranges = merges();
+      const ranges = previewFull ? [] : merges();
       if (ranges.length > 0) {
         const listed = ranges.slice(0, 5).join(', ');
         throw new ImportProblem(
@@ -90,11 +103,15 @@ function firstRowOf(range: string): number {
   return match ? Number(match[0]) : 1;
 }
 
+/** The row's cells from column A to its last value, refused beyond MAX_COLUMNS. */
 function rowCells(row: ExcelJS.Row, sheetName: string): Cell[] {
-  const cells: Cell[] = [];
-  // values is 1-based with a hole at 0; cellCount would skip trailing blanks, which is fine.
+  // values is 1-based with a hole at 0, and as long as the row's rightmost cell.
   const values = row.values as unknown[];
-  for (let column = 1; column < values.length; column += 1) {
+  let last = values.length - 1;
+  while (last > 0 && (values[last] === null || values[last] === undefined)) last -= 1;
+  if (last > MAX_COLUMNS) throw tooWide(row.number, last, `Sheet '${sheetName}'`);
+  const cells: Cell[] = [];
+  for (let column = 1; column <= last; column += 1) {
     cells.push(cellValue(values[column], `${columnLetter(column)}${row.number}`, sheetName));
   }
   return cells;

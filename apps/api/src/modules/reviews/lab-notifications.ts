@@ -1,3 +1,4 @@
+import type { Role } from '@porestack/types';
 import { dataSource } from '../../data-source.js';
 import { logger } from '../../http/logger.js';
 import { publicLink, sendMail } from '../../mail/mailer.js';
@@ -57,8 +58,8 @@ const testUrl = (ctx: TestContext) => publicLink(`/orgs/${ctx.orgId}/tests/${ctx
 
 export async function notifySubmitted(ctx: TestContext, warningCount: number): Promise<void> {
   const managers = (await dataSource.query(
-    `SELECT u.email FROM memberships m JOIN users u ON u.id = m.user_id WHERE m.organisation_id = $1 AND m.role = 'lab_manager'`,
-    [ctx.orgId],
+    'SELECT u.email FROM memberships m JOIN users u ON u.id = m.user_id WHERE m.organisation_id = $1 AND $2 = ANY(m.roles)',
+    [ctx.orgId, 'lab_manager' satisfies Role],
   )) as Array<{ email: string }>;
   await deliver(
     managers.map((m) => m.email),

@@ -1,3 +1,4 @@
+import type { ReviewDecision } from '@porestack/types';
 import { Column, CreateDateColumn, Entity, Index, JoinColumn, ManyToOne, PrimaryGeneratedColumn, type Relation } from 'typeorm';
 import { ConsolidationTestEntity } from '../consolidation-tests/consolidation-test.entity.js';
 
@@ -19,9 +20,9 @@ export class ReviewEventEntity {
   @JoinColumn({ name: 'test_id', foreignKeyConstraintName: 'review_events_test_id_fkey' })
   test!: Relation<ConsolidationTestEntity>;
 
-  /** 'submitted' | 'approved' | 'changes_requested' */
+  /** One of REVIEW_DECISIONS in @porestack/types. */
   @Column('text')
-  decision!: 'submitted' | 'approved' | 'changes_requested';
+  decision!: ReviewDecision;
 
   @Column('text', { nullable: true })
   comment!: string | null;

@@ -1,5 +1,5 @@
 import type { ConsolidationTestResult } from '@porestack/geo-core';
-import type { ReviewEvent, ReviewQueueItem } from '@porestack/types';
+import type { ReviewEvent, ReviewQueueItem, TestStatus } from '@porestack/types';
 import type { EntityManager } from 'typeorm';
 import { dataSource } from '../../data-source.js';
 import { NotFoundError } from '../../errors/domain-error.js';
@@ -110,9 +110,9 @@ export async function reviewQueue(orgId: string): Promise<ReviewQueueItem[]> {
        JOIN projects p ON p.id = b.project_id
        JOIN users u ON u.id = t.technician_id
        LEFT JOIN analyses a ON a.id = t.latest_analysis_id
-      WHERE t.organisation_id = $1 AND t.status = 'submitted'
+      WHERE t.organisation_id = $1 AND t.status = $2
       ORDER BY t.submitted_at ASC`,
-    [orgId],
+    [orgId, 'submitted' satisfies TestStatus],
   )) as Array<Record<string, unknown>>;
   return rows.map((row) => ({
     testId: row['test_id'] as string,

@@ -25,6 +25,14 @@ export async function getUploadObject(key: string): Promise<Buffer> {
   return Buffer.concat(chunks);
 }
 
+/** The first `length` bytes of the object (all of it when it is shorter). */
+export async function getUploadObjectStart(key: string, length: number): Promise<Buffer> {
+  const stream = await storage().getPartialObject(bucketName(), key, 0, length);
+  const chunks: Buffer[] = [];
+  for await (const chunk of stream) chunks.push(chunk as Buffer);
+  return Buffer.concat(chunks);
+}
+
 export function streamUploadObject(key: string): Promise<Readable> {
   return storage().getObject(bucketName(), key);
 }

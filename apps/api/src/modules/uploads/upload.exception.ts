@@ -1,3 +1,4 @@
+import type { TestStatus } from '@porestack/types';
 import { DomainError } from '../../errors/domain-error.js';
 import { ImportProblem } from '../readings-import/import-problem.js';
 
@@ -18,7 +19,7 @@ export function fileRefused(problem: ImportProblem): DomainError {
   return new DomainError(problem.kind === 'not_readings' ? 'unsupported_file' : 'invalid_file', problem.message, issues.length > 0 ? issues : undefined);
 }
 
-export const readingsLocked = (status: string) =>
+export const readingsLocked = (status: TestStatus) =>
   new DomainError(
     'invalid_transition',
     `This test is ${status === 'approved' ? 'approved' : 'with the lab manager for review'}, so its readings cannot be replaced now. ${status === 'approved' ? 'Re-run the analysis to prepare a new version; new readings need a new test.' : 'Wait for the review.'}`,

@@ -1,6 +1,6 @@
 import { createHash, randomUUID } from 'node:crypto';
 import type { Readable } from 'node:stream';
-import type { CsvDelimiter, ImportMapping, ImportRequest, JobRun, Upload, UploadPreview } from '@porestack/types';
+import { isFrozenTestStatus, type CsvDelimiter, type ImportMapping, type ImportRequest, type JobRun, type Upload, type UploadPreview } from '@porestack/types';
 import { dataSource } from '../../data-source.js';
 import { NotFoundError } from '../../errors/domain-error.js';
 import { logger } from '../../http/logger.js';
@@ -11,18 +11,19 @@ import { importProfiles } from '../import-profiles/import-profiles.service.js';
 import { jobRuns } from '../job-runs/job-runs.service.js';
 import { detectLayout, headerOf, suggestMapping } from '../readings-import/detect-layout.js';
 import { ImportProblem } from '../readings-import/import-problem.js';
-import { importLimits } from '../readings-import/import-limits.js';
-import { readTable } from '../readings-import/read-table.js';
+import { importLimits, parseDeadlineMs } from '../readings-import/import-limits.js';
+import { parseOffThread } from '../readings-import/parse-pool.js';
 import { sniffFileType } from '../readings-import/sniff-file-type.js';
 import { UserEntity } from '../users/user.entity.js';
 import { toUpload } from './upload-dto.js';
 import { UploadEntity } from './upload.entity.js';
 import { fileRefused, readingsLocked } from './upload.exception.js';
-import { getUploadObject, putUploadObject, removeUploadObject, streamUploadObject, uploadObjectKey } from './upload-object.js';
+import { getUploadObject, getUploadObjectStart, putUploadObject, removeUploadObject, streamUploadObject, uploadObjectKey } from './upload-object.js';
 
 const CONTENT_TYPES = { csv: 'text/csv; charset=utf-8', xlsx: 'application/vnd.openxmlformats-officedocument.spreadsheetml.sheet' } as const;
 const PREVIEW_ROWS = 20;
-const LOCKED_STATUSES = new Set(['submitted', 'approved']);
+/** A CSV preview reads at most this much of the file. */
+const CSV_PREVIEW_BYTES = 256 * 1024;
 
 export interface Actor {
   id: string;
@@ -36,7 +37,7 @@ export interface ReceivedFile {
 
 async function assertReadingsMayChange(orgId: string, testId: string): Promise<void> {
   const test = await findTestOrThrow(orgId, testId);
-  if (LOCKED_STATUSES.has(test.status)) throw readingsLocked(test.status);
+  if (isFrozenTestStatus(test.status)) throw readingsLocked(test.status);
 }
 
 /**
@@ -85,7 +86,7 @@ export async function createUpload(orgId: string, testId: string, actor: Actor, 
         { organisationId: orgId, actorUserId: actor.id, action: 'upload.stored', objectType: 'upload', objectId: uploadId, details: { testId, originalName: file.originalName, sha256, sizeBytes: file.bytes.length } },
         manager,
       );
-      const jobRunId = await enqueueImport({ orgId, testId, uploadId, actorId: actor.id, mapping: null }, manager);
+      const jobRunId = await enqueueImport({ orgId, testId, uploadId, actorId: actor.id, sizeBytes: file.bytes.length, mapping: null }, manager);
       return { upload, jobRunId };
     });
     return { upload: toUpload(upload, actor.name), job: await jobRuns.find(orgId, jobRunId) };
@@ -126,12 +127,26 @@ export async function openDownload(orgId: string, uploadId: string): Promise<{ u
   return { upload: toUpload(row, ''), contentType: CONTENT_TYPES[row.detectedType], stream: await streamUploadObject(row.objectKey) };
 }
 
+/**
+ * What a preview needs of the stored file: a workbook whole (its index is at the end), a CSV
+ * only its start, cut after the last whole line, so a preview costs the same for any size.
+ */
+async function previewBytes(row: UploadEntity): Promise<Buffer> {
+  if (row.detectedType === 'xlsx' || row.sizeBytes <= CSV_PREVIEW_BYTES) return getUploadObject(row.objectKey);
+  const start = await getUploadObjectStart(row.objectKey, CSV_PREVIEW_BYTES);
+  const lastLineEnd = start.lastIndexOf(0x0a);
+  return lastLineEnd > 0 ? start.subarray(0, lastLineEnd + 1) : start;
+}
+
 /** The first rows, the detected layout and a suggested mapping, for the mapping step. */
 export async function previewUpload(orgId: string, uploadId: string, delimiter?: CsvDelimiter): Promise<UploadPreview> {
   const row = await findUploadRow(orgId, uploadId);
-  const bytes = await getUploadObject(row.objectKey);
+  const bytes = await previewBytes(row);
   try {
-    const table = await readTable(bytes, row.detectedType, importLimits(), { delimiter, previewRows: PREVIEW_ROWS + 1 });
+    const { table } = await parseOffThread(
+      { kind: 'preview', bytes, type: row.detectedType, limits: importLimits(), delimiter, previewRows: PREVIEW_ROWS + 1 },
+      parseDeadlineMs(bytes.length, 'preview'),
+    );
     const layout = detectLayout(table);
     const columns = headerOf(table);
     return {
@@ -166,7 +181,7 @@ export async function requestImport(orgId: string, uploadId: string, actor: Acto
       if (request.saveAsProfile) await importProfiles.create(orgId, actor.id, { name: request.saveAsProfile, mapping }, manager);
     }
     await manager.getRepository(UploadEntity).update({ organisationId: orgId, id: uploadId }, { status: 'importing', mapping, failure: null });
-    return enqueueImport({ orgId, testId: row.testId, uploadId, actorId: actor.id, mapping }, manager);
+    return enqueueImport({ orgId, testId: row.testId, uploadId, actorId: actor.id, sizeBytes: row.sizeBytes, mapping }, manager);
   });
   return jobRuns.find(orgId, jobRunId);
 }

@@ -16,7 +16,7 @@ export async function sessionFor(user: UserEntity, manager: EntityManager = data
     memberships: memberships.map((m) => ({
       organisationId: m.organisationId,
       organisationName: m.organisation.name,
-      role: m.role,
+      roles: m.roles,
     })),
   };
 }

@@ -27,7 +27,7 @@ describe('seed()', () => {
     for (const account of DEMO_ACCOUNTS) {
       const browser = await openBrowser(app);
       const res = await browser.post('/api/auth/sign-in', { email: account.email, password: DEMO_PASSWORD }).expect(200);
-      expect(res.body.memberships).toContainEqual(expect.objectContaining({ organisationId: DEMO_ORGANISATION_ID, role: account.role }));
+      expect(res.body.memberships).toContainEqual(expect.objectContaining({ organisationId: DEMO_ORGANISATION_ID, roles: [account.role] }));
     }
   });
 });

@@ -27,12 +27,12 @@ export function AppShell({ user, memberships, current, children }: AppShellProps
           <Brand to={current ? paths.org.home.to(current.organisationId) : paths.root.to()} />
           <OrgSwitcher memberships={memberships} currentOrgId={current?.organisationId ?? null} />
           <div className="ml-auto">
-            <UserMenu user={user} role={current?.role ?? null} />
+            <UserMenu user={user} roles={current?.roles ?? null} />
           </div>
         </div>
         {current ? (
           <div className="mx-auto max-w-6xl px-4 sm:px-6">
-            <MainNav orgId={current.organisationId} role={current.role} />
+            <MainNav orgId={current.organisationId} roles={current.roles} />
           </div>
         ) : null}
       </header>

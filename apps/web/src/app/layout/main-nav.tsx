@@ -2,11 +2,11 @@ import type { Role } from '@porestack/types';
 import { NavLink } from 'react-router-dom';
 import { navItemsFor } from '../nav-config';
 
-/** Tabs for the pages this role may use in the current organisation. */
-export function MainNav({ orgId, role }: { orgId: string; role: Role }) {
+/** Tabs for the pages the member's roles open in the current organisation. */
+export function MainNav({ orgId, roles }: { orgId: string; roles: readonly Role[] }) {
   return (
     <nav aria-label="Organisation" className="-mb-px flex gap-1 overflow-x-auto">
-      {navItemsFor(role).map((item) => (
+      {navItemsFor(roles).map((item) => (
         <NavLink
           key={item.id}
           to={item.to(orgId)}

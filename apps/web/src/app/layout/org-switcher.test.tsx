@@ -8,17 +8,17 @@ import { OrgSwitcher } from './org-switcher';
 const NORTH = '11111111-1111-4111-8111-111111111111';
 const SOUTH = '22222222-2222-4222-8222-222222222222';
 const memberships: Membership[] = [
-  { organisationId: NORTH, organisationName: 'North Quay Soils', role: 'admin' },
-  { organisationId: SOUTH, organisationName: 'Southfen Geotechnics', role: 'technician' },
+  { organisationId: NORTH, organisationName: 'North Quay Soils', roles: ['admin', 'lab_manager'] },
+  { organisationId: SOUTH, organisationName: 'Southfen Geotechnics', roles: ['technician'] },
 ];
 
 describe('<OrgSwitcher memberships currentOrgId />', () => {
-  it('lists every organisation with the person’s role in it, the current one chosen', () => {
+  it('lists every organisation with the person’s roles in it, the current one chosen', () => {
     renderWithProviders(<OrgSwitcher memberships={memberships} currentOrgId={NORTH} />);
     const select = screen.getByRole('combobox', { name: 'Organisation' });
-    expect(select).toHaveDisplayValue('North Quay Soils (Administrator)');
+    expect(select).toHaveDisplayValue('North Quay Soils (Administrator and Lab manager)');
     expect(screen.getAllByRole('option').map((option) => option.textContent)).toEqual([
-      'North Quay Soils (Administrator)',
+      'North Quay Soils (Administrator and Lab manager)',
       'Southfen Geotechnics (Technician)',
     ]);
   });
@@ -44,6 +44,7 @@ describe('<OrgSwitcher memberships currentOrgId />', () => {
     renderWithProviders(<OrgSwitcher memberships={memberships.slice(0, 1)} currentOrgId={NORTH} />);
     expect(screen.queryByRole('combobox')).not.toBeInTheDocument();
     expect(screen.getByText('North Quay Soils')).toBeInTheDocument();
+    expect(screen.getByText('· Administrator and Lab manager')).toBeInTheDocument();
   });
 
   it('asks to choose when the URL names an organisation the person is not in', () => {

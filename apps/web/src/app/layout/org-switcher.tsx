@@ -1,4 +1,4 @@
-import { ROLE_LABELS, type Membership } from '@porestack/types';
+import { roleList, type Membership } from '@porestack/types';
 import { useQueryClient } from '@tanstack/react-query';
 import { useId } from 'react';
 import { useNavigate } from 'react-router-dom';
@@ -25,7 +25,7 @@ export function OrgSwitcher({ memberships, currentOrgId }: OrgSwitcherProps) {
       <p className="text-sm text-slate-700">
         <span className="sr-only">Organisation: </span>
         <span className="font-medium">{current.organisationName}</span>
-        <span className="text-slate-500"> · {ROLE_LABELS[current.role]}</span>
+        <span className="text-slate-500"> · {roleList(current.roles)}</span>
       </p>
     );
   }
@@ -53,7 +53,7 @@ export function OrgSwitcher({ memberships, currentOrgId }: OrgSwitcherProps) {
         )}
         {memberships.map((membership) => (
           <option key={membership.organisationId} value={membership.organisationId}>
-            {membership.organisationName} ({ROLE_LABELS[membership.role]})
+            {membership.organisationName} ({roleList(membership.roles)})
           </option>
         ))}
       </select>

@@ -1,11 +1,11 @@
-import { ROLE_LABELS, type Role, type User } from '@porestack/types';
+import { roleList, type Role, type User } from '@porestack/types';
 import { useEffect, useId, useRef, useState } from 'react';
 import { Button } from '../../components/button';
 import { ErrorMessage } from '../../components/error-message';
 import { useSignOut } from '../../features/auth/api/sign-out';
 
-/** The person's name; opens a small panel with their address, role and sign-out. */
-export function UserMenu({ user, role }: { user: User; role: Role | null }) {
+/** The person's name; opens a small panel with their address, roles and sign-out. */
+export function UserMenu({ user, roles }: { user: User; roles: readonly Role[] | null }) {
   const [open, setOpen] = useState(false);
   const panelId = useId();
   const containerRef = useRef<HTMLDivElement>(null);
@@ -48,7 +48,7 @@ export function UserMenu({ user, role }: { user: User; role: Role | null }) {
         <div id={panelId} className="absolute right-0 z-40 mt-1 w-64 rounded-md border border-slate-200 bg-white p-3 shadow-lg">
           <p className="truncate text-sm font-medium text-slate-900">{user.name}</p>
           <p className="truncate text-sm text-slate-600">{user.email}</p>
-          {role ? <p className="mt-1 text-xs text-slate-500">{ROLE_LABELS[role]} in this organisation</p> : null}
+          {roles ? <p className="mt-1 text-xs text-slate-500">{roleList(roles)} in this organisation</p> : null}
           {signOut.error ? (
             <div className="mt-3">
               <ErrorMessage error={signOut.error} />

@@ -28,7 +28,7 @@ function CharacteristicSetPage() {
   const isNew = setId === 'new';
   const revisionParam = search.get('revision');
   const set = useCharacteristicSet(orgId, projectId, isNew ? '' : setId, revisionParam === null ? null : Number(revisionParam));
-  const canEdit = designPermissions(membership.role).edit;
+  const canEdit = designPermissions(membership.roles).edit;
   const back = (
     <p className="mb-2 text-sm">
       <Link to={paths.org.project.to(orgId, projectId)} className="text-accent-700 hover:underline">

@@ -30,7 +30,7 @@ function GroundModelPage() {
   const isNew = modelId === 'new';
   const revisionParam = search.get('revision');
   const model = useGroundModel(orgId, projectId, isNew ? '' : modelId, revisionParam === null ? null : Number(revisionParam));
-  const canEdit = designPermissions(membership.role).edit;
+  const canEdit = designPermissions(membership.roles).edit;
   const back = (
     <p className="mb-2 text-sm">
       <Link to={paths.org.project.to(orgId, projectId)} className="text-accent-700 hover:underline">

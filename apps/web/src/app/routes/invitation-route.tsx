@@ -1,4 +1,4 @@
-import { ROLE_LABELS } from '@porestack/types';
+import { roleList } from '@porestack/types';
 import { Link, useNavigate, useParams } from 'react-router-dom';
 import { ErrorMessage } from '../../components/error-message';
 import { LoadingBlock } from '../../components/spinner';
@@ -42,7 +42,7 @@ export function InvitationRoute() {
   return (
     <AuthPanel
       title={`Join ${preview.organisationName}`}
-      description={`${preview.invitedBy} invited you to Porestack as ${ROLE_LABELS[preview.role].toLowerCase()}.`}
+      description={`${preview.invitedBy} invited you to Porestack as ${roleList(preview.roles).toLowerCase()}.`}
     >
       <InvitationAcceptForm
         token={token}

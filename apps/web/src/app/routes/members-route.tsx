@@ -30,7 +30,7 @@ function MembersPage() {
     <>
       <PageHeader
         title="Members"
-        description={`Everyone who works in ${membership.organisationName}, and the role that decides what each can do.`}
+        description={`Everyone who works in ${membership.organisationName}, and the roles that decide what each can do.`}
       />
       <div className="flex flex-col gap-6">
         <Panel title="Invite a colleague" description="They get an e-mail with a link to join. The link expires after a few days.">

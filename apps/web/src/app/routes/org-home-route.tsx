@@ -1,4 +1,4 @@
-import { ROLE_LABELS } from '@porestack/types';
+import { ROLE_LABELS, roleList } from '@porestack/types';
 import { Link } from 'react-router-dom';
 import { PageHeader } from '../../components/page-header';
 import { Panel } from '../../components/panel';
@@ -8,8 +8,9 @@ import { ROLE_GUIDES } from '../role-guides';
 
 export function OrgHomeRoute() {
   const { orgId, membership } = useCurrentOrg();
-  const guide = ROLE_GUIDES[membership.role];
-  const pages = navItemsFor(membership.role).filter((item) => item.id !== 'home');
+  const { roles } = membership;
+  const several = roles.length > 1;
+  const pages = navItemsFor(roles).filter((item) => item.id !== 'home');
 
   return (
     <>
@@ -17,26 +18,34 @@ export function OrgHomeRoute() {
         title={membership.organisationName}
         description={
           <>
-            You are <strong className="font-medium text-slate-800">{ROLE_LABELS[membership.role].toLowerCase()}</strong> here. {guide.summary}
+            You are <strong className="font-medium text-slate-800">{roleList(roles).toLowerCase()}</strong> here.{' '}
+            {roles.map((role) => ROLE_GUIDES[role].summary).join(' ')}
           </>
         }
       />
       <div className="grid items-start gap-6 lg:grid-cols-[minmax(0,2fr)_minmax(0,1fr)]">
-        <Panel title="What your role covers">
-          <ul className="divide-y divide-slate-100">
-            {guide.tasks.map((task) => (
-              <li key={task.text} className="flex items-start justify-between gap-4 py-2.5 first:pt-0 last:pb-0">
-                <span className="text-sm text-slate-800">{task.text}</span>
-                <span
-                  className={`shrink-0 rounded-full px-2 py-0.5 text-xs font-medium ${
-                    task.available ? 'bg-accent-50 text-accent-800' : 'bg-slate-100 text-slate-600'
-                  }`}
-                >
-                  {task.available ? 'Available' : 'Not yet in Porestack'}
-                </span>
-              </li>
+        <Panel title={several ? 'What your roles cover' : 'What your role covers'}>
+          <div className="space-y-4">
+            {roles.map((role) => (
+              <section key={role} aria-label={several ? `As ${ROLE_LABELS[role].toLowerCase()}` : undefined}>
+                {several ? <h3 className="mb-1 text-xs font-semibold uppercase tracking-wide text-slate-500">As {ROLE_LABELS[role].toLowerCase()}</h3> : null}
+                <ul className="divide-y divide-slate-100">
+                  {ROLE_GUIDES[role].tasks.map((task) => (
+                    <li key={task.text} className="flex items-start justify-between gap-4 py-2.5 first:pt-0 last:pb-0">
+                      <span className="text-sm text-slate-800">{task.text}</span>
+                      <span
+                        className={`shrink-0 rounded-full px-2 py-0.5 text-xs font-medium ${
+                          task.available ? 'bg-accent-50 text-accent-800' : 'bg-slate-100 text-slate-600'
+                        }`}
+                      >
+                        {task.available ? 'Available' : 'Not yet in Porestack'}
+                      </span>
+                    </li>
+                  ))}
+                </ul>
+              </section>
             ))}
-          </ul>
+          </div>
         </Panel>
         <Panel title="Go to">
           {pages.length > 0 ? (
@@ -51,7 +60,7 @@ export function OrgHomeRoute() {
             </ul>
           ) : (
             <p className="text-sm text-slate-600">
-              No pages for your role yet. This version sets up accounts and organisations; the laboratory work arrives in
+              No pages for your {several ? 'roles' : 'role'} yet. This version sets up accounts and organisations; the laboratory work arrives in
               the next versions.
             </p>
           )}

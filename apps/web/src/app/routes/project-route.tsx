@@ -50,17 +50,17 @@ function ProjectPage() {
           </>
         }
       />
-      {labPermissions(membership.role).editProjects ? (
+      {labPermissions(membership.roles).editProjects ? (
         <div className="mb-6">
           <DisclosureForm openLabel="Edit project and designers">
             {(close) => <ProjectEditForm orgId={orgId} project={p} onDone={close} />}
           </DisclosureForm>
         </div>
       ) : null}
-      {designPermissions(membership.role).read ? (
+      {designPermissions(membership.roles).read ? (
         <div className="mb-6">
           <Panel title="Design" description="Ground models built from the approved soil records, characteristic sets of each stratum, and settlement checks of footings.">
-            <DesignOverview orgId={orgId} projectId={projectId} canEdit={designPermissions(membership.role).edit} />
+            <DesignOverview orgId={orgId} projectId={projectId} canEdit={designPermissions(membership.roles).edit} />
           </Panel>
         </div>
       ) : null}
@@ -72,7 +72,7 @@ function ProjectPage() {
         ) : tests.error ? (
           <ErrorMessage error={tests.error} title="The tests could not be loaded" onRetry={() => void tests.refetch()} />
         ) : (
-          <BoreholesSection orgId={orgId} projectId={projectId} boreholes={boreholes.data} tests={tests.data} canEdit={labPermissions(membership.role).benchWork} />
+          <BoreholesSection orgId={orgId} projectId={projectId} boreholes={boreholes.data} tests={tests.data} canEdit={labPermissions(membership.roles).benchWork} />
         )}
       </Panel>
     </>

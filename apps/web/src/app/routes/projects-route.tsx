@@ -31,7 +31,7 @@ function ProjectsPage() {
     <>
       <PageHeader title="Projects" description="Each project is a job for a client: its boreholes, the samples taken from them and the tests run on those samples." />
       <div className="flex flex-col gap-6">
-        {labPermissions(membership.role).editProjects ? (
+        {labPermissions(membership.roles).editProjects ? (
           <DisclosureForm openLabel="New project" size="md">
             {(close) => <ProjectCreateForm orgId={orgId} onCancel={close} onCreated={(project) => navigate(paths.org.project.to(orgId, project.id))} />}
           </DisclosureForm>

@@ -47,7 +47,7 @@ function SettlementCheckPage() {
   const check = useCheck(orgId, projectId, checkId);
   if (check.isPending) return <LoadingBlock label="Loading the check…" />;
   if (check.error) return <ErrorMessage error={check.error} title="The check could not be loaded" onRetry={() => void check.refetch()} />;
-  return <CheckPage orgId={orgId} projectId={projectId} check={check.data} canEdit={designPermissions(membership.role).edit} />;
+  return <CheckPage orgId={orgId} projectId={projectId} check={check.data} canEdit={designPermissions(membership.roles).edit} />;
 }
 
 function CheckPage({ orgId, projectId, check, canEdit }: { orgId: string; projectId: string; check: SettlementCheckDetail; canEdit: boolean }) {

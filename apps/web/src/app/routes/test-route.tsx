@@ -1,4 +1,4 @@
-import type { TestDetail } from '@porestack/types';
+import { isFrozenTestStatus, type ReviewOutcome, type TestDetail } from '@porestack/types';
 import { useState, type ReactNode } from 'react';
 import { Link, useParams, useSearchParams } from 'react-router-dom';
 import { Alert } from '../../components/alert';
@@ -46,8 +46,6 @@ export function TestRoute() {
   );
 }
 
-const LOCKED = new Set(['submitted', 'approved']);
-
 function TestPage() {
   const { orgId, membership, user } = useCurrentOrg();
   const { testId = '' } = useParams();
@@ -58,8 +56,8 @@ function TestPage() {
   if (test.isPending) return <LoadingBlock label="Loading the test…" />;
   if (test.error) return <ErrorMessage error={test.error} title="The test could not be loaded" onRetry={() => void test.refetch()} />;
   const t = test.data;
-  const may = labPermissions(membership.role);
-  const editable = may.benchWork && !LOCKED.has(t.status);
+  const may = labPermissions(membership.roles);
+  const editable = may.benchWork && !isFrozenTestStatus(t.status);
 
   return (
     <>
@@ -85,7 +83,7 @@ function TestPage() {
         ))}
       </nav>
       {section === 'setup' ? <SetupSection orgId={orgId} test={t} editable={editable} /> : null}
-      {section === 'readings' ? <ReadingsSection orgId={orgId} test={t} canImport={may.importReadings && !LOCKED.has(t.status)} /> : null}
+      {section === 'readings' ? <ReadingsSection orgId={orgId} test={t} canImport={may.importReadings && !isFrozenTestStatus(t.status)} /> : null}
       {section === 'results' ? <AnalysisSection orgId={orgId} test={t} view="results" canPick={false} canRerun={editable && t.status !== 'draft'} /> : null}
       {section === 'curves' ? <AnalysisSection orgId={orgId} test={t} view="curves" canPick={editable && t.status !== 'draft'} canRerun={editable && t.status !== 'draft'} /> : null}
       {section === 'review' ? <ReviewSection orgId={orgId} test={t} canSubmit={editable} isManager={may.review} userId={user.id} /> : null}
@@ -160,7 +158,7 @@ function ReviewSection({ orgId, test, canSubmit, isManager, userId }: { orgId: s
   const submit = useSubmitTest(orgId, test.id);
   const ready = test.status === 'analysed' || (test.status === 'changes_requested' && test.latestAnalysis !== null);
   // The decision panel goes away once the status moves on, so its confirmation is kept here.
-  const [decided, setDecided] = useState<'approved' | 'changes_requested' | null>(null);
+  const [decided, setDecided] = useState<ReviewOutcome | null>(null);
   return (
     <div className="space-y-6">
       {decided === 'approved' ? (

@@ -10,7 +10,7 @@ describe('sign-up, sign-in, session, sign-out', () => {
   it('when a person signs up, then they are admin of a new organisation and signed in', async () => {
     const { browser, session, email } = await signUpAdmin(app, 'founder');
     expect(session.user.email).toBe(email);
-    expect(session.memberships).toEqual([{ organisationId: expect.any(String), organisationName: 'Org of founder', role: 'admin' }]);
+    expect(session.memberships).toEqual([{ organisationId: expect.any(String), organisationName: 'Org of founder', roles: ['admin'] }]);
     const res = await browser.get('/api/auth/session').expect(200);
     expect(res.body).toEqual(session);
     const stored = await dataSource.getRepository(UserEntity).findOneByOrFail({ email });

@@ -1,4 +1,4 @@
-import type { Invitation, InvitationPreview, Session } from '@porestack/types';
+import type { Invitation, InvitationPreview, Role, Session } from '@porestack/types';
 import { describe, expect, it } from 'vitest';
 import { createApp } from '../../../app.js';
 import { dataSource } from '../../../data-source.js';
@@ -12,8 +12,8 @@ const app = createApp();
 const PUBLIC_URL = process.env['PUBLIC_URL'] ?? '';
 
 /** Invites through the API and returns the token from the link in the mail that arrived. */
-async function inviteAndReadMail(admin: SignedUpAdmin, email: string, role = 'technician'): Promise<{ token: string; invitation: Invitation }> {
-  const res = await admin.browser.post(`/api/orgs/${admin.orgId}/invitations`, { email, role }).expect(201);
+async function inviteAndReadMail(admin: SignedUpAdmin, email: string, roles: Role[] = ['technician']): Promise<{ token: string; invitation: Invitation }> {
+  const res = await admin.browser.post(`/api/orgs/${admin.orgId}/invitations`, { email, roles }).expect(201);
   const mail = await waitForMail(email);
   expect(mail.subject).toMatch(/invited you to Org of/);
   expect(mail.text).toMatch(/as (Technician|Designer|Client|Lab manager|Administrator)/);
@@ -26,22 +26,22 @@ describe('invitations', () => {
     const admin = await signUpAdmin(app, 'inviter');
     const email = uniqueEmail('new-tech');
     const { token, invitation } = await inviteAndReadMail(admin, email);
-    expect(invitation).toMatchObject({ email, role: 'technician', invitedBy: 'Test inviter' });
+    expect(invitation).toMatchObject({ email, roles: ['technician'], invitedBy: 'Test inviter' });
 
     const invitee = await openBrowser(app);
     const preview = (await invitee.get(`/api/invitations/${token}`).expect(200)).body as InvitationPreview;
-    expect(preview).toMatchObject({ organisationName: 'Org of inviter', email, role: 'technician', accountExists: false });
+    expect(preview).toMatchObject({ organisationName: 'Org of inviter', email, roles: ['technician'], accountExists: false });
 
     const accepted = await invitee.post(`/api/invitations/${token}/accept`, { name: 'Nell Tech', password: TEST_PASSWORD }).expect(200);
     const session = accepted.body as Session;
     expect(session.user).toMatchObject({ email, name: 'Nell Tech' });
-    expect(session.memberships).toEqual([{ organisationId: admin.orgId, organisationName: 'Org of inviter', role: 'technician' }]);
+    expect(session.memberships).toEqual([{ organisationId: admin.orgId, organisationName: 'Org of inviter', roles: ['technician'] }]);
     await invitee.get('/api/auth/session').expect(200);
 
     const members = await admin.browser.get(`/api/orgs/${admin.orgId}/members`).expect(200);
-    expect(members.body.map((m: { email: string; role: string }) => [m.email, m.role])).toEqual([
-      [admin.email, 'admin'],
-      [email, 'technician'],
+    expect(members.body.map((m: { email: string; roles: string[] }) => [m.email, m.roles])).toEqual([
+      [admin.email, ['admin']],
+      [email, ['technician']],
     ]);
     expect((await admin.browser.get(`/api/orgs/${admin.orgId}/invitations`).expect(200)).body).toEqual([]);
   });
@@ -49,7 +49,7 @@ describe('invitations', () => {
   it('when a person with an account accepts with their password, then the membership is added to their account', async () => {
     const admin = await signUpAdmin(app, 'second-org');
     const existing = await signUpAdmin(app, 'has-account');
-    const { token } = await inviteAndReadMail(admin, existing.email, 'designer');
+    const { token } = await inviteAndReadMail(admin, existing.email, ['designer']);
     const invitee = await openBrowser(app);
     const preview = await invitee.get(`/api/invitations/${token}`).expect(200);
     expect(preview.body.accountExists).toBe(true);
@@ -58,8 +58,26 @@ describe('invitations', () => {
     expect(wrong.body.code).toBe('invalid_credentials');
 
     const res = await invitee.post(`/api/invitations/${token}/accept`, { password: TEST_PASSWORD }).expect(200);
-    expect((res.body as Session).memberships.map((m) => m.role)).toEqual(['admin', 'designer']);
+    expect((res.body as Session).memberships.map((m) => m.roles)).toEqual([['admin'], ['designer']]);
     expect(await dataSource.getRepository(UserEntity).countBy({ email: existing.email })).toBe(1);
+  });
+
+  it('when an admin invites with two roles, then the mail names both and the new member holds both, in the usual order', async () => {
+    const admin = await signUpAdmin(app, 'two-roles');
+    const email = uniqueEmail('manager-and-tech');
+    const { token, invitation } = await inviteAndReadMail(admin, email, ['lab_manager', 'technician']);
+    expect(invitation.roles).toEqual(['technician', 'lab_manager']);
+    const mail = await waitForMail(email);
+    expect(mail.text).toContain('as Technician and Lab manager.');
+    const invitee = await openBrowser(app);
+    const accepted = await invitee.post(`/api/invitations/${token}/accept`, { name: 'Two Hats', password: TEST_PASSWORD }).expect(200);
+    expect((accepted.body as Session).memberships).toEqual([{ organisationId: admin.orgId, organisationName: 'Org of two-roles', roles: ['technician', 'lab_manager'] }]);
+  });
+
+  it('when an admin invites with no role, then 400 names the roles field', async () => {
+    const admin = await signUpAdmin(app, 'no-roles');
+    const res = await admin.browser.post(`/api/orgs/${admin.orgId}/invitations`, { email: uniqueEmail('roleless'), roles: [] }).expect(400);
+    expect(res.body.issues).toEqual([{ path: 'roles', message: 'Choose at least one role.' }]);
   });
 
   it('when an accepted invitation link is used again, then 410 token_used', async () => {
@@ -109,14 +127,14 @@ describe('invitations', () => {
 
   it('when an admin invites someone who is already a member, then 409 already_member', async () => {
     const admin = await signUpAdmin(app, 'dup-invite');
-    const res = await admin.browser.post(`/api/orgs/${admin.orgId}/invitations`, { email: admin.email, role: 'client' }).expect(409);
+    const res = await admin.browser.post(`/api/orgs/${admin.orgId}/invitations`, { email: admin.email, roles: ['client'] }).expect(409);
     expect(res.body.code).toBe('already_member');
   });
 
   it('when the mail server refuses the invitation e-mail, then 503 says so and no invitation is kept', async () => {
     const admin = await signUpAdmin(app, 'mail-down');
     const res = await withRefusingMailServer(() =>
-      admin.browser.post(`/api/orgs/${admin.orgId}/invitations`, { email: uniqueEmail('unreached'), role: 'technician' }).expect(503),
+      admin.browser.post(`/api/orgs/${admin.orgId}/invitations`, { email: uniqueEmail('unreached'), roles: ['technician'] }).expect(503),
     );
     expect(res.body).toMatchObject({ code: 'service_unavailable', message: expect.stringContaining('could not be sent, so no invitation was made') });
     expect(await dataSource.getRepository(InvitationEntity).countBy({ organisationId: admin.orgId })).toBe(0);

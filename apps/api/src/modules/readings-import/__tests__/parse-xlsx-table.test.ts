@@ -71,4 +71,31 @@ describe('parseXlsxTable(bytes)', () => {
     const problem = await problemOf(() => parseXlsxTable(bytes, LIMITS));
     expect(problem.message).toMatch(/^The workbook could not be read .*save it again as \.xlsx/);
   });
+
+  it('refuses a value far to the right (column XFD) naming the row, instead of widening every row to 16,384 cells', async () => {
+    const bytes = await workbook((sheet) => {
+      sheet.addRow([1, 25, 0, 0]);
+      sheet.getCell(3, 16_384).value = 'stray';
+    });
+    const problem = await problemOf(() => parseXlsxTable(bytes, LIMITS));
+    expect(problem.message).toBe(
+      "Sheet 'readings' has a value in column 16384 of row 3; a file of readings may be at most 256 columns wide. Delete the columns to the right of the readings (or move that value) and upload again.",
+    );
+  });
+
+  it('keeps only the mapped columns of an import below the header, and drops trailing empty cells', async () => {
+    const bytes = await workbook((sheet) => {
+      sheet.getRow(1).getCell(6).value = 'logger note';
+      sheet.addRow([1, 25, 0, 0, null, 'kept out', null, null]);
+    });
+    const parsed = await parseXlsxTable(bytes, LIMITS, { keepColumns: { headerRow: 1, names: ['increment', 'stress_kpa', 'elapsed_min', 'deformation_mm'] } });
+    expect(parsed.rows[0]?.cells).toEqual(['increment', 'stress_kpa', 'elapsed_min', 'deformation_mm', null, 'logger note']);
+    expect(parsed.rows[1]?.cells).toEqual([1, 25, 0, 0]);
+  });
+
+  it('stops a preview at its rows and still reads the specimen sheet after them', async () => {
+    const parsed = await parseXlsxTable(fixture('canonical.xlsx'), LIMITS, { previewRows: 5 });
+    expect(parsed.rows.map((row) => row.rowNumber)).toEqual([1, 2, 3, 4, 5]);
+    expect(parsed.specimen).toMatchObject({ initial_height_mm: 20, drainage: 'double' });
+  });
 });

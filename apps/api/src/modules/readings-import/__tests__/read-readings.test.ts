@@ -54,6 +54,19 @@ describe('parseCsvTable(text) and detectLayout(table)', () => {
     expect(problem.message).toContain("the file may use ':' between values");
   });
 
+  it('drops blank lines and lines of empty cells but keeps each row’s number as a spreadsheet shows it', () => {
+    const parsed = table(Buffer.from(`increment,stress_kpa,elapsed_min,deformation_mm\n${'\n'.repeat(50_000)},,,,\n1,25,0,0\n`));
+    expect(parsed.rows.map((row) => row.rowNumber)).toEqual([1, 50_003]);
+    expect(parsed.rows[1]?.cells).toEqual(['1', '25', '0', '0']);
+  });
+
+  it('refuses a row wider than 256 columns, naming the row', () => {
+    const problem = problemOf(() => table(csv('1,25,0,0', `1,25,1,0.1${','.repeat(300)}x`)));
+    expect(problem.message).toBe(
+      'The file has a value in column 304 of row 3; a file of readings may be at most 256 columns wide. Delete the columns to the right of the readings (or move that value) and upload again.',
+    );
+  });
+
   it('refuses more rows than the limit before reading further', () => {
     const problem = problemOf(() => table(csv('1,25,0,0', '1,25,1,0.1', '1,25,2,0.2'), { maxFileBytes: 1e6, maxRows: 2 }));
     expect(problem.message).toContain('more than 2 rows of readings, the most one upload may hold');

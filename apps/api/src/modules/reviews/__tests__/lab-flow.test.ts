@@ -233,6 +233,19 @@ describe('lab workflow: readings → analysis → review → soil record version
     await manager2.post(`/api/orgs/${orgId}/tests/${own.testId}/approve`, {}).expect(200);
   });
 
+  it('when an administrator who is also lab manager ran a test, then she may not approve it (403 with the reason), and another admin and lab manager may', async () => {
+    const first = await createMember(orgId, ['admin', 'lab_manager'], 'small-lab-head');
+    const second = await createMember(orgId, ['admin', 'lab_manager'], 'small-lab-deputy');
+    const own = await submittedTest(orgId, first.userId);
+    const firstBrowser = await signedInBrowser(app, first.email);
+    const res = await firstBrowser.post(`/api/orgs/${orgId}/tests/${own.testId}/approve`, {}).expect(403);
+    expect(res.body).toMatchObject({ code: 'own_test' });
+    expect(res.body.message).toMatch(/you ran or submitted yourself/);
+    const secondBrowser = await signedInBrowser(app, second.email);
+    const approved = await secondBrowser.post(`/api/orgs/${orgId}/tests/${own.testId}/approve`, {}).expect(200);
+    expect(approved.body.test.status).toBe('approved');
+  });
+
   it('when a technician asks to approve, then 403: only lab managers review', async () => {
     const other = await submittedTest(orgId, techId);
     await tech.post(`/api/orgs/${orgId}/tests/${other.testId}/approve`, {}).expect(403);

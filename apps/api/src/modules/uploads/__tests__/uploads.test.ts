@@ -132,7 +132,7 @@ describe('a failure on our side', () => {
     const row = await dataSource.getRepository(UploadEntity).findOneByOrFail({ id: upload.id });
     await removeUploadObject(row.objectKey);
     const run = await jobRuns.create({ organisationId: orgId, kind: 'import-readings', testId, uploadId: upload.id });
-    await expect(importReadings({ orgId, testId, uploadId: upload.id, jobRunId: run.id, actorId: technicianId, mapping: null })).rejects.toThrow();
+    await expect(importReadings({ orgId, testId, uploadId: upload.id, jobRunId: run.id, actorId: technicianId, sizeBytes: row.sizeBytes, mapping: null })).rejects.toThrow();
     const job = (await technician.get(`/api/orgs/${orgId}/jobs/${run.id}`).expect(200)).body as JobRun;
     expect(job).toMatchObject({ state: 'failed', message: 'The import stopped because of a problem on our side; no readings were changed. It is tried again; if it keeps failing, tell your administrator.' });
     expect((await technician.get(`/api/orgs/${orgId}/uploads/${upload.id}`).expect(200)).body.status).toBe('failed');

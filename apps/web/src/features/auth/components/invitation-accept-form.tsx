@@ -1,4 +1,4 @@
-import { InvitationAcceptSchema, ROLE_LABELS, type InvitationPreview, type Session } from '@porestack/types';
+import { InvitationAcceptSchema, roleList, type InvitationPreview, type Session } from '@porestack/types';
 import { Button } from '../../../components/button';
 import { ErrorMessage } from '../../../components/error-message';
 import { TextField } from '../../../components/text-field';
@@ -34,8 +34,8 @@ export function InvitationAcceptForm({ token, invitation, onAccepted }: Invitati
       <dl className="grid grid-cols-[auto_1fr] gap-x-4 gap-y-1 rounded-md bg-slate-50 px-4 py-3 text-sm">
         <dt className="text-slate-500">Organisation</dt>
         <dd className="font-medium text-slate-900">{invitation.organisationName}</dd>
-        <dt className="text-slate-500">Your role</dt>
-        <dd className="text-slate-900">{ROLE_LABELS[invitation.role]}</dd>
+        <dt className="text-slate-500">{invitation.roles.length > 1 ? 'Your roles' : 'Your role'}</dt>
+        <dd className="text-slate-900">{roleList(invitation.roles)}</dd>
         <dt className="text-slate-500">E-mail</dt>
         <dd className="break-all text-slate-900">{invitation.email}</dd>
         <dt className="text-slate-500">Invited by</dt>

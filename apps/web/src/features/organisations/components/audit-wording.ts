@@ -1,4 +1,4 @@
-import { ROLE_LABELS, RoleSchema } from '@porestack/types';
+import { ROLE_LABELS, RoleSchema, RolesSchema, roleList } from '@porestack/types';
 
 /** Plain words for the actions we know; later issues add theirs here. */
 const ACTION_WORDS: Record<string, string> = {
@@ -26,12 +26,14 @@ export function describeAction(action: string): string {
 function describeValue(value: unknown): string {
   const role = RoleSchema.safeParse(value);
   if (role.success) return ROLE_LABELS[role.data];
+  const roles = Array.isArray(value) && value.length > 0 ? RolesSchema.safeParse(value) : null;
+  if (roles?.success) return roleList(roles.data);
   if (value === null || value === undefined) return '—';
   if (typeof value === 'object') return JSON.stringify(value);
   return String(value);
 }
 
-/** `{ email: 'a@b', role: 'technician' }` → "email: a@b · role: Technician". */
+/** `{ email: 'a@b', roles: ['technician', 'lab_manager'] }` → "email: a@b · roles: Technician and Lab manager". */
 export function describeDetails(details: Record<string, unknown>): string {
   const parts = Object.entries(details).map(([key, value]) => `${key.replace(/([a-z])([A-Z])/g, '$1 $2').toLowerCase()}: ${describeValue(value)}`);
   return parts.length > 0 ? parts.join(' · ') : '—';

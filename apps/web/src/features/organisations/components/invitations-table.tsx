@@ -1,4 +1,4 @@
-import { ROLE_LABELS, type Invitation } from '@porestack/types';
+import { roleList, type Invitation } from '@porestack/types';
 import { createColumnHelper, getCoreRowModel, useReactTable } from '@tanstack/react-table';
 import { useMemo, useState } from 'react';
 import { Button } from '../../../components/button';
@@ -17,7 +17,7 @@ export function InvitationsTable({ orgId, invitations }: { orgId: string; invita
   const columns = useMemo(
     () => [
       column.accessor('email', { header: 'E-mail', cell: (info) => <span className="font-medium text-slate-900">{info.getValue()}</span> }),
-      column.accessor('role', { header: 'Role', cell: (info) => ROLE_LABELS[info.getValue()] }),
+      column.accessor('roles', { header: 'Roles', cell: (info) => roleList(info.getValue()) }),
       column.accessor('invitedBy', { header: 'Invited by' }),
       column.accessor('expiresAt', { header: 'Link expires', cell: (info) => formatDateTime(info.getValue()) }),
       column.display({

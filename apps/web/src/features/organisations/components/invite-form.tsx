@@ -1,25 +1,27 @@
-import { InvitationCreateSchema } from '@porestack/types';
+import { InvitationCreateSchema, type Role } from '@porestack/types';
 import { useRef, useState, type FormEvent } from 'react';
 import { Alert } from '../../../components/alert';
 import { Button } from '../../../components/button';
 import { ErrorMessage } from '../../../components/error-message';
-import { Select } from '../../../components/select';
 import { TextField } from '../../../components/text-field';
 import { useSchemaForm } from '../../../lib/use-schema-form';
 import { useCreateInvitation } from '../api/create-invitation';
-import { ROLE_OPTIONS } from './role-options';
+import { RoleCheckboxes } from './role-checkboxes';
 
 export function InviteForm({ orgId }: { orgId: string }) {
   const create = useCreateInvitation(orgId);
   const [sentTo, setSentTo] = useState<string | null>(null);
   const emailRef = useRef<HTMLInputElement>(null);
+  const [roles, setRoles] = useState<Role[]>(['technician']);
   const { errors, onSubmit: submit } = useSchemaForm(InvitationCreateSchema, {
+    toValues: (values) => ({ ...values, roles }),
     serverError: create.error,
     onValid: (data, form) =>
       create.mutate(data, {
         onSuccess: (invitation) => {
           setSentTo(invitation.email);
           form.reset();
+          setRoles(['technician']);
           emailRef.current?.focus();
         },
       }),
@@ -33,14 +35,15 @@ export function InviteForm({ orgId }: { orgId: string }) {
 
   return (
     <form noValidate onSubmit={onSubmit} className="flex flex-col gap-4" aria-label="Invite a colleague">
-      <div className="grid gap-4 sm:grid-cols-[minmax(0,1fr)_12rem_auto] sm:items-start">
-        <TextField ref={emailRef} label="E-mail address" name="email" type="email" autoComplete="off" error={errors['email']} />
-        <Select label="Role" name="role" options={ROLE_OPTIONS} defaultValue="technician" error={errors['role']} />
-        <Button type="submit" pending={create.isPending} className="sm:mt-6">
+      <TextField ref={emailRef} label="E-mail address" name="email" type="email" autoComplete="off" error={errors['email']} />
+      {/* Roles before the button, so the keyboard reaches them in reading order. */}
+      <div className="flex flex-col gap-4 sm:flex-row sm:items-end sm:justify-between">
+        <RoleCheckboxes legend="Roles (one or more)" value={roles} onChange={setRoles} error={errors['roles']} />
+        <Button type="submit" pending={create.isPending}>
           {create.isPending ? 'Sending…' : 'Send invitation'}
         </Button>
       </div>
-      {create.error ? <ErrorMessage error={create.error} hideIssuesFor={['email', 'role']} /> : null}
+      {create.error ? <ErrorMessage error={create.error} hideIssuesFor={['email', 'roles']} /> : null}
       {sentTo ? (
         <Alert tone="success">
           Invitation sent to <strong>{sentTo}</strong>. It appears under pending invitations until they accept it.

@@ -1,30 +1,35 @@
-import { ROLE_LABELS, RoleSchema, type Member } from '@porestack/types';
+import { roleList, RolesSchema, type Member, type Role } from '@porestack/types';
 import { createColumnHelper, getCoreRowModel, useReactTable } from '@tanstack/react-table';
 import { useMemo, useState } from 'react';
 import { Button } from '../../../components/button';
 import { ConfirmDialog } from '../../../components/confirm-dialog';
 import { ErrorMessage } from '../../../components/error-message';
-import { Select } from '../../../components/select';
 import { formatDate } from '../../../lib/format';
 import { useRemoveMember } from '../api/remove-member';
-import { useUpdateMemberRole } from '../api/update-member-role';
-import { ROLE_OPTIONS } from './role-options';
+import { useUpdateMemberRoles } from '../api/update-member-roles';
+import { RoleCheckboxes } from './role-checkboxes';
 import { DataTable } from '../../../components/data-table';
 
 type MembersTableProps = {
   orgId: string;
   members: readonly Member[];
-  /** The signed-in person: they cannot change their own role or remove themselves here. */
+  /**
+   * The signed-in person: they cannot remove themselves here, and change their own roles only
+   * as the organisation's only administrator (otherwise another administrator does it).
+   */
   currentUserId: string;
 };
 
 const column = createColumnHelper<Member>();
 
-/** The members, with a role picker and a remove button for everyone but oneself. Sits flush in a Panel. */
+/** The members, with their roles to tick and a remove button for everyone but oneself. Sits flush in a Panel. */
 export function MembersTable({ orgId, members, currentUserId }: MembersTableProps) {
-  const updateRole = useUpdateMemberRole(orgId);
+  const updateRoles = useUpdateMemberRoles(orgId);
   const removeMember = useRemoveMember(orgId);
   const [toRemove, setToRemove] = useState<Member | null>(null);
+  /** A change refused before sending (no role left), by member. */
+  const [refused, setRefused] = useState<{ userId: string; message: string } | null>(null);
+  const soleAdmin = members.filter((member) => member.roles.includes('admin')).length === 1;
 
   const columns = useMemo(
     () => [
@@ -38,24 +43,36 @@ export function MembersTable({ orgId, members, currentUserId }: MembersTableProp
         ),
       }),
       column.accessor('email', { header: 'E-mail', cell: (info) => info.getValue() }),
-      column.accessor('role', {
-        header: 'Role',
+      column.accessor('roles', {
+        header: 'Roles',
         cell: (info) => {
           const member = info.row.original;
-          if (member.userId === currentUserId) return ROLE_LABELS[member.role];
-          const pending = updateRole.isPending && updateRole.variables?.userId === member.userId;
+          if (member.userId === currentUserId && !soleAdmin) {
+            return (
+              <span>
+                {roleList(member.roles)}
+                <span className="block text-xs text-slate-500">Another administrator changes your roles.</span>
+              </span>
+            );
+          }
+          const pending = updateRoles.isPending && updateRoles.variables?.userId === member.userId;
+          // While the change is on its way, the boxes show what was asked for.
+          const shown: readonly Role[] = pending && updateRoles.variables ? updateRoles.variables.roles : member.roles;
           return (
-            <Select
-              label={`Role of ${member.name}`}
-              hideLabel
-              size="sm"
-              className="w-40"
-              options={ROLE_OPTIONS}
-              value={member.role}
+            <RoleCheckboxes
+              legend={`Roles of ${member.name}`}
+              hideLegend
+              value={shown}
               disabled={pending}
-              onChange={(event) => {
-                const role = RoleSchema.parse(event.target.value);
-                updateRole.mutate({ userId: member.userId, role });
+              error={refused?.userId === member.userId ? refused.message : undefined}
+              onChange={(next) => {
+                const checked = RolesSchema.safeParse(next);
+                if (!checked.success) {
+                  setRefused({ userId: member.userId, message: `${checked.error.issues[0]?.message ?? 'Choose at least one role.'} Tick another role first.` });
+                  return;
+                }
+                setRefused(null);
+                updateRoles.mutate({ userId: member.userId, roles: checked.data });
               }}
             />
           );
@@ -73,16 +90,16 @@ export function MembersTable({ orgId, members, currentUserId }: MembersTableProp
           ),
       }),
     ],
-    [currentUserId, updateRole],
+    [currentUserId, soleAdmin, refused, updateRoles],
   );
 
   const table = useReactTable({ data: members as Member[], columns, getCoreRowModel: getCoreRowModel(), getRowId: (row) => row.userId });
 
   return (
     <div>
-      {updateRole.error ? (
+      {updateRoles.error ? (
         <div className="px-5 pt-4">
-          <ErrorMessage error={updateRole.error} title="The role was not changed" />
+          <ErrorMessage error={updateRoles.error} title="The roles were not changed" />
         </div>
       ) : null}
       <DataTable table={table} caption="Members of this organisation" framed={false} />

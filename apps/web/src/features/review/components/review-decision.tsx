@@ -1,4 +1,4 @@
-import { ChangeRequestSchema } from '@porestack/types';
+import { ChangeRequestSchema, type ReviewOutcome } from '@porestack/types';
 import { useId, useState } from 'react';
 import { Alert } from '../../../components/alert';
 import { Button } from '../../../components/button';
@@ -11,7 +11,7 @@ type ReviewDecisionProps = {
   testReference: string;
   /** Whether the signed-in person ran this test: nobody approves their own work. */
   isOwnTest: boolean;
-  onDecided?: (kind: 'approved' | 'changes_requested') => void;
+  onDecided?: (kind: ReviewOutcome) => void;
 };
 
 /** Approve, or ask for changes with a comment the technician will read on the test page. */
@@ -21,7 +21,7 @@ export function ReviewDecision({ orgId, testId, testReference, isOwnTest, onDeci
   const [done, setDone] = useState<string | null>(null);
   const decide = useDecideReview(orgId, {
     onDecided: (decision) => {
-      const kind = decision.kind === 'approve' ? 'approved' : 'changes_requested';
+      const kind: ReviewOutcome = decision.kind === 'approve' ? 'approved' : 'changes_requested';
       setDone(kind === 'approved' ? `${testReference} approved. A new soil record version has been written.` : `${testReference} sent back to the technician with your comment.`);
       onDecided?.(kind);
     },

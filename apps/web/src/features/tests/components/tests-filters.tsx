@@ -1,6 +1,5 @@
-import { TEST_STATUSES, type TestListQuery, type TestStatus } from '@porestack/types';
+import { TEST_STATUS_LABELS, TEST_STATUSES, type TestListQuery, type TestStatus } from '@porestack/types';
 import { Select } from '../../../components/select';
-import { TEST_STATUS_WORDS } from '../../../components/test-status-badge';
 
 type Option = { value: string; label: string };
 
@@ -11,7 +10,7 @@ type TestsFiltersProps = {
   onChange: (filters: TestListQuery) => void;
 };
 
-export const STATUS_FILTER_OPTIONS: Option[] = [{ value: '', label: 'Any status' }, ...TEST_STATUSES.map((s) => ({ value: s, label: TEST_STATUS_WORDS[s] }))];
+export const STATUS_FILTER_OPTIONS: Option[] = [{ value: '', label: 'Any status' }, ...TEST_STATUSES.map((s) => ({ value: s, label: TEST_STATUS_LABELS[s] }))];
 
 /** Narrow the list by status, project or technician; the choice lives in the URL so it can be shared. */
 export function TestsFilters({ filters, projects, technicians, onChange }: TestsFiltersProps) {
