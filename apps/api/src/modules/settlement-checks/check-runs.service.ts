@@ -84,26 +84,28 @@ export async function executeSnapshot(
   return dataSource.transaction(async (manager) => {
     const check = await lockCheck(manager, orgId, projectId, snapshot.checkId);
     const revision = (check.currentRevision ?? 0) + 1;
-    const saved = await manager.getRepository(CheckRevisionEntity).save(
-      manager.getRepository(CheckRevisionEntity).create({
-        organisationId: orgId,
-        checkId: check.id,
-        revision,
-        reason: snapshot.reason,
-        groundModelRevisionId: groundModel.id,
-        footings: snapshot.footings,
-        options: snapshot.options,
-        footingsAsRun: run.footingsAsRun,
-        result: summary,
-        warnings: run.warnings,
-        geoCoreVersion: GEO_CORE_VERSION,
-        durationMs: run.durationMs,
-        maxTotalM: Math.max(0, ...totals),
-        pairsOverLimit: run.result.kind === 'footings' ? run.result.check.pairs.filter((p) => !p.withinDesignLimit).length : 0,
-        footingsOverLimit: run.result.kind === 'footings' ? footings.filter((f) => f.withinTotalLimit === false).length : 0,
-        createdById: actorId,
-      }),
-    );
+    const repo = manager.getRepository(CheckRevisionEntity);
+    // insert, not save: save would read the row back, several MB of result for a large check.
+    const saved = repo.create({
+      organisationId: orgId,
+      checkId: check.id,
+      revision,
+      reason: snapshot.reason,
+      groundModelRevisionId: groundModel.id,
+      footings: snapshot.footings,
+      options: snapshot.options,
+      footingsAsRun: run.footingsAsRun,
+      result: summary,
+      warnings: run.warnings,
+      geoCoreVersion: GEO_CORE_VERSION,
+      durationMs: run.durationMs,
+      maxTotalM: Math.max(0, ...totals),
+      pairsOverLimit: run.result.kind === 'footings' ? run.result.check.pairs.filter((p) => !p.withinDesignLimit).length : 0,
+      footingsOverLimit: run.result.kind === 'footings' ? footings.filter((f) => f.withinTotalLimit === false).length : 0,
+      createdById: actorId,
+    });
+    const inserted = await repo.insert(saved);
+    saved.id = (inserted.identifiers[0] as { id: string }).id;
     // Chunks keep each INSERT's parameters well under PostgreSQL's limit and its size modest.
     for (let start = 0; start < footings.length; start += 200) {
       await manager.getRepository(FootingResultEntity).insert(

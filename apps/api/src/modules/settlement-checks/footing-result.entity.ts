@@ -26,6 +26,7 @@ export class FootingResultEntity {
   @Column('text', { name: 'footing_id' })
   footingId!: string;
 
-  @Column('jsonb')
+  /** json, like the revision's result: read whole, never queried inside. */
+  @Column('json')
   detail!: FootingSettlementResult;
 }
