@@ -11,6 +11,7 @@ import { CharacteristicSetEditor } from '../../features/design/components/charac
 import { DESIGN_READERS, designPermissions } from '../design-permissions';
 import { useCurrentOrg } from '../org-context';
 import { RoleGate } from '../role-gate';
+import { ProjectBackLink } from './project-back-link';
 
 export function CharacteristicSetRoute() {
   return (
@@ -29,13 +30,7 @@ function CharacteristicSetPage() {
   const revisionParam = search.get('revision');
   const set = useCharacteristicSet(orgId, projectId, isNew ? '' : setId, revisionParam === null ? null : Number(revisionParam));
   const canEdit = designPermissions(membership.roles).edit;
-  const back = (
-    <p className="mb-2 text-sm">
-      <Link to={paths.org.project.to(orgId, projectId)} className="text-accent-700 hover:underline">
-        ← Project
-      </Link>
-    </p>
-  );
+  const back = <ProjectBackLink orgId={orgId} projectId={projectId} />;
   const toSet = (id: string) => navigate(paths.org.characteristicSet.to(orgId, projectId, id), { replace: !isNew });
   if (isNew) {
     return (

@@ -13,6 +13,7 @@ import { GroundModelView } from '../../features/design/components/ground-model-v
 import { DESIGN_READERS, designPermissions } from '../design-permissions';
 import { useCurrentOrg } from '../org-context';
 import { RoleGate } from '../role-gate';
+import { ProjectBackLink } from './project-back-link';
 
 export function GroundModelRoute() {
   return (
@@ -31,13 +32,7 @@ function GroundModelPage() {
   const revisionParam = search.get('revision');
   const model = useGroundModel(orgId, projectId, isNew ? '' : modelId, revisionParam === null ? null : Number(revisionParam));
   const canEdit = designPermissions(membership.roles).edit;
-  const back = (
-    <p className="mb-2 text-sm">
-      <Link to={paths.org.project.to(orgId, projectId)} className="text-accent-700 hover:underline">
-        ← Project
-      </Link>
-    </p>
-  );
+  const back = <ProjectBackLink orgId={orgId} projectId={projectId} />;
   const saved = (id: string) => navigate(paths.org.groundModel.to(orgId, projectId, id));
   if (isNew) {
     return (

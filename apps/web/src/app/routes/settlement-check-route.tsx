@@ -1,7 +1,7 @@
 import type { RunCheckAnswer, SettlementCheckDetail } from '@porestack/types';
 import { useQueryClient } from '@tanstack/react-query';
 import { useEffect, useRef, useState } from 'react';
-import { Link, useParams, useSearchParams } from 'react-router-dom';
+import { useParams, useSearchParams } from 'react-router-dom';
 import { Alert } from '../../components/alert';
 import { Button } from '../../components/button';
 import { ErrorMessage } from '../../components/error-message';
@@ -9,7 +9,6 @@ import { JobProgress } from '../../components/job-progress';
 import { PageHeader } from '../../components/page-header';
 import { Panel } from '../../components/panel';
 import { LoadingBlock } from '../../components/spinner';
-import { paths } from '../../config/paths';
 import { useJob } from '../../lib/jobs';
 import { designKeys } from '../../features/design/api/design-keys';
 import { useCheck, useRerunWithNewer, useRunCheck } from '../../features/design/api/settlement-checks';
@@ -23,6 +22,7 @@ import { SizingPanel } from '../../features/design/components/sizing-panel';
 import { DESIGN_READERS, designPermissions } from '../design-permissions';
 import { useCurrentOrg } from '../org-context';
 import { RoleGate } from '../role-gate';
+import { ProjectBackLink } from './project-back-link';
 
 const TABS = [
   ['schedule', 'Schedule'],
@@ -90,11 +90,7 @@ function CheckPage({ orgId, projectId, check, canEdit }: { orgId: string; projec
 
   return (
     <>
-      <p className="mb-2 text-sm">
-        <Link to={paths.org.project.to(orgId, projectId)} className="text-accent-700 hover:underline">
-          ← {check.projectName}
-        </Link>
-      </p>
+      <ProjectBackLink orgId={orgId} projectId={projectId} label={check.projectName} />
       <PageHeader
         title={check.name}
         description={

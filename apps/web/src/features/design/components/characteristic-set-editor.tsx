@@ -11,6 +11,7 @@ import { useSaveCharacteristicSet, useSetStatistics } from '../api/characteristi
 import { useDesignRecords } from '../api/design-records';
 import { formatNumber } from './design-format';
 import { SetDepthPlots } from './set-depth-plots';
+import { TableHead } from './table-head';
 
 type Adoption = { basis: AdoptionBasis; value: string; note: string };
 
@@ -81,15 +82,7 @@ export function CharacteristicSetEditor({ orgId, projectId, setId, initial, canE
         <div className="mt-3 overflow-x-auto rounded-md border border-slate-200">
           <table className="w-full text-left text-sm">
             <caption className="sr-only">Approved soil records of the project</caption>
-            <thead className="bg-slate-50 text-xs text-slate-600">
-              <tr>
-                {['In set', 'Record', 'Depth (m)', 'e0', 'Cc', 'Cr', 'Cs', 'σ′p (kPa)', 'OCR', 'cv (m²/yr)', 'Cα', 'Quality'].map((h) => (
-                  <th key={h} scope="col" className="whitespace-nowrap px-3 py-2 font-medium">
-                    {h}
-                  </th>
-                ))}
-              </tr>
-            </thead>
+            <TableHead cellClassName="px-3 py-2" headings={['In set', 'Record', 'Depth (m)', 'e0', 'Cc', 'Cr', 'Cs', 'σ′p (kPa)', 'OCR', 'cv (m²/yr)', 'Cα', 'Quality']} />
             <tbody>
               {listed.map((r) => {
                 const label = `${r.boreholeName} ${r.sampleReference} (${r.testReference} v${r.version})`;
@@ -135,15 +128,7 @@ export function CharacteristicSetEditor({ orgId, projectId, setId, initial, canE
             <div className="overflow-x-auto">
               <table className="w-full text-left text-sm">
                 <caption className="sr-only">Statistics of each parameter and the value adopted</caption>
-                <thead className="bg-slate-50 text-xs text-slate-600">
-                  <tr>
-                    {['Parameter', 'n', 'Mean', 'SD', 'COV', '95 % bound', 'Schneider', 'Unfavourable side', 'Adopt', 'Value', 'Note'].map((h) => (
-                      <th key={h} scope="col" className="whitespace-nowrap px-2 py-2 font-medium">
-                        {h}
-                      </th>
-                    ))}
-                  </tr>
-                </thead>
+                <TableHead cellClassName="px-2 py-2" headings={['Parameter', 'n', 'Mean', 'SD', 'COV', '95 % bound', 'Schneider', 'Unfavourable side', 'Adopt', 'Value', 'Note']} />
                 <tbody>
                   {SET_PARAMETERS.map((parameter) => {
                     const stats = statsOf(parameter);

@@ -2,6 +2,7 @@ import type { GroundModelRevision, ResolvedValue } from '@porestack/types';
 import { formatNumber } from './design-format';
 import { GroundProfilePlot } from './ground-profile-plot';
 import { sourceWords } from './source-words';
+import { TableHead } from './table-head';
 
 function Value({ value }: { value: ResolvedValue | undefined }) {
   if (!value || value.value === null) return <>—</>;
@@ -25,15 +26,7 @@ export function GroundModelView({ revision }: { revision: GroundModelRevision })
       <div className="overflow-x-auto rounded-md border border-slate-200">
         <table className="w-full text-left text-sm">
           <caption className="sr-only">Layers of the ground model</caption>
-          <thead className="bg-slate-50 text-xs text-slate-600">
-            <tr>
-              {['Layer', 'Depth (m)', 'γ / γsat', 'E′, ν', 'Source', 'e0', 'Cc', 'Cr/Cs', 'σ′p (kPa)', 'OCR', 'cv (m²/yr)', 'Cα'].map((h) => (
-                <th key={h} scope="col" className="whitespace-nowrap px-3 py-2 font-medium">
-                  {h}
-                </th>
-              ))}
-            </tr>
-          </thead>
+          <TableHead cellClassName="px-3 py-2" headings={['Layer', 'Depth (m)', 'γ / γsat', 'E′, ν', 'Source', 'e0', 'Cc', 'Cr/Cs', 'σ′p (kPa)', 'OCR', 'cv (m²/yr)', 'Cα']} />
           <tbody>
             {content.layers.map((layer, index) => {
               const p = layer.parameters;

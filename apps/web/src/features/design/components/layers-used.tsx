@@ -2,6 +2,7 @@ import type { CheckRevision, ResolvedValue } from '@porestack/types';
 import { formatNumber } from './design-format';
 import { sourceWords } from './source-words';
 import { TracePopover } from './trace-popover';
+import { TableHead } from './table-head';
 
 /**
  * The layers as the run used them, every parameter one click from its source (record → version →
@@ -14,15 +15,7 @@ export function LayersUsed({ orgId, revision }: { orgId: string; revision: Check
     <div className="overflow-x-auto">
       <table className="w-full text-left text-sm">
         <caption className="sr-only">Layers and parameters used by the run, each traceable to its source</caption>
-        <thead className="bg-slate-50 text-xs text-slate-600">
-          <tr>
-            {['Layer', 'Depth (m)', 'Source', 'e0', 'Cc', 'Cr/Cs used', 'σ′p basis', 'cv (m²/yr)', 'Cα', 'Drainage path (m)', 'End of primary'].map((h) => (
-              <th key={h} scope="col" className="whitespace-nowrap px-2 py-2 font-medium">
-                {h}
-              </th>
-            ))}
-          </tr>
-        </thead>
+        <TableHead cellClassName="px-2 py-2" headings={['Layer', 'Depth (m)', 'Source', 'e0', 'Cc', 'Cr/Cs used', 'σ′p basis', 'cv (m²/yr)', 'Cα', 'Drainage path (m)', 'End of primary']} />
         <tbody>
           {used.map((layer) => {
             const stored = content.layers[layer.layerIndex];

@@ -6,6 +6,7 @@ import { LoadingBlock } from '../../../components/spinner';
 import { formatDateTime } from '../../../lib/format';
 import { useRevisionComparison } from '../api/settlement-checks';
 import { formatMm } from './design-format';
+import { TableHead } from './table-head';
 
 type RevisionsPanelProps = { orgId: string; projectId: string; check: SettlementCheckDetail; onOpen: (revision: number) => void };
 
@@ -21,15 +22,7 @@ export function RevisionsPanel({ orgId, projectId, check, onOpen }: RevisionsPan
       <div className="overflow-x-auto rounded-md border border-slate-200">
         <table className="w-full text-left text-sm">
           <caption className="sr-only">Revisions of the check</caption>
-          <thead className="bg-slate-50 text-xs text-slate-600">
-            <tr>
-              {['Revision', 'Why it was run', 'Run', 'Footings', 'Largest total (mm)', 'Over the total limit', 'Pairs over the limit'].map((h) => (
-                <th key={h} scope="col" className="whitespace-nowrap px-3 py-2 font-medium">
-                  {h}
-                </th>
-              ))}
-            </tr>
-          </thead>
+          <TableHead cellClassName="px-3 py-2" headings={['Revision', 'Why it was run', 'Run', 'Footings', 'Largest total (mm)', 'Over the total limit', 'Pairs over the limit']} />
           <tbody>
             {check.revisions.map((r) => (
               <tr key={r.id} className="border-t border-slate-100">

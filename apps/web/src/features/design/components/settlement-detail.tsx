@@ -2,6 +2,7 @@ import type { SublayerSettlementRow } from '@porestack/types';
 import { useMemo } from 'react';
 import { PlotlyChart, type PlotData, type PlotLayout } from '../../../components/plot/plotly-chart';
 import { formatMm, formatNumber, formatYears } from './design-format';
+import { TableHead } from './table-head';
 
 /** What a footing (or a uniform load) reports below its centre. */
 export interface SettlementBelowPoint {
@@ -60,15 +61,7 @@ export function SettlementDetail({ point, layerNames }: { point: SettlementBelow
       <div className="overflow-x-auto">
         <table className="w-full text-left text-sm">
           <caption className="sr-only">Sublayers below {point.label}</caption>
-          <thead className="bg-slate-50 text-xs text-slate-600">
-            <tr>
-              {['Layer', 'Mid-depth (m)', 'Thickness (m)', 'σ′v0 (kPa)', 'σ′p (kPa)', 'Δσ own (kPa)', 'Δσ neighbours (kPa)', 'Case', 'Primary (mm)', 'Secondary (mm)'].map((h) => (
-                <th key={h} scope="col" className="whitespace-nowrap px-2 py-2 font-medium">
-                  {h}
-                </th>
-              ))}
-            </tr>
-          </thead>
+          <TableHead cellClassName="px-2 py-2" headings={['Layer', 'Mid-depth (m)', 'Thickness (m)', 'σ′v0 (kPa)', 'σ′p (kPa)', 'Δσ own (kPa)', 'Δσ neighbours (kPa)', 'Case', 'Primary (mm)', 'Secondary (mm)']} />
           <tbody>
             {point.sublayers.map((row) => (
               <tr key={`${row.layerIndex}-${row.midDepthM}`} className="border-t border-slate-100">
