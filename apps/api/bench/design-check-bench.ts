@@ -18,6 +18,7 @@ import { createBoss, stopJobQueue } from '../src/jobs/boss.js';
 import { registerJobs } from '../src/jobs/register-jobs.js';
 import { runCheckJob } from '../src/jobs/run-check.job.js';
 import { CheckRevisionEntity } from '../src/modules/settlement-checks/check-revision.entity.js';
+import { closeEnginePool } from '../src/modules/settlement-checks/engine-pool.js';
 import { designWorld } from '../src/testing/design-fixtures.js';
 
 const RUNS = Number(process.env['BENCH_RUNS'] ?? 5);
@@ -110,6 +111,7 @@ const stored = await dataSource.getRepository(CheckRevisionEntity).findOneBy({ c
 console.log(`  ${JOB_FOOTINGS} footings as a job (neighbours within 8 m judged): ${job.state} in ${ms(jobMs)} (geo-core ${ms(stored?.durationMs ?? 0)}) — ${job.message}`);
 
 await boss.stop({ graceful: true, wait: true });
+await closeEnginePool();
 await stopJobQueue();
 await dataSource.destroy();
 process.exit(0);

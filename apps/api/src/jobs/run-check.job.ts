@@ -18,7 +18,7 @@ export async function runSettlementCheckJob(data: RunCheckJobData): Promise<void
   const started = performance.now();
   try {
     const groundModel = await dataSource.getRepository(GroundModelRevisionEntity).findOneByOrFail({ id: data.snapshot.groundModelRevisionId });
-    const revision = await executeSnapshot(data.orgId, data.projectId, data.snapshot, groundModel, data.actorId, (progress, message) => jobRuns.update(data.jobRunId, { progress, message }));
+    const revision = await executeSnapshot(data.orgId, data.projectId, data.snapshot, groundModel, data.actorId, (progress, message) => jobRuns.update(data.jobRunId, { progress, message }), 'thread');
     const seconds = ((performance.now() - started) / 1000).toFixed(1);
     await jobRuns.update(data.jobRunId, {
       state: 'succeeded',

@@ -12,6 +12,7 @@ import { currentGroundModelRevision } from '../ground-models/ground-models.servi
 import { checkInputIssues } from './check-input-issues.js';
 import { CheckRevisionEntity } from './check-revision.entity.js';
 import { FootingResultEntity } from './footing-result.entity.js';
+import { runEngineOffThread } from './engine-pool.js';
 import { runCheckEngine } from './run-check-engine.js';
 import { SettlementCheckEntity } from './settlement-check.entity.js';
 
@@ -67,7 +68,7 @@ export async function runSnapshot(orgId: string, projectId: string, snapshot: Ru
 
 const withoutDetail = (footing: FootingSettlementResult): FootingSettlementResult => ({ ...footing, sublayers: [], timeCurve: [] });
 
-/** Runs geo-core on the snapshot and stores the revision with every footing's detail, in one transaction. */
+/** Runs geo-core on the snapshot (here, or on an engine thread for a job) and stores the revision with every footing's detail, in one transaction. */
 export async function executeSnapshot(
   orgId: string,
   projectId: string,
@@ -75,8 +76,12 @@ export async function executeSnapshot(
   groundModel: GroundModelRevisionEntity,
   actorId: string,
   progress?: (fraction: number, message: string) => Promise<void>,
+  where: 'here' | 'thread' = 'here',
 ): Promise<CheckRevisionEntity> {
-  const run = runCheckEngine(groundModel.content, snapshot.footings, snapshot.options);
+  const run =
+    where === 'thread'
+      ? await runEngineOffThread({ content: groundModel.content, footings: snapshot.footings, options: snapshot.options })
+      : runCheckEngine(groundModel.content, snapshot.footings, snapshot.options);
   await progress?.(0.8, 'Storing the results.');
   const footings = run.result.kind === 'footings' ? run.result.check.footings : [];
   const summary: CheckRunResult = run.result.kind === 'footings' ? { kind: 'footings', check: { ...run.result.check, footings: footings.map(withoutDetail) } } : run.result;

@@ -9,6 +9,7 @@ import { runCheckJob } from '../../../jobs/run-check.job.js';
 import { finishedJob } from '../../../testing/import-harness.js';
 import { createCheck, createGroundModel, designWorld, type DesignWorld } from '../../../testing/design-fixtures.js';
 import { INLINE_FOOTING_LIMIT } from '../check-runs.service.js';
+import { closeEnginePool } from '../engine-pool.js';
 
 const app = createApp();
 
@@ -26,10 +27,11 @@ describe('a check too large to answer at once runs as a job', () => {
 
   afterAll(async () => {
     await boss.stop({ graceful: true, wait: true });
+    await closeEnginePool();
     await dataSource.query(`DELETE FROM ${BOSS_SCHEMA}.job WHERE state IN ('created', 'retry') AND data->>'orgId' = $1`, [world.orgId]);
   });
 
-  it('when a designer runs more footings than answer at once, then a job is queued, its progress can be followed, and the revision holds every footing', async () => {
+  it('when a designer runs more footings than answer at once, then a job is queued and computed on an engine thread, its progress can be followed, and the revision holds every footing', async () => {
     const model = await createGroundModel(world, {
       name: 'Grid model',
       waterTableDepthM: 1,
