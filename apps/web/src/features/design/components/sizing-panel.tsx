@@ -35,6 +35,7 @@ export function SizingPanel({ orgId, projectId, check, canEdit, onApplied }: Siz
     );
   const issue = (field: string) => (sizing.error instanceof ApiError ? sizing.error.issueFor(field) : undefined);
   if (check.latestRevision === null) return <p className="text-sm text-slate-600">Run the check first: sizing works on the latest revision's ground model and neighbours.</p>;
+  if (!canEdit) return <p className="text-sm text-slate-600">Sizing is for the project's designers; the revisions show the widths they chose.</p>;
   return (
     <div className="space-y-4">
       <form
