@@ -96,10 +96,11 @@ drop_database() {
 # ── S3 fake and mail fake ─────────────────────────────────────────────────────
 port_open() { (exec 3<>"/dev/tcp/127.0.0.1/$1") 2>/dev/null; }
 
+# wait_port <port> <what> [seconds, default 10]
 wait_port() {
-  local port=$1 what=$2 i
-  for i in $(seq 1 100); do port_open "$port" && return 0; sleep 0.1; done
-  die "$what did not open 127.0.0.1:$port in 10 s."
+  local port=$1 what=$2 seconds=${3:-10} i
+  for i in $(seq 1 $((seconds * 10))); do port_open "$port" && return 0; sleep 0.1; done
+  die "$what did not open 127.0.0.1:$port in $seconds s."
 }
 
 # start_bg <pidfile> <logfile> <command...>: runs a command in its own process group.

@@ -62,7 +62,8 @@ e2e() {
   pnpm --filter @porestack/api run --silent seed >/dev/null || return 1
   start_bg "$REPO/.run/e2e-worker.pid" "$REPO/.run/e2e-worker.log" pnpm --filter @porestack/api run --silent worker
   start_bg "$REPO/.run/e2e-api.pid" "$REPO/.run/e2e-api.log" pnpm --filter @porestack/api run --silent start
-  wait_port "$E2E_PORT" "The portal (e2e)"
+  # tsx compiles the API at start: on a busy machine that alone can take well over 10 s.
+  wait_port "$E2E_PORT" "The portal (e2e)" 120
   E2E_BASE_URL="http://127.0.0.1:$E2E_PORT" pnpm --filter @porestack/web run e2e
 }
 suite "browser end-to-end tests" e2e
