@@ -96,11 +96,12 @@ drop_database() {
 # ── S3 fake and mail fake ─────────────────────────────────────────────────────
 port_open() { (exec 3<>"/dev/tcp/127.0.0.1/$1") 2>/dev/null; }
 
-# wait_port <port> <what> [seconds, default 10]
+# wait_port <port> <what>: up to 60 s. The portal (tsx compiling the API at start) took over 10 s
+# on two cores shared by several test runs; waiting longer costs nothing when it starts sooner.
 wait_port() {
-  local port=$1 what=$2 seconds=${3:-10} i
-  for i in $(seq 1 $((seconds * 10))); do port_open "$port" && return 0; sleep 0.1; done
-  die "$what did not open 127.0.0.1:$port in $seconds s."
+  local port=$1 what=$2 i
+  for i in $(seq 1 600); do port_open "$port" && return 0; sleep 0.1; done
+  die "$what did not open 127.0.0.1:$port in 60 s."
 }
 
 # start_bg <pidfile> <logfile> <command...>: runs a command in its own process group.

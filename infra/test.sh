@@ -1,8 +1,9 @@
 #!/usr/bin/env bash
-# npm test: the same set-up as npm start, on separate throw-away test services, then every
+# npm test: the same set-up as npm start, on separate throw-away test services, then the
+# type check (tsc -b over every package and app, tests included) and the lint (ESLint), then every
 # suite: unit (geo-core, types, web), API integration (real PostgreSQL, S3 fake, mail fake,
 # job worker) and browser end-to-end (Playwright driving Debian's Chromium).
-# Every suite runs even when an earlier one fails; the exit code is non-zero if any failed.
+# Every step runs even when an earlier one fails; the exit code is non-zero if any failed.
 set -uo pipefail
 source "$(dirname "$0")/lib.sh"
 cd "$REPO"
@@ -44,9 +45,14 @@ build_packages
 failed=()
 suite() {
   local name=$1; shift
+  local started=$SECONDS
   log "── $name"
-  if "$@"; then log "$name: passed"; else log "$name: FAILED"; failed+=("$name"); fi
+  if "$@"; then log "$name: passed ($((SECONDS - started)) s)"; else log "$name: FAILED ($((SECONDS - started)) s)"; failed+=("$name"); fi
 }
+
+# vitest strips types without checking them, so the compiler and the lint run first.
+suite "type check (tsc -b)" pnpm run --silent typecheck
+suite "lint (ESLint)" pnpm run --silent lint
 
 suite "geo-core unit tests" pnpm --filter @porestack/geo-core run test
 suite "types unit tests" pnpm --filter @porestack/types run test
@@ -56,14 +62,15 @@ suite "API integration tests" env DATABASE_URL="$TEST_DATABASE_URL" S3_BUCKET=po
 
 e2e() {
   pnpm --filter @porestack/web run build >/dev/null || return 1
+  # Every browser test signs people up from this one machine: lift the per-client limits.
   export DATABASE_URL="$E2E_DATABASE_URL" S3_BUCKET=porestack-e2e PORT="$E2E_PORT" \
-    PUBLIC_URL="http://127.0.0.1:$E2E_PORT" NODE_ENV=production
+    PUBLIC_URL="http://127.0.0.1:$E2E_PORT" NODE_ENV=production \
+    SIGN_UP_CLIENT_RATE_LIMIT=10000 SIGN_IN_CLIENT_RATE_LIMIT=10000 RESET_CLIENT_RATE_LIMIT=10000
   pnpm --filter @porestack/api run --silent migrate >/dev/null || return 1
   pnpm --filter @porestack/api run --silent seed >/dev/null || return 1
   start_bg "$REPO/.run/e2e-worker.pid" "$REPO/.run/e2e-worker.log" pnpm --filter @porestack/api run --silent worker
   start_bg "$REPO/.run/e2e-api.pid" "$REPO/.run/e2e-api.log" pnpm --filter @porestack/api run --silent start
-  # tsx compiles the API at start: on a busy machine that alone can take well over 10 s.
-  wait_port "$E2E_PORT" "The portal (e2e)" 120
+  wait_port "$E2E_PORT" "The portal (e2e)"
   E2E_BASE_URL="http://127.0.0.1:$E2E_PORT" pnpm --filter @porestack/web run e2e
 }
 suite "browser end-to-end tests" e2e

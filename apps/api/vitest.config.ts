@@ -15,6 +15,10 @@ export default defineConfig({
       // The minimum the app allows: keeps the suite fast, still a real bcrypt cost.
       BCRYPT_COST: '10',
       SIGN_IN_RATE_LIMIT: '5',
+      SIGN_IN_CLIENT_RATE_LIMIT: '8',
+      RESET_RATE_LIMIT: '3',
+      // Test browsers say which client they are in X-Forwarded-For (testing/browser.ts), as a proxy would.
+      TRUST_PROXY: 'loopback',
       // Damaged-file tests wait for the parse deadline: shorter than production's 20 s, long
       // enough for another organisation's import to be seen finishing first on a busy machine.
       IMPORT_PARSE_SECONDS: '12',

@@ -35,6 +35,8 @@ const DEFAULT_WEB_DIST = path.resolve(path.dirname(fileURLToPath(import.meta.url
 export interface AppOptions {
   /** Serve this built web app; by default apps/web/dist, in production only, when it was built. */
   webDist?: string;
+  /** Express's `trust proxy`; by default TRUST_PROXY, or none. */
+  trustProxy?: string | false;
 }
 
 /** The whole HTTP application, without listening; the data source must be initialised. */
@@ -42,7 +44,8 @@ export function createApp(options: AppOptions = {}): Express {
   const config = env();
   const app = express();
   app.disable('x-powered-by');
-  app.set('trust proxy', 'loopback');
+  // X-Forwarded-For is believed only from a configured proxy; otherwise the socket's address counts.
+  app.set('trust proxy', options.trustProxy ?? config.TRUST_PROXY ?? false);
 
   app.use(
     helmet({

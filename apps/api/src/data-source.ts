@@ -21,6 +21,9 @@ import { SoilRecordEntity } from './modules/soil-records/soil-record.entity.js';
 import { ImportProfileEntity } from './modules/import-profiles/import-profile.entity.js';
 import { ReadingEntity } from './modules/readings/reading.entity.js';
 import { UploadEntity } from './modules/uploads/upload.entity.js';
+import { SessionEntity } from './modules/sessions/session.entity.js';
+import { SignUpRequestEntity } from './modules/auth/sign-up-request.entity.js';
+import { TestContributionEntity } from './modules/consolidation-tests/test-contribution.entity.js';
 import { CharacteristicSetRevisionEntity } from './modules/characteristic-sets/characteristic-set-revision.entity.js';
 import { CharacteristicSetEntity } from './modules/characteristic-sets/characteristic-set.entity.js';
 import { GroundModelRevisionEntity } from './modules/ground-models/ground-model-revision.entity.js';
@@ -33,7 +36,10 @@ import { LabRecords1796180920952 } from './migrations/1796180920952-lab-records.
 import { ReadingsImport1796181181337 } from './migrations/1796181181337-readings-import.js';
 import { ReadingsOneForeignKey1796181664432 } from './migrations/1796181664432-readings-one-foreign-key.js';
 import { MembershipRoles1796313749156 } from './migrations/1796313749156-membership-roles.js';
-import { Design1796314148424 } from './migrations/1796314148424-design.js';
+import { SessionsAndRateLimits1796317586769 } from './migrations/1796317586769-sessions-and-rate-limits.js';
+import { SignUpRequests1796318744210 } from './migrations/1796318744210-sign-up-requests.js';
+import { TestContributions1796320068018 } from './migrations/1796320068018-test-contributions.js';
+import { Design1796323725979 } from './migrations/1796323725979-design.js';
 
 /**
  * The one DataSource (the TypeORM CLI requires exactly one export here). Entities and
@@ -46,10 +52,11 @@ export const dataSource = new DataSource({
   entities: [UserEntity, OrganisationEntity, MembershipEntity, InvitationEntity, PasswordResetTokenEntity, AuditEntryEntity,
     ProjectEntity, ProjectMemberEntity, BoreholeEntity, SampleEntity, ConsolidationTestEntity, AnalysisEntity, ReviewEventEntity,
     SoilRecordEntity, SoilRecordVersionEntity, SoilRecordSupersessionEntity, JobRunEntity,
-    UploadEntity, ReadingEntity, ImportProfileEntity,
+    UploadEntity, ReadingEntity, ImportProfileEntity, SessionEntity, SignUpRequestEntity, TestContributionEntity,
     GroundModelEntity, GroundModelRevisionEntity, CharacteristicSetEntity, CharacteristicSetRevisionEntity,
     SettlementCheckEntity, CheckRevisionEntity, FootingResultEntity],
-  migrations: [Init1796179339734, LabRecords1796180920952, ReadingsImport1796181181337, ReadingsOneForeignKey1796181664432, MembershipRoles1796313749156, Design1796314148424],
+  migrations: [Init1796179339734, LabRecords1796180920952, ReadingsImport1796181181337, ReadingsOneForeignKey1796181664432, MembershipRoles1796313749156,
+    SessionsAndRateLimits1796317586769, SignUpRequests1796318744210, TestContributions1796320068018, Design1796323725979],
   // gen_random_uuid() is built into PostgreSQL 13+, so no extension is needed on a managed server.
   uuidExtension: 'pgcrypto',
   synchronize: false,

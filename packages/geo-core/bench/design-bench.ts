@@ -61,3 +61,18 @@ const sublayers = first.footings[0]?.sublayers.length ?? 0;
 console.log(`settlement check: ${footings.length} footings × 5 points × ${sublayers} sublayers, neighbours included (Boussinesq)`);
 console.log(`first run ${firstMs.toFixed(0)} ms; median of 10 warm runs ${median.toFixed(0)} ms (fastest ${runs[0]!.toFixed(0)} ms, slowest ${runs[9]!.toFixed(0)} ms)`);
 console.log(`largest centre total ${Math.max(...first.footings.map((f) => f.totalM * 1000)).toFixed(1)} mm; ${first.pairs.length} pairs judged`);
+
+// The same grid with every footing a circle of the rectangles' width (issue 8's shapes): each neighbour's stress is
+// a rim integral whose number of points grows near the rim, and its immediate settlement a displacement integral.
+const circles: Footing[] = footings.map((footing) => ({ id: footing.id, shape: 'circle', xM: footing.xM, yM: footing.yM, widthM: footing.widthM, depthM: footing.depthM, loadKn: footing.loadKn ?? 0 }));
+const circleFirstStart = performance.now();
+runSettlementCheck({ profile, footings: circles, options });
+const circleFirstMs = performance.now() - circleFirstStart;
+const circleRuns: number[] = [];
+for (let run = 0; run < 5; run += 1) {
+  const start = performance.now();
+  runSettlementCheck({ profile, footings: circles, options });
+  circleRuns.push(performance.now() - start);
+}
+circleRuns.sort((a, b) => a - b);
+console.log(`the same grid as 100 circles: first run ${circleFirstMs.toFixed(0)} ms; median of 5 warm runs ${circleRuns[2]!.toFixed(0)} ms (fastest ${circleRuns[0]!.toFixed(0)} ms)`);

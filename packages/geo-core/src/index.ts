@@ -24,6 +24,9 @@ export type {
 export type { ConsolidationWarning, ConsolidationWarningCode } from './lab/consolidation-warning.js';
 export type { CompressionLine, StressVoidRatioLine, StressVoidRatioPoint } from './lab/compression-curve-types.js';
 export { heightOfSolidsMm } from './lab/height-of-solids.js';
+export { coefficientOfVolumeCompressibilityM2PerKn } from './lab/volume-compressibility.js';
+export type { VolumeCompressibilityInput } from './lab/volume-compressibility.js';
+export { hydraulicConductivityMPerS } from './lab/hydraulic-conductivity.js';
 export { voidRatioFromHeight } from './lab/void-ratio-from-height.js';
 export { apparatusDeflectionAtStress } from './lab/apparatus-deflection-at-stress.js';
 export { loadingKinds } from './lab/loading-kinds.js';
@@ -62,17 +65,27 @@ export type { DialGauge, DialReading } from './readings/dial-readings-to-deforma
 export { DAYS_PER_YEAR } from './constants/days-per-year.js';
 export { WATER_UNIT_WEIGHT_KN_PER_M3 } from './constants/water-unit-weight.js';
 
+export { carryPreconsolidationFromSample } from './profile/carry-preconsolidation-from-sample.js';
+export type { CarryPreconsolidationFromSampleInput, CarryPreconsolidationFromSampleResult } from './profile/carry-preconsolidation-from-sample.js';
+export { preconsolidationStressAtDepth } from './profile/preconsolidation-stress-at-depth.js';
+export { soilProfileWarnings } from './profile/soil-profile-warnings.js';
+export type { PreconsolidationStressAtDepth } from './profile/preconsolidation-stress-at-depth.js';
 export { splitIntoSublayers } from './profile/split-into-sublayers.js';
 export type { SublayerSpacing } from './profile/split-into-sublayers.js';
-export type { DrainageBoundary, SoilLayer, SoilProfile, Sublayer, VerticalStressState } from './profile/soil-profile.types.js';
+export type { DrainageBoundary, PreconsolidationBasis, SoilLayer, SoilProfile, Sublayer, VerticalStressState } from './profile/soil-profile.types.js';
 export { validateSoilProfile } from './profile/validate-soil-profile.js';
 export { verticalStressAtDepth } from './profile/vertical-stress-at-depth.js';
 
 export { cornerInfluenceFactor } from './stress/corner-influence-factor.js';
 export { footingPressureKpa } from './stress/footing-pressure.js';
-export type { Footing, FootingLoad, StressMethod } from './stress/footing.types.js';
+export type { Footing, FootingLoad, FootingPlan, FootingShape, PressureBasis, StressMethod } from './stress/footing.types.js';
+export { netFootingPressure } from './stress/net-footing-pressure.js';
+export { overlappingFootingPairs } from './stress/overlapping-footing-pairs.js';
+export type { NetFootingPressure } from './stress/net-footing-pressure.js';
 export { stressIncrease2to1 } from './stress/stress-increase-2to1.js';
 export type { StressIncrease2to1Input } from './stress/stress-increase-2to1.js';
+export { stressIncrease2to1Circle } from './stress/stress-increase-2to1-circle.js';
+export type { StressIncrease2to1CircleInput } from './stress/stress-increase-2to1-circle.js';
 export { stressIncrease2to1Strip } from './stress/stress-increase-2to1-strip.js';
 export type { StressIncrease2to1StripInput } from './stress/stress-increase-2to1-strip.js';
 export { stressIncreaseCircle } from './stress/stress-increase-circle.js';
@@ -86,6 +99,8 @@ export type { StressIncreaseStripInput } from './stress/stress-increase-strip.js
 
 export { ANGULAR_DISTORTION_LIMITS } from './settlement/angular-distortion-limits.js';
 export type { AngularDistortionLimit } from './settlement/angular-distortion-limits.js';
+export { TOTAL_SETTLEMENT_LIMITS } from './settlement/total-settlement-limits.js';
+export type { TotalSettlementLimit } from './settlement/total-settlement-limits.js';
 export { elasticInfluenceFactor } from './settlement/elastic-influence-factor.js';
 export type { ElasticSettlementPosition } from './settlement/elastic-influence-factor.js';
 export { footingPairResults } from './settlement/footing-pair-results.js';
@@ -107,6 +122,7 @@ export type { UniformLoadSettlementInput, UniformLoadSettlementResult } from './
 export { secondaryCompressionSettlement } from './settlement/secondary-compression-settlement.js';
 export type { SecondaryCompressionSettlementInput } from './settlement/secondary-compression-settlement.js';
 export type {
+  EvaluationPointLabel,
   FootingPairResult,
   FootingSettlementResult,
   LayerParametersUsed,
@@ -128,6 +144,10 @@ export { settlementAtTime } from './time-rate/settlement-at-time.js';
 export type { SettlementAtTimeResult } from './time-rate/settlement-at-time.js';
 export { settlementTimeCurve } from './time-rate/settlement-time-curve.js';
 export type { SettlementTimePoint } from './time-rate/settlement-time-curve.js';
+export { cvAtStressRange, CV_AT_STRESS_RANGE_CONVENTION } from './time-rate/cv-at-stress-range.js';
+export type { CvAtStressRangeInput, CvAtStressRangeResult, CvStressPoint } from './time-rate/cv-at-stress-range.js';
+export { cvPointsFromTestResult } from './lab/cv-points-from-test-result.js';
+export type { CvIncrement } from './lab/cv-points-from-test-result.js';
 export { timeForPrimaryShare } from './time-rate/time-for-primary-share.js';
 export type { TimeForPrimaryShareResult } from './time-rate/time-for-primary-share.js';
 

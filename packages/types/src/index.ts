@@ -1,6 +1,40 @@
 export { ROLES, RoleSchema, RolesSchema, ROLE_LABELS, LAB_STAFF_ROLES, canonicalRoles, holdsAnyRole, roleList } from './roles.js';
 export type { Role } from './roles.js';
 export { ROLE_ACCESS } from './role-access.js';
+export type { Assert, DeepWritable, MatchesSource, SameShape, ShapeDifference } from './type-contract.js';
+export {
+  ConsolidationTestResultSchema,
+  ConsolidationIncrementResultSchema,
+  TaylorIncrementResultSchema,
+  CasagrandeIncrementResultSchema,
+  CompressionIndexFitSchema,
+  RecompressionIndexFitSchema,
+  CasagrandePreconsolidationConstructionSchema,
+  PachecoSilvaPreconsolidationConstructionSchema,
+  AppliedPickSchema,
+  ConsolidationWarningSchema,
+  CONSOLIDATION_WARNING_CODES,
+  StressVoidRatioPointSchema,
+  StressVoidRatioLineSchema,
+  TimeCurvePointSchema,
+  TimeCurveLineSchema,
+} from './lab/consolidation-result.js';
+export type {
+  ConsolidationTestResult,
+  ConsolidationIncrementResult,
+  TaylorIncrementResult,
+  CasagrandeIncrementResult,
+  CompressionIndexFit,
+  RecompressionIndexFit,
+  CasagrandePreconsolidationConstruction,
+  PachecoSilvaPreconsolidationConstruction,
+  AppliedPick,
+  ConsolidationWarning,
+  StressVoidRatioPoint,
+  StressVoidRatioLine,
+  TimeCurvePoint,
+  TimeCurveLine,
+} from './lab/consolidation-result.js';
 export {
   TEST_STATUSES,
   TestStatusSchema,
@@ -17,15 +51,18 @@ export { ApiErrorSchema, API_ERROR_CODES } from './errors.js';
 export type { ApiError, ApiErrorCode } from './errors.js';
 export {
   SignUpSchema,
+  SignUpConfirmSchema,
+  SignUpSentSchema,
   SignInSchema,
   PasswordResetRequestSchema,
   PasswordResetConfirmSchema,
+  PASSWORD_MAX_BYTES,
   UserSchema,
   MembershipSchema,
   SessionSchema,
   CsrfTokenSchema,
 } from './auth.js';
-export type { SignUp, SignIn, PasswordResetRequest, PasswordResetConfirm, User, Membership, Session, CsrfToken } from './auth.js';
+export type { SignUp, SignUpConfirm, SignUpSent, SignIn, PasswordResetRequest, PasswordResetConfirm, User, Membership, Session, CsrfToken } from './auth.js';
 export {
   MemberSchema,
   InvitationCreateSchema,
@@ -153,6 +190,8 @@ export {
   DrainageBoundarySchema,
   LayerSourceInputSchema,
   PRECONSOLIDATION_CARRIES,
+  CV_BASES,
+  CvBasisSchema,
   PreconsolidationCarrySchema,
   RECOMPRESSION_INDEX_KINDS,
   RecompressionIndexKindSchema,
@@ -177,6 +216,7 @@ export type {
   DrainageBoundaryKind,
   LayerSourceInput,
   PreconsolidationCarry,
+  CvBasis,
   CompressibleParametersInput,
   GroundModelLayerInput,
   GroundModelContentInput,

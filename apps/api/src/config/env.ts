@@ -23,10 +23,22 @@ const EnvSchema = z.object({
   MAIL_FROM: z.string().default('Porestack <no-reply@porestack.test>'),
   /** bcrypt work factor; 12 unless set. Never below 10. */
   BCRYPT_COST: z.coerce.number().int().min(10).max(15).default(12),
-  /** Failed sign-ins allowed per IP and e-mail within the window, then 429. */
+  /** Failed sign-ins allowed per account (e-mail) within the window, then 429 until it ends. */
   SIGN_IN_RATE_LIMIT: z.coerce.number().int().positive().default(10),
+  /** Failed sign-ins allowed per client address within the window, whatever the accounts. */
+  SIGN_IN_CLIENT_RATE_LIMIT: z.coerce.number().int().positive().default(20),
   SIGN_IN_RATE_WINDOW_MINUTES: z.coerce.number().int().positive().default(15),
   SESSION_DAYS: z.coerce.number().int().positive().default(7),
+  /** Password-reset requests per e-mail address, and per client address, per hour. */
+  RESET_RATE_LIMIT: z.coerce.number().int().positive().default(5),
+  RESET_CLIENT_RATE_LIMIT: z.coerce.number().int().positive().default(20),
+  /** Sign-ups per client address per hour. */
+  SIGN_UP_CLIENT_RATE_LIMIT: z.coerce.number().int().positive().default(20),
+  /**
+   * Express's `trust proxy`: which proxies' X-Forwarded-For to believe for the client's
+   * address (e.g. "loopback" behind a local reverse proxy, or its address). Unset: none.
+   */
+  TRUST_PROXY: z.string().optional(),
   LOG_LEVEL: z.enum(['fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent']).optional(),
   /** Largest readings file one upload may be, in MB (the upload is refused with 413 above it). */
   IMPORT_MAX_FILE_MB: z.coerce.number().positive().default(40),

@@ -3,16 +3,20 @@ import type { Request } from 'express';
 import { dataSource } from '../data-source.js';
 import { DomainError, NotFoundError } from '../errors/domain-error.js';
 import { MembershipEntity } from '../modules/organisations/membership.entity.js';
-import { UserEntity } from '../modules/users/user.entity.js';
+import { userOfSession } from '../modules/sessions/sessions.service.js';
+import type { UserEntity } from '../modules/users/user.entity.js';
 import { UUID_PATTERN } from './params.js';
 import type { TenantContext } from './request-context.js';
 import { readSessionClaims } from './session-cookie.js';
 
-/** The user of a valid session cookie; a changed password (newer session_version) ends older sessions. */
+/**
+ * The user of a valid session cookie whose server-side session is live: signed out, expired
+ * or issued before a password change (newer session_version) is refused.
+ */
 export async function authenticate(req: Request): Promise<UserEntity> {
   const claims = readSessionClaims(req);
-  const user = claims ? await dataSource.getRepository(UserEntity).findOneBy({ id: claims.sub }) : null;
-  if (!claims || !user || user.sessionVersion !== claims.ver) {
+  const user = claims ? await userOfSession(claims.sid, claims.sub, claims.ver) : null;
+  if (!claims || !user) {
     throw new DomainError('unauthenticated', 'You are not signed in, or your session has ended. Sign in and try again.');
   }
   return user;

@@ -1,12 +1,16 @@
 import type { Request, Response } from 'express';
 import jwt from 'jsonwebtoken';
 import { env } from '../config/env.js';
+import { startSession } from '../modules/sessions/sessions.service.js';
+import { UUID_PATTERN } from './params.js';
 
 export const SESSION_COOKIE = 'porestack_session';
 
 interface SessionClaims {
   /** user id */
   sub: string;
+  /** the server-side session (sessions table) */
+  sid: string;
   /** the user's session_version when the token was issued */
   ver: number;
 }
@@ -20,27 +24,36 @@ function cookieOptions() {
   return { httpOnly: true, sameSite: 'lax' as const, secure: isSecureOrigin(), path: '/' };
 }
 
-export function setSessionCookie(res: Response, user: { id: string; sessionVersion: number }): void {
+function setSessionCookie(res: Response, user: { id: string; sessionVersion: number }, sessionId: string): void {
   const config = env();
-  const claims: SessionClaims = { sub: user.id, ver: user.sessionVersion };
+  const claims: SessionClaims = { sub: user.id, sid: sessionId, ver: user.sessionVersion };
   const token = jwt.sign(claims, config.JWT_SECRET, { algorithm: 'HS256', expiresIn: `${config.SESSION_DAYS}d` });
   res.cookie(SESSION_COOKIE, token, { ...cookieOptions(), maxAge: config.SESSION_DAYS * 24 * 3600 * 1000 });
+}
+
+/** Starts a server-side session for the user and sets its cookie (sign-up, sign-in, accepting an invitation). */
+export async function openSession(res: Response, user: { id: string; sessionVersion: number }): Promise<void> {
+  const session = await startSession(user.id);
+  setSessionCookie(res, user, session.id);
 }
 
 export function clearSessionCookie(res: Response): void {
   res.clearCookie(SESSION_COOKIE, cookieOptions());
 }
 
-/** The claims of a valid, unexpired session cookie, or null. */
+/**
+ * The claims of a valid, unexpired session cookie, or null. A token must carry an expiry,
+ * and user and session ids that are uuids: anything else is no session (never a 500).
+ */
 export function readSessionClaims(req: Request): SessionClaims | null {
   const token: unknown = req.cookies?.[SESSION_COOKIE];
   if (typeof token !== 'string' || token === '') return null;
   try {
     const payload = jwt.verify(token, env().JWT_SECRET, { algorithms: ['HS256'] });
-    if (typeof payload === 'object' && typeof payload.sub === 'string' && typeof payload['ver'] === 'number') {
-      return { sub: payload.sub, ver: payload['ver'] };
-    }
-    return null;
+    if (typeof payload !== 'object' || typeof payload.exp !== 'number') return null;
+    const { sub, sid, ver } = payload as { sub?: unknown; sid?: unknown; ver?: unknown };
+    if (typeof sub !== 'string' || !UUID_PATTERN.test(sub) || typeof sid !== 'string' || !UUID_PATTERN.test(sid) || !Number.isInteger(ver)) return null;
+    return { sub, sid, ver: ver as number };
   } catch {
     return null;
   }

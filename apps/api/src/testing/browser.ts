@@ -1,9 +1,10 @@
-import { randomUUID } from 'node:crypto';
+import { randomBytes, randomUUID } from 'node:crypto';
 import { canonicalRoles, type Role, type Session } from '@porestack/types';
 import type { Express } from 'express';
 import request from 'supertest';
 import { dataSource } from '../data-source.js';
 import { MembershipEntity } from '../modules/organisations/membership.entity.js';
+import { createAccount } from '../modules/auth/auth.service.js';
 import { hashPassword } from '../modules/users/passwords.js';
 import { UserEntity } from '../modules/users/user.entity.js';
 
@@ -27,8 +28,17 @@ export interface Browser {
   delete(url: string): request.Test;
 }
 
-export async function openBrowser(app: Express): Promise<Browser> {
-  const agent = request.agent(app);
+/**
+ * Each browser is its own client, as if behind the portal's reverse proxy (TRUST_PROXY is
+ * loopback in tests): per-client rate limits then count one test's requests, not the suite's.
+ */
+export function clientAddress(): string {
+  const octets = randomBytes(3);
+  return `10.${octets[0]}.${octets[1]}.${octets[2]}`;
+}
+
+export async function openBrowser(app: Express, address = clientAddress()): Promise<Browser> {
+  const agent = request.agent(app).set('X-Forwarded-For', address);
   const res = await agent.get('/api/auth/csrf').expect(200);
   const csrfToken = (res.body as { csrfToken: string }).csrfToken;
   return {
@@ -51,16 +61,20 @@ export interface SignedUpAdmin {
   email: string;
 }
 
-/** Signs up through the API: a new user who is admin of a new organisation. */
-export async function signUpAdmin(app: Express, label = 'admin'): Promise<SignedUpAdmin> {
-  const browser = await openBrowser(app);
+/**
+ * A new user who is admin of a new organisation, signed in through the API. The account is
+ * made as a confirmed sign-up makes it (createAccount); the e-mailed sign-up itself has its
+ * own tests (sign-up.test.ts), which need the mail worker.
+ */
+export async function signUpAdmin(app: Express, label = 'admin', password = TEST_PASSWORD): Promise<SignedUpAdmin> {
   const email = uniqueEmail(label);
-  const res = await browser
-    .post('/api/auth/sign-up', { name: `Test ${label}`, email, password: TEST_PASSWORD, organisationName: `Org of ${label}` })
-    .expect(201);
+  const passwordHash = password === TEST_PASSWORD ? await (testPasswordHash ??= hashPassword(TEST_PASSWORD)) : await hashPassword(password);
+  await createAccount({ name: `Test ${label}`, email, organisationName: `Org of ${label}` }, passwordHash);
+  const browser = await openBrowser(app);
+  const res = await browser.post('/api/auth/sign-in', { email, password }).expect(200);
   const session = res.body as Session;
   const orgId = session.memberships[0]?.organisationId;
-  if (!orgId) throw new Error('sign-up answered without a membership');
+  if (!orgId) throw new Error('sign-in answered without a membership');
   return { browser, session, orgId, email };
 }
 

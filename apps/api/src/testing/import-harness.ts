@@ -5,18 +5,24 @@ import { dataSource } from '../data-source.js';
 import { analyseTestJob } from '../jobs/analyse-test.job.js';
 import { BOSS_SCHEMA, createBoss } from '../jobs/boss.js';
 import { importReadingsJob } from '../jobs/import-readings.job.js';
+import type { JobDefinition } from '../jobs/job-definition.js';
 import { registerJobs } from '../jobs/register-jobs.js';
 import { bucketName, ensureBucket, storage } from '../storage/storage.js';
 import type { Browser } from './browser.js';
 
-/** A pg-boss worker working the import and analysis queues, as the worker process does. */
-export async function startImportWorker(): Promise<PgBoss> {
+/** A pg-boss worker in this process working the given queues, as the worker process does. */
+export async function startWorker(jobs: JobDefinition[]): Promise<PgBoss> {
   await ensureBucket();
   const boss = createBoss();
   boss.on('error', () => undefined);
   await boss.start();
-  await registerJobs(boss, [importReadingsJob, analyseTestJob]);
+  await registerJobs(boss, jobs);
   return boss;
+}
+
+/** A worker of the import and analysis queues. */
+export function startImportWorker(): Promise<PgBoss> {
+  return startWorker([importReadingsJob, analyseTestJob]);
 }
 
 /**

@@ -28,6 +28,11 @@ export const routes: RouteObject[] = [
           { path: paths.signIn.pattern, lazy: () => import('./routes/sign-in-route').then((m) => ({ Component: m.SignInRoute })), ErrorBoundary: RouteErrorBoundary },
           { path: paths.signUp.pattern, lazy: () => import('./routes/sign-up-route').then((m) => ({ Component: m.SignUpRoute })), ErrorBoundary: RouteErrorBoundary },
           {
+            path: paths.finishSignUp.pattern,
+            lazy: () => import('./routes/finish-sign-up-route').then((m) => ({ Component: m.FinishSignUpRoute })),
+            ErrorBoundary: RouteErrorBoundary,
+          },
+          {
             path: paths.forgotPassword.pattern,
             lazy: () => import('./routes/forgot-password-route').then((m) => ({ Component: m.ForgotPasswordRoute })),
             ErrorBoundary: RouteErrorBoundary,

@@ -6,6 +6,8 @@ export const paths = {
   root: { pattern: '/', to: () => '/' },
   signIn: { pattern: '/sign-in', to: () => '/sign-in' },
   signUp: { pattern: '/sign-up', to: () => '/sign-up' },
+  /** The link in the sign-up e-mail: `/finish-sign-up?token=…`. */
+  finishSignUp: { pattern: '/finish-sign-up', to: () => '/finish-sign-up' },
   forgotPassword: { pattern: '/forgot-password', to: () => '/forgot-password' },
   /** The link in the password-reset e-mail: `/reset-password?token=…`. */
   resetPassword: { pattern: '/reset-password', to: () => '/reset-password' },
@@ -46,6 +48,7 @@ export const apiPaths = {
   session: '/api/auth/session',
   signIn: '/api/auth/sign-in',
   signUp: '/api/auth/sign-up',
+  signUpConfirm: '/api/auth/sign-up/confirm',
   signOut: '/api/auth/sign-out',
   passwordResetRequest: '/api/auth/password-reset/request',
   passwordResetConfirm: '/api/auth/password-reset/confirm',

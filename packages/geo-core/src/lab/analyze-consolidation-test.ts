@@ -1,6 +1,6 @@
-import { DAYS_PER_YEAR } from '../constants/days-per-year.js';
 import { GEO_CORE_VERSION } from '../constants/geo-core-version.js';
 import { WATER_UNIT_WEIGHT_KN_PER_M3 } from '../constants/water-unit-weight.js';
+import { hydraulicConductivityMPerS as conductivityFromCvAndMv } from './hydraulic-conductivity.js';
 import { analyzeIncrementTimeCurves } from './analyze-increment-time-curves.js';
 import { apparatusDeflectionAtStress } from './apparatus-deflection-at-stress.js';
 import { branchFits, type PathPoint } from './branch-fits.js';
@@ -14,8 +14,6 @@ import { loadingKinds } from './loading-kinds.js';
 import { preconsolidationAndCompression } from './preconsolidation-and-compression.js';
 import { resolveDryMass } from './resolve-dry-mass.js';
 import { sampleQualityAtInSituStress } from './sample-quality-at-in-situ-stress.js';
-
-const SECONDS_PER_YEAR = DAYS_PER_YEAR * 86400;
 
 /**
  * Reduce an incremental-loading oedometer test (ASTM D2435/D2435M-11, 2020)
@@ -127,7 +125,7 @@ export function analyzeConsolidationTest(input: ConsolidationTestInput): Consoli
     const secondaryCompressionIndex = tailSlope === null ? null : tailSlope / solidsMm;
     const cvForK = taylor?.cvM2PerYr ?? casagrande?.cvM2PerYr ?? null;
     const hydraulicConductivityMPerS =
-      cvForK === null || mvPerMPa === null ? null : (cvForK / SECONDS_PER_YEAR) * (mvPerMPa / 1000) * WATER_UNIT_WEIGHT_KN_PER_M3;
+      cvForK === null || mvPerMPa === null || !(mvPerMPa >= 0) ? null : conductivityFromCvAndMv(cvForK, mvPerMPa / 1000, WATER_UNIT_WEIGHT_KN_PER_M3);
     results.push({
       index: increment.index,
       stressKpa: increment.stressKpa,

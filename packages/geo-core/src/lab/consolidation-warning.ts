@@ -5,6 +5,7 @@ export type ConsolidationWarningCode =
   | 'no-unload-branch'
   | 'no-recompression-branch'
   | 'primary-not-reached'
+  | 'short-secondary-line'
   | 'time-curve-not-drawn'
   | 'time-curves-not-applied'
   | 'non-monotonic-time'

@@ -85,7 +85,7 @@ describe('sampleQualityLunne(voidRatioChangeRatio, overconsolidationRatio)', () 
     [0.14, 1.5, 'very poor'],
     [0.04, 3, 'good to fair'],
     [0.05, 3, 'poor'],
-  ] as const)('puts Δe/e0 = %s at OCR %s in "%s" (table from memory; a boundary falls in the worse category)', (ratio, ocr, category) => {
+  ] as const)('puts Δe/e0 = %s at OCR %s in "%s" (worked by hand from the bands the function states; a boundary falls in the worse category)', (ratio, ocr, category) => {
     expect(sampleQualityLunne(ratio, ocr)?.category).toBe(category);
   });
 

@@ -22,10 +22,10 @@ export interface SampleQualityAssessment {
  * poor, > 0.14 very poor; OCR 2–4: 0.03, 0.05, 0.10. Convention: a value on a
  * boundary falls in the worse category (each band is [lower, upper)). OCR below
  * 1 (a σ′p under the in-situ stress, itself a sign of disturbance) uses the
- * 1–2 row. Table as recalled from memory of Lunne, T., Berre, T. & Strandvik,
- * S. (1997) Sample disturbance effects in soft low plastic Norwegian clay,
- * Proc. Symp. Recent Developments in Soil and Pavement Mechanics, Rio de
- * Janeiro, 81–102.
+ * 1–2 row. Criteria of Lunne, T., Berre, T. & Strandvik, S. (1997) Sample
+ * disturbance effects in soft low plastic Norwegian clay, Proc. Symp. Recent
+ * Developments in Soil and Pavement Mechanics, Rio de Janeiro, 81–102, as the
+ * literature quotes them; the paper was not at hand to check them against.
  *
  * @param voidRatioChangeRatio Δe/e0, dimensionless.
  * @param overconsolidationRatio OCR = σ′p/σ′v0 (> 0).

@@ -23,10 +23,20 @@ export interface SoilLayer {
   readonly cc?: number;
   /** Recompression (Cr) or swell (Cs) index used on the overconsolidated branch, dimensionless. */
   readonly cs?: number;
-  /** Preconsolidation stress σ′p, kPa, taken as constant through the layer. Give this or ocr. */
+  /**
+   * Preconsolidation stress σ′p, kPa, taken as constant through the layer.
+   * Give at most one of preconsolidationKpa, ocr and preOverburdenPressureKpa;
+   * none: normally consolidated (with a warning).
+   */
   readonly preconsolidationKpa?: number;
-  /** Overconsolidation ratio σ′p/σ′v0, applied at every depth of the layer. Give this or preconsolidationKpa. */
+  /** Overconsolidation ratio σ′p/σ′v0 (≥ 1), applied at every depth of the layer: σ′p = OCR·σ′v0. */
   readonly ocr?: number;
+  /**
+   * Pre-overburden pressure POP = σ′p − σ′v0, kPa (≥ 0), constant through the
+   * layer: σ′p = σ′v0 + POP at every depth — the usual picture of a crust or a
+   * layer once loaded by ground since removed, where σ′p runs parallel to σ′v0.
+   */
+  readonly preOverburdenPressureKpa?: number;
   /**
    * Coefficient of volume compressibility mv over the stress range the layer
    * will see, m²/kN (1 m²/MN = 0.001 m²/kN). Used only where cc is not given:
@@ -47,12 +57,26 @@ export interface SoilLayer {
   readonly drainageBottom?: DrainageBoundary;
 }
 
+/**
+ * How σ′p is carried through a compressible layer: a constant stress, a
+ * constant OCR, a constant POP (σ′p − σ′v0), or — none given — the layer is
+ * taken as normally consolidated (σ′p = σ′v0), the cautious choice.
+ */
+export type PreconsolidationBasis = 'preconsolidation-stress' | 'ocr' | 'pre-overburden-pressure' | 'assumed-normally-consolidated';
+
 /** The ground model of one site: level, water table and layers from the top down. */
 export interface SoilProfile {
   /** Elevation of ground level, m (reported only; depths are measured from here). */
   readonly groundLevelM: number;
   /** Depth of the water table below ground level, m (≥ 0); hydrostatic pore pressure below it. */
   readonly waterTableDepthM: number;
+  /**
+   * Unit weight of the pore water γw, kN/m³ (9 ≤ γw ≤ 10.5). Default
+   * WATER_UNIT_WEIGHT_KN_PER_M3 = 9.81; some references and exam papers use 10.
+   * Every pore pressure and effective stress of the profile, the settlement
+   * check and the sizing functions is worked out with it.
+   */
+  readonly waterUnitWeightKnPerM3?: number;
   readonly layers: readonly SoilLayer[];
 }
 

@@ -22,6 +22,18 @@ describe('verticalStressAtDepth(profile, depthM)', () => {
     expect(state.effectiveStressKpa).toBeCloseTo(74.76, 12);
   });
 
+  it('takes γw from the profile where given: with 10 kN/m³, u = 40 kPa at 6 m', () => {
+    // Hand calculation at 6 m: σv = 114 kPa as above; u = 4 × 10 = 40 kPa; σ′v = 74 kPa.
+    const state = verticalStressAtDepth({ ...profile, waterUnitWeightKnPerM3: 10 }, 6);
+    expect(state.totalStressKpa).toBeCloseTo(114, 12);
+    expect(state.porePressureKpa).toBeCloseTo(40, 12);
+    expect(state.effectiveStressKpa).toBeCloseTo(74, 12);
+  });
+
+  it('uses WATER_UNIT_WEIGHT_KN_PER_M3 = 9.81 when γw is not given', () => {
+    expect(verticalStressAtDepth(profile, 6)).toEqual(verticalStressAtDepth({ ...profile, waterUnitWeightKnPerM3: 9.81 }, 6));
+  });
+
   it('has no pore pressure above the water table', () => {
     expect(verticalStressAtDepth(profile, 1.5)).toEqual({ totalStressKpa: 27, porePressureKpa: 0, effectiveStressKpa: 27 });
   });
@@ -34,6 +46,9 @@ describe('verticalStressAtDepth(profile, depthM)', () => {
   it('throws RangeError below the profile or for a negative depth', () => {
     expect(() => verticalStressAtDepth(profile, 8.5)).toThrow(new RangeError('verticalStressAtDepth requires a depth within the profile (bottom at 8 m)'));
     expect(() => verticalStressAtDepth(profile, -1)).toThrow(new RangeError('verticalStressAtDepth requires a finite depthM >= 0'));
+    expect(() => verticalStressAtDepth({ ...profile, waterUnitWeightKnPerM3: 62.4 }, 6)).toThrow(
+      new RangeError('verticalStressAtDepth requires waterUnitWeightKnPerM3 between 9 and 10.5 kN/m³'),
+    );
   });
 });
 
@@ -65,9 +80,10 @@ describe('validateSoilProfile(profile, caller)', () => {
   it.each([
     [{ ...profile, waterTableDepthM: -1 }, 'test requires a finite waterTableDepthM >= 0'],
     [{ ...profile, layers: [] }, 'test requires at least one soil layer'],
+    [{ ...profile, waterUnitWeightKnPerM3: 62.4 }, 'test requires waterUnitWeightKnPerM3 between 9 and 10.5 kN/m³ (9.81 for fresh water, or 10 where the reference rounds it)'],
     [{ ...profile, layers: [{ ...profile.layers[0]!, thicknessM: 0 }] }, 'test requires thicknessM > 0 in layer 1 (sand)'],
     [{ ...profile, layers: [{ ...profile.layers[1]!, ocr: 0.8 }] }, 'test requires ocr >= 1 in layer 1 (clay)'],
-    [{ ...profile, layers: [{ ...profile.layers[1]!, ocr: 2, preconsolidationKpa: 100 }] }, 'test requires either ocr or preconsolidationKpa, not both, in layer 1 (clay)'],
+    [{ ...profile, layers: [{ ...profile.layers[1]!, ocr: 2, preconsolidationKpa: 100 }] }, 'test requires only one of preconsolidationKpa, ocr and preOverburdenPressureKpa in layer 1 (clay)'],
     [{ ...profile, layers: [{ ...profile.layers[1]!, cvM2PerYr: 2 }] }, 'test requires drainageTop and drainageBottom wherever cvM2PerYr is given, in layer 1 (clay)'],
     [{ ...profile, layers: [{ ...profile.layers[1]!, poissonRatio: 0.7 }] }, 'test requires 0 <= poissonRatio <= 0.5 in layer 1 (clay)'],
     [{ ...profile, layers: [{ ...profile.layers[0]!, cc: 0.3 }] }, 'test requires e0 wherever cc is given, in layer 1 (sand)'],

@@ -13,7 +13,9 @@ export interface AngularDistortionLimit {
  * Bjerrum (1963), Proc. European Conf. SMFE Wiesbaden, vol. 2, discussion
  * (the chart of limiting angular distortions); Skempton & MacDonald (1956),
  * "The allowable settlements of buildings", Proc. ICE 5(3):727–768.
- * Values as in domain.md (from memory).
+ * The figures are those quoted in the textbooks (e.g. Das, *Principles of
+ * Foundation Engineering*, tolerable settlement of buildings); the original
+ * papers were not at hand to check them against.
  */
 export const ANGULAR_DISTORTION_LIMITS: readonly AngularDistortionLimit[] = [
   { source: 'Bjerrum (1963)', angularDistortion: 1 / 750, ratioLabel: '1/750', description: 'difficulties with machinery sensitive to settlement' },

@@ -1,10 +1,14 @@
+import type { FootingShape } from '../stress/footing.types.js';
+
 /** Where on the footing the settlement is wanted, or a rigid footing's uniform settlement. */
 export type ElasticSettlementPosition = 'centre' | 'corner' | 'average' | 'rigid';
 
-// Rigid-footing factors αr against L/B from the published table (Das, *Principles
+// Rigid-footing factors αr against L/B as the textbooks tabulate them (Das, *Principles
 // of Foundation Engineering*, table of α, αav and αr for shallow foundations on
-// an elastic half-space; values from memory). No closed form exists for a rigid
-// rectangle; beyond the last row the function answers null rather than extrapolate.
+// an elastic half-space), quoted without the book at hand: they are not checked
+// against it here, only against the bounds every rigid factor must keep (between
+// the flexible corner and average values, tested). No closed form exists for a
+// rigid rectangle; beyond the last row the function answers null rather than extrapolate.
 const RIGID_FACTOR_TABLE: ReadonlyArray<readonly [number, number]> = [
   [1, 0.88],
   [1.5, 1.08],
@@ -22,20 +26,26 @@ const RIGID_FACTOR_TABLE: ReadonlyArray<readonly [number, number]> = [
  * - flexible, centre: twice the corner value (four corner rectangles of half size);
  * - flexible, average: (2/π)·[ln(m + √(1 + m²)) + m·ln((1 + √(1 + m²))/m) + (1 + m³ − (1 + m²)^1.5)/(3m)];
  * - rigid: the published table, interpolated linearly in L/B, 1 ≤ L/B ≤ 10.
- * For a circle (B the diameter) the exact values are centre 1, edge 2/π,
- * average 8/(3π) and rigid π/4 (Boussinesq's rigid punch).
+ * A square is the rectangle with L/B = 1. For a circle (B the diameter) the
+ * exact values are centre 1, edge 2/π, average 8/(3π) and rigid π/4
+ * (Boussinesq's rigid punch; Timoshenko & Goodier, *Theory of Elasticity*, the
+ * uniformly loaded circular area). A strip on a half-space settles without
+ * bound (the plane-strain displacement grows like the logarithm of depth), so
+ * it has no α: null — use a finite layer (immediateSettlementFiniteLayer).
  *
- * Published check values (square): centre 1.122, corner 0.561, average 0.946,
- * rigid 0.88 (Das, *Principles of Foundation Engineering*, from memory).
+ * Values for a square: centre 1.1222, corner 0.5611, average 0.9464 (the
+ * closed forms, worked by hand in the tests); rigid 0.88 (the table).
  *
- * @param shape 'rectangle' (then lengthToWidthRatio = L/B ≥ 1) or 'circle'
- * @param lengthToWidthRatio L/B, dimensionless (ignored for a circle)
+ * @param shape 'rectangle' (then lengthToWidthRatio = L/B ≥ 1), 'square', 'circle' or 'strip'
+ * @param lengthToWidthRatio L/B, dimensionless (read for a rectangle only)
  * @param position 'centre' | 'corner' (the edge for a circle) | 'average' | 'rigid'
- * @returns α, dimensionless; null for a rigid rectangle beyond L/B = 10, where the table stops
+ * @returns α, dimensionless; null for a rigid rectangle beyond L/B = 10, where the table stops, and for a strip
  * @throws RangeError when L/B < 1 or not finite for a rectangle
  * @example elasticInfluenceFactor('rectangle', 1, 'centre') // 1.1222
  */
-export function elasticInfluenceFactor(shape: 'rectangle' | 'circle', lengthToWidthRatio: number, position: ElasticSettlementPosition): number | null {
+export function elasticInfluenceFactor(shape: FootingShape, lengthToWidthRatio: number, position: ElasticSettlementPosition): number | null {
+  if (shape === 'strip') return null;
+  if (shape === 'square') return elasticInfluenceFactor('rectangle', 1, position);
   if (shape === 'circle') {
     const circle: Record<ElasticSettlementPosition, number> = { centre: 1, corner: 2 / Math.PI, average: 8 / (3 * Math.PI), rigid: Math.PI / 4 };
     return circle[position];

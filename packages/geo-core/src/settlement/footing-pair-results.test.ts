@@ -4,7 +4,7 @@ import type { FootingSettlementResult } from './settlement-check.types.js';
 
 // Only the fields the pair judgement reads matter here; the rest are filled with zeros.
 const result = (id: string, xM: number, totalM: number): FootingSettlementResult => ({
-  id, xM, yM: 0, widthM: 2, lengthM: 2, depthM: 1, pressureKpa: 100, loadKn: 400, immediateDepthFactor: 1,
+  id, shape: 'square', xM, yM: 0, widthM: 2, lengthM: 2, depthM: 1, pressureBasis: 'net', pressureKpa: 100, grossPressureKpa: null, overburdenRemovedKpa: null, loadKn: 400, loadKnPerM: null, immediateDepthFactor: 1,
   immediateM: 0, primaryM: totalM, secondaryM: 0, totalM, points: [], sublayers: [], primaryByLayer: [], timeCurve: [],
   timeTo50PercentYears: null, timeTo90PercentYears: null, withinTotalLimit: null,
 });

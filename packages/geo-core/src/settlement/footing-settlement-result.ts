@@ -1,11 +1,11 @@
-import type { PreparedFooting } from '../stress/footing-stress-contribution.js';
+import type { PreparedFooting } from '../stress/prepared-footing.js';
 import type { StressMethod } from '../stress/footing.types.js';
 import { settlementTimeCurve } from '../time-rate/settlement-time-curve.js';
 import { timeForPrimaryShare } from '../time-rate/time-for-primary-share.js';
 import { consolidatingLayersOf } from './consolidating-layers-of.js';
 import type { SettlementModel } from './prepare-settlement-model.js';
 import { settlementAtPoint } from './settlement-at-point.js';
-import type { FootingSettlementResult, PointSettlement, SettlementCheckOptions } from './settlement-check.types.js';
+import type { EvaluationPointLabel, FootingSettlementResult, PointSettlement, SettlementCheckOptions } from './settlement-check.types.js';
 
 /** One footing of a prepared check. */
 export interface FootingSettlementResultInput {
@@ -21,7 +21,7 @@ export interface FootingSettlementResultInput {
 /**
  * Everything runSettlementCheck reports for one footing: settlements at the
  * centre (with per-sublayer rows) and, unless only the centre is asked for, at
- * the four corners; primary settlement per clay layer; the settlement–time
+ * the corners or their equivalents (EvaluationPointLabel); primary settlement per clay layer; the settlement–time
  * curve from Terzaghi's U(Tv) per layer on its own drainage path; the times to
  * 50 % and 90 % of primary settlement; and the total against the limit.
  *
@@ -37,17 +37,7 @@ export function footingSettlementResult(input: FootingSettlementResultInput): Fo
   const at = (xM: number, yM: number, withSublayers: boolean) =>
     settlementAtPoint({ model, footings: prepared, ownIndex, xM, yM, method: stressMethod, includeNeighbours, designLifeYears, withSublayers });
   const centre = at(footing.xM, footing.yM, true);
-  const halfWidthM = footing.widthM / 2;
-  const halfLengthM = footing.lengthM / 2;
-  const corners: Array<[PointSettlement['label'], number, number]> =
-    options.evaluationPoints === 'centre'
-      ? []
-      : [
-          ['corner-x-y-', -halfWidthM, -halfLengthM],
-          ['corner-x+y-', halfWidthM, -halfLengthM],
-          ['corner-x-y+', -halfWidthM, halfLengthM],
-          ['corner-x+y+', halfWidthM, halfLengthM],
-        ];
+  const corners = options.evaluationPoints === 'centre' ? [] : evaluationOffsets(footing);
   const points: PointSettlement[] = [
     { label: 'centre', xM: footing.xM, yM: footing.yM, immediateM: centre.immediateM, primaryM: centre.primaryM, secondaryM: centre.secondaryM, totalM: centre.totalM },
     ...corners.map(([label, dx, dy]) => {
@@ -60,13 +50,18 @@ export function footingSettlementResult(input: FootingSettlementResultInput): Fo
   const shareTime = (share: number) => (consolidating.length === 0 ? null : timeForPrimaryShare(consolidating, share).timeYears);
   return {
     id: footing.id,
+    shape: footing.shape,
     xM: footing.xM,
     yM: footing.yM,
     widthM: footing.widthM,
-    lengthM: footing.lengthM,
+    lengthM: footing.shape === 'rectangle' || footing.shape === 'square' ? footing.lengthM : null,
     depthM: footing.depthM,
+    pressureBasis: footing.grossPressureKpa === undefined ? 'net' : 'gross',
     pressureKpa: footing.pressureKpa,
-    loadKn: footing.pressureKpa * footing.widthM * footing.lengthM,
+    grossPressureKpa: footing.grossPressureKpa ?? null,
+    overburdenRemovedKpa: footing.overburdenRemovedKpa ?? null,
+    loadKn: footing.shape === 'strip' ? null : footing.pressureKpa * planAreaM2(footing),
+    loadKnPerM: footing.shape === 'strip' ? footing.pressureKpa * footing.widthM : null,
     immediateDepthFactor: footing.immediateDepthFactor ?? 1,
     immediateM: centre.immediateM,
     primaryM: centre.primaryM,
@@ -80,4 +75,35 @@ export function footingSettlementResult(input: FootingSettlementResultInput): Fo
     timeTo90PercentYears: shareTime(0.9),
     withinTotalLimit: options.totalSettlementLimitM === undefined ? null : centre.totalM <= options.totalSettlementLimitM,
   };
+}
+
+/** The points other than the centre, as offsets from it: see EvaluationPointLabel. */
+function evaluationOffsets(footing: PreparedFooting): Array<[EvaluationPointLabel, number, number]> {
+  const halfWidthM = footing.widthM / 2;
+  if (footing.shape === 'strip') {
+    return [
+      ['edge-x-', -halfWidthM, 0],
+      ['edge-x+', halfWidthM, 0],
+    ];
+  }
+  if (footing.shape === 'circle') {
+    return [
+      ['edge-x-', -halfWidthM, 0],
+      ['edge-x+', halfWidthM, 0],
+      ['edge-y-', 0, -halfWidthM],
+      ['edge-y+', 0, halfWidthM],
+    ];
+  }
+  const halfLengthM = footing.lengthM / 2;
+  return [
+    ['corner-x-y-', -halfWidthM, -halfLengthM],
+    ['corner-x+y-', halfWidthM, -halfLengthM],
+    ['corner-x-y+', -halfWidthM, halfLengthM],
+    ['corner-x+y+', halfWidthM, halfLengthM],
+  ];
+}
+
+/** Plan area of a rectangle, square or circle, m². */
+function planAreaM2(footing: PreparedFooting): number {
+  return footing.shape === 'circle' ? (Math.PI * footing.widthM * footing.widthM) / 4 : footing.widthM * footing.lengthM;
 }

@@ -5,21 +5,6 @@ import { foxDepthFactor } from './fox-depth-factor.js';
 import { gaussLegendreRule } from './gauss-legendre-rule.js';
 
 describe('foxDepthFactor(lengthToWidthRatio, depthToWidthRatio, poissonRatio)', () => {
-  it('reproduces a row of the published table to its three decimals: μs = 0.3, B/L = 1 (Das, Principles of Foundation Engineering, table of If against Df/B; digits as recalled from memory)', () => {
-    // The eight digits below were recalled before this function was written; the
-    // B/L label of the row was recalled less surely than its digits. Measured
-    // difference: at most 0.0004 after rounding to the table's three decimals.
-    const depthRatios = [0.05, 0.1, 0.2, 0.4, 0.6, 0.8, 1, 2];
-    const table = [0.979, 0.954, 0.902, 0.808, 0.738, 0.687, 0.65, 0.562];
-    depthRatios.forEach((depthRatio, i) => {
-      expect(Math.abs(foxDepthFactor(1, depthRatio, 0.3) - (table[i] ?? 0))).toBeLessThanOrEqual(0.0005);
-    });
-  });
-
-  it('B/L = 0.5, Df/B = 1, μs = 0.3 gives 0.709, the value read in Das’s elastic settlement example (data as recalled from memory)', () => {
-    expect(Math.abs(foxDepthFactor(2, 1, 0.3) - 0.709)).toBeLessThanOrEqual(0.0005);
-  });
-
   it('is 1 at the surface and tends to Kelvin’s full-space ratio (3 − 4ν)/(8(1 − ν)²) at great depth', () => {
     expect(foxDepthFactor(1, 0, 0.3)).toBe(1);
     for (const nu of [0, 0.3, 0.5]) {

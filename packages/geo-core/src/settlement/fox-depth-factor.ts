@@ -38,7 +38,7 @@ const RULE = gaussLegendreRule(24);
  * @param poissonRatio ν, dimensionless (0–0.5)
  * @returns If, dimensionless, in ((3 − 4ν)/(8(1 − ν)²), 1]
  * @throws RangeError for L/B < 1, D/B < 0, ν outside 0–0.5, or non-finite input
- * @example foxDepthFactor(2, 1, 0.3) // 0.7088 (Das, *Principles of Foundation Engineering*, If for B/L = 0.5, Df/B = 1, μs = 0.3: 0.709, from memory)
+ * @example foxDepthFactor(2, 1, 0.3) // 0.7088
  */
 export function foxDepthFactor(lengthToWidthRatio: number, depthToWidthRatio: number, poissonRatio: number): number {
   if (!(lengthToWidthRatio >= 1) || !Number.isFinite(lengthToWidthRatio)) throw new RangeError('foxDepthFactor requires a finite lengthToWidthRatio >= 1');

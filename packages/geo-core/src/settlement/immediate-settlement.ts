@@ -1,3 +1,4 @@
+import type { FootingShape } from '../stress/footing.types.js';
 import { elasticInfluenceFactor, type ElasticSettlementPosition } from './elastic-influence-factor.js';
 
 /** A footing on an elastic half-space. */
@@ -13,8 +14,8 @@ export interface ImmediateSettlementInput {
   /** Poisson's ratio, dimensionless (0–0.5; 0.5 undrained). */
   readonly poissonRatio: number;
   readonly position: ElasticSettlementPosition;
-  /** Default 'rectangle'. */
-  readonly shape?: 'rectangle' | 'circle';
+  /** Default 'rectangle'. A square needs lengthM = widthM; a strip has no half-space value (null with a warning). */
+  readonly shape?: FootingShape;
 }
 
 /** Immediate settlement and the factor used; null with a warning where no published factor applies. */
@@ -35,8 +36,8 @@ export interface ImmediateSettlementResult {
  * shallow foundations (the α, αav, αr table); Timoshenko & Goodier, *Theory of Elasticity*.
  *
  * @param input pressure and modulus in kPa, sides in m, ν dimensionless
- * @returns settlement in m with α, or null and a warning
- * @throws RangeError for non-positive sides or modulus, ν outside 0–0.5, L < B, or non-finite pressure
+ * @returns settlement in m with α, or null and a warning for a strip (unbounded on a half-space) or a rigid rectangle beyond the table
+ * @throws RangeError for non-positive sides or modulus, ν outside 0–0.5, L < B, a square with L ≠ B, or non-finite pressure
  * @example immediateSettlement({ pressureKpa: 100, widthM: 2, lengthM: 2, elasticModulusKpa: 10000, poissonRatio: 0.3, position: 'centre' }) // settlementM 0.02042
  */
 export function immediateSettlement(input: ImmediateSettlementInput): ImmediateSettlementResult {
@@ -45,8 +46,16 @@ export function immediateSettlement(input: ImmediateSettlementInput): ImmediateS
   if (!Number.isFinite(pressureKpa)) throw new RangeError('immediateSettlement requires a finite pressureKpa');
   if (!(widthM > 0) || !Number.isFinite(widthM)) throw new RangeError('immediateSettlement requires a finite widthM > 0');
   if (shape === 'rectangle' && !(lengthM >= widthM && Number.isFinite(lengthM))) throw new RangeError('immediateSettlement requires a finite lengthM >= widthM');
+  if (shape === 'square' && lengthM !== widthM) throw new RangeError('immediateSettlement requires lengthM = widthM for a square');
   if (!(elasticModulusKpa > 0) || !Number.isFinite(elasticModulusKpa)) throw new RangeError('immediateSettlement requires a finite elasticModulusKpa > 0');
   if (!(poissonRatio >= 0 && poissonRatio <= 0.5)) throw new RangeError('immediateSettlement requires 0 <= poissonRatio <= 0.5');
+  if (shape === 'strip') {
+    return {
+      settlementM: null,
+      influenceFactor: null,
+      warnings: ['A strip on an elastic half-space settles without bound (plane strain), so it has no half-space factor. Give the thickness of the compressible ground and use the finite-layer method (immediateSettlementFiniteLayer).'],
+    };
+  }
   const influenceFactor = elasticInfluenceFactor(shape, lengthM / widthM, position);
   if (influenceFactor === null) {
     return {

@@ -1,8 +1,10 @@
-import { WATER_UNIT_WEIGHT_KN_PER_M3 } from '../constants/water-unit-weight.js';
 import { splitIntoSublayers, type SublayerSpacing } from '../profile/split-into-sublayers.js';
-import type { SoilProfile, Sublayer } from '../profile/soil-profile.types.js';
+import { layerPreconsolidation } from '../profile/layer-preconsolidation.js';
+import type { PreconsolidationBasis, SoilProfile, Sublayer } from '../profile/soil-profile.types.js';
+import { soilProfileWarnings } from '../profile/soil-profile-warnings.js';
 import { validateSoilProfile } from '../profile/validate-soil-profile.js';
 import { verticalStressAtDepth } from '../profile/vertical-stress-at-depth.js';
+import { waterUnitWeightOf } from '../profile/water-unit-weight-of.js';
 import { timeFactorForDegree } from '../time-curves/time-factor-for-degree.js';
 import { drainagePathLengthM } from '../time-rate/drainage-path-length.js';
 import type { LayerParametersUsed, PrimaryMethod } from './settlement-check.types.js';
@@ -49,8 +51,9 @@ export interface SettlementModel {
  * integrates over: σ′0 and σ′p at each sublayer's mid-depth, the drainage path
  * and end of primary consolidation of each clay layer, and a record of every
  * parameter used. A careful designer's defaults, each stated in a warning:
- * no σ′p or OCR → normally consolidated (the cautious choice); σ′p below the
- * in-situ stress at some depth → that part normally consolidated. A layer
+ * σ′p carried through each layer as a constant, by OCR or by POP
+ * (layerPreconsolidation); none given → normally consolidated (the cautious
+ * choice); σ′p below the in-situ stress at some depth → that part normally consolidated. A layer
  * with mv and no Cc settles by mv·Δσ′·H; with both, Cc is used and said so.
  *
  * @param profile the ground model
@@ -63,7 +66,7 @@ export interface SettlementModel {
  */
 export function prepareSettlementModel(profile: SoilProfile, spacing: SublayerSpacing, endOfPrimaryShare: number, caller: string): SettlementModel {
   validateSoilProfile(profile, caller);
-  const warnings: string[] = [];
+  const warnings: string[] = soilProfileWarnings(profile);
   const timeFactorAtEnd = timeFactorForDegree(endOfPrimaryShare);
   let topDepthM = 0;
   const layers: LayerParametersUsed[] = profile.layers.map((layer, layerIndex) => {
@@ -71,19 +74,13 @@ export function prepareSettlementModel(profile: SoilProfile, spacing: SublayerSp
     const primaryMethod: PrimaryMethod | null =
       layer.e0 !== undefined && layer.cc !== undefined ? 'e-log-stress' : layer.mvM2PerKn !== undefined ? 'mv' : null;
     const compressible = primaryMethod !== null;
-    const overconsolidated = (layer.ocr !== undefined && layer.ocr > 1) || layer.preconsolidationKpa !== undefined;
+    const overconsolidated =
+      (layer.ocr !== undefined && layer.ocr > 1) || layer.preconsolidationKpa !== undefined || (layer.preOverburdenPressureKpa !== undefined && layer.preOverburdenPressureKpa > 0);
     if (primaryMethod === 'e-log-stress' && overconsolidated && layer.cs === undefined) {
-      throw new RangeError(`${caller} requires cs wherever ocr or preconsolidationKpa is given, in layer ${layerIndex + 1} (${layer.name})`);
+      throw new RangeError(`${caller} requires cs wherever the layer is overconsolidated (ocr > 1, preconsolidationKpa or preOverburdenPressureKpa > 0), in layer ${layerIndex + 1} (${layer.name})`);
     }
-    const preconsolidationBasis = !compressible
-      ? null
-      : layer.preconsolidationKpa !== undefined
-        ? 'preconsolidation-stress'
-        : layer.ocr !== undefined
-          ? 'ocr'
-          : primaryMethod === 'mv'
-            ? null
-            : 'assumed-normally-consolidated';
+    const basisGiven = layerPreconsolidation(layer, 1).basis;
+    const preconsolidationBasis: PreconsolidationBasis | null = !compressible ? null : primaryMethod === 'mv' && basisGiven === 'assumed-normally-consolidated' ? null : basisGiven;
     if (primaryMethod === 'e-log-stress' && layer.mvM2PerKn !== undefined) {
       warnings.push(`Layer ${layerIndex + 1} (${layer.name}) has both Cc and mv; its primary settlement uses Cc, e0 and σ′p, which follow the stress level, and mv is not used. Remove one if that is not what you mean.`);
     }
@@ -91,7 +88,7 @@ export function prepareSettlementModel(profile: SoilProfile, spacing: SublayerSp
       warnings.push(`Layer ${layerIndex + 1} (${layer.name}) has mv and Cα but no e0, so Cα/(1 + ep) cannot be had and its secondary compression is left out. Give e0 to include it.`);
     }
     if (preconsolidationBasis === 'assumed-normally-consolidated') {
-      warnings.push(`Layer ${layerIndex + 1} (${layer.name}) has neither σ′p nor OCR; it is treated as normally consolidated, the cautious choice. Give σ′p from the oedometer tests to refine it.`);
+      warnings.push(`Layer ${layerIndex + 1} (${layer.name}) has no σ′p, OCR or POP; it is treated as normally consolidated, the cautious choice. Give σ′p from the oedometer tests to refine it.`);
     }
     const drainagePathM =
       compressible && layer.drainageTop !== undefined && layer.drainageBottom !== undefined
@@ -120,6 +117,7 @@ export function prepareSettlementModel(profile: SoilProfile, spacing: SublayerSp
       preconsolidationBasis,
       preconsolidationKpa: layer.preconsolidationKpa ?? null,
       ocr: layer.ocr ?? null,
+      preOverburdenPressureKpa: layer.preOverburdenPressureKpa ?? null,
       cvM2PerYr: layer.cvM2PerYr ?? null,
       cAlpha: layer.cAlpha ?? null,
       elasticModulusKpa: layer.elasticModulusKpa ?? null,
@@ -137,9 +135,9 @@ export function prepareSettlementModel(profile: SoilProfile, spacing: SublayerSp
     if (layer === undefined || used === undefined || used.primaryMethod === null) throw new RangeError(`${caller} requires a consistent profile`);
     const initialEffectiveStressKpa = verticalStressAtDepth(profile, sublayer.midDepthM).effectiveStressKpa;
     if (!(initialEffectiveStressKpa > 0)) {
-      throw new RangeError(`${caller} requires a positive effective stress in layer ${sublayer.layerIndex + 1} (${layer.name}); check that saturated unit weights exceed ${WATER_UNIT_WEIGHT_KN_PER_M3} kN/m³`);
+      throw new RangeError(`${caller} requires a positive effective stress in layer ${sublayer.layerIndex + 1} (${layer.name}); check that saturated unit weights exceed the unit weight of water, ${waterUnitWeightOf(profile)} kN/m³`);
     }
-    const given = layer.preconsolidationKpa ?? (layer.ocr ?? 1) * initialEffectiveStressKpa;
+    const given = layerPreconsolidation(layer, initialEffectiveStressKpa).preconsolidationKpa;
     if (given < initialEffectiveStressKpa && used.primaryMethod === 'e-log-stress') clampedLayers.add(sublayer.layerIndex);
     const cc = used.primaryMethod === 'e-log-stress' ? (layer.cc ?? 0) : 0;
     return {

@@ -22,7 +22,7 @@ export interface PrimaryConsolidationSettlementMvInput {
  * layers and give mv for each); linear over that range.
  * Source: Craig's *Soil Mechanics*, ch. "Consolidation" (the oedometer
  * settlement sc = mv·Δσ′·H); Das, *Principles of Geotechnical Engineering*,
- * ch. "Compressibility of soil" (mv = av/(1 + e)); domain.md.
+ * ch. "Compressibility of soil" (mv = av/(1 + e)).
  *
  * @param input thickness in m, mv in m²/kN, Δσ′ in kPa
  * @returns settlement in m

@@ -5,8 +5,8 @@ import type { Footing } from '../stress/footing.types.js';
 import { foxDepthFactor } from './fox-depth-factor.js';
 import { runSettlementCheck } from './run-settlement-check.js';
 
-// Hand-calculation profile (invented; no textbook example is recalled precisely enough
-// to cite, so the checks below are worked by hand in the comments): 4 m of sand over
+// Hand-calculation profile (invented; the checks below are worked by hand in the comments; the published
+// settlement examples are in published-settlement-checks.test.ts): 4 m of sand over
 // 4 m of clay, water table 2 m below ground.
 const sandOverClay = (clay: Partial<SoilProfile['layers'][number]> = {}): SoilProfile => ({
   groundLevelM: 10,
@@ -33,6 +33,27 @@ describe('runSettlementCheck({ profile, footings, options })', () => {
     expect(result.warnings.some((w) => /treated as normally consolidated/.test(w))).toBe(true);
   });
 
+  it('works out σ′0 with the profile’s γw and states it in the result (γw = 10 kN/m³)', () => {
+    // Hand calculation at 6 m with γw = 10: σ′0 = 2×18 + 2×(20 − 10) + 2×(19 − 10) = 74 kPa (74.76 with 9.81).
+    const profile = { ...sandOverClay(), waterUnitWeightKnPerM3: 10 };
+    const result = runSettlementCheck({ profile, footings: [footing], options: { sublayerCount: 1, evaluationPoints: 'centre' } });
+    expect(result.footings[0]?.sublayers[0]?.initialEffectiveStressKpa).toBeCloseTo(74, 9);
+    expect(result.method.waterUnitWeightKnPerM3).toBe(10);
+    expect(runSettlementCheck({ profile: sandOverClay(), footings: [footing] }).method.waterUnitWeightKnPerM3).toBe(9.81);
+  });
+
+  it('names γw in the message when a saturated unit weight does not exceed it', () => {
+    const profile: SoilProfile = {
+      groundLevelM: 0,
+      waterTableDepthM: 0,
+      waterUnitWeightKnPerM3: 10,
+      layers: [{ name: 'clay', thicknessM: 4, unitWeightKnPerM3: 10, saturatedUnitWeightKnPerM3: 10, e0: 1, cc: 0.35 }],
+    };
+    expect(() => runSettlementCheck({ profile, footings: [footing] })).toThrow(
+      new RangeError('runSettlementCheck requires a positive effective stress in layer 1 (clay); check that saturated unit weights exceed the unit weight of water, 10 kN/m³'),
+    );
+  });
+
   it('overconsolidated clay passing σ′p reproduces the hand calculation', () => {
     // Same loading with σ′p = 80 kPa: Sc = 0.06 × 2 × log10(80/74.76) + 0.35 × 2 × log10(89.08/80) = 0.0362 m (± 0.0001 from I's decimals).
     const result = runSettlementCheck({ profile: sandOverClay({ preconsolidationKpa: 80 }), footings: [footing], options: { sublayerCount: 1, evaluationPoints: 'centre' } });
@@ -47,13 +68,37 @@ describe('runSettlementCheck({ profile, footings, options })', () => {
     expect(Math.abs((result.footings[0]?.primaryM ?? 0) - 0.00913)).toBeLessThanOrEqual(0.00003);
   });
 
+  it('POP carries σ′p = σ′0 + POP through the layer and the result states the basis', () => {
+    // Same loading with POP = 10 kPa: σ′p = 74.76 + 10 = 84.76 kPa < σ′1 = 89.08 kPa, so the sublayer crosses σ′p:
+    // Sc = 0.06 × 2 × log10(84.76/74.76) + 0.35 × 2 × log10(89.08/84.76) = 0.00654 + 0.01511 = 0.0217 m (± 0.0001 from I's decimals).
+    const result = runSettlementCheck({ profile: sandOverClay({ preOverburdenPressureKpa: 10 }), footings: [footing], options: { sublayerCount: 1, evaluationPoints: 'centre' } });
+    const row = result.footings[0]?.sublayers[0];
+    expect(row?.preconsolidationKpa).toBeCloseTo(84.76, 9);
+    expect(row?.consolidationCase).toBe('overconsolidated-crossing');
+    expect(Math.abs((result.footings[0]?.primaryM ?? 0) - 0.0217)).toBeLessThanOrEqual(0.0001);
+    expect(result.layers[1]).toMatchObject({ preconsolidationBasis: 'pre-overburden-pressure', preOverburdenPressureKpa: 10, ocr: null, preconsolidationKpa: null });
+  });
+
+  it('property: POP 0 gives the same settlements as OCR 1, and POP = (OCR − 1)·σ′0 the same as that OCR in one sublayer', () => {
+    fc.assert(
+      fc.property(fc.double({ min: 100, max: 3000, noNaN: true }), fc.double({ min: 1, max: 3, noNaN: true }), (loadKn, ocr) => {
+        const run = (clay: Partial<SoilProfile['layers'][number]>) =>
+          runSettlementCheck({ profile: sandOverClay(clay), footings: [{ ...footing, loadKn }], options: { sublayerCount: 1, evaluationPoints: 'centre' } }).footings[0]?.totalM ?? Number.NaN;
+        expect(run({ preOverburdenPressureKpa: 0 })).toBe(run({ ocr: 1 }));
+        // σ′0 = 74.76 kPa at the one mid-depth (hand calculation above).
+        expect(run({ preOverburdenPressureKpa: (ocr - 1) * 74.76 })).toBeCloseTo(run({ ocr }), 12);
+      }),
+      { numRuns: 30 },
+    );
+  });
+
   it('finer sublayers converge: 40 and 80 slices agree within 0.5 %', () => {
     const run = (count: number) => runSettlementCheck({ profile: sandOverClay(), footings: [footing], options: { sublayerCount: count, evaluationPoints: 'centre' } }).footings[0]?.primaryM ?? 0;
     expect(Math.abs(run(40) - run(80)) / run(80)).toBeLessThan(0.005);
   });
 
   it('immediate settlement on a very deep elastic layer equals the half-space formula q·B·(1 − ν²)/E·1.122', () => {
-    // Published α = 1.122 for the centre of a flexible square (Das, Principles of Foundation Engineering, from memory);
+    // α = 1.1222 for the centre of a flexible square (the closed form, worked by hand in elastic-influence-factor.test.ts);
     // a 2 km layer under a 2 m footing differs from the half-space by F2 ≈ 1e-3 of F1 — tolerance 0.2 %.
     const profile: SoilProfile = { groundLevelM: 0, waterTableDepthM: 0, layers: [{ name: 'stiff clay', thicknessM: 2000, unitWeightKnPerM3: 20, saturatedUnitWeightKnPerM3: 20, elasticModulusKpa: 20_000, poissonRatio: 0.3 }] };
     const result = runSettlementCheck({ profile, footings: [{ ...footing, depthM: 0 }] });
@@ -173,7 +218,7 @@ describe('runSettlementCheck({ profile, footings, options })', () => {
     const profile = sandOverClay({ ocr: 1.5 });
     const { cs: _cs, ...clayWithoutCs } = profile.layers[1]!;
     expect(() => runSettlementCheck({ profile: { ...profile, layers: [profile.layers[0]!, clayWithoutCs] }, footings: [footing] })).toThrow(
-      new RangeError('runSettlementCheck requires cs wherever ocr or preconsolidationKpa is given, in layer 2 (clay)'),
+      new RangeError('runSettlementCheck requires cs wherever the layer is overconsolidated (ocr > 1, preconsolidationKpa or preOverburdenPressureKpa > 0), in layer 2 (clay)'),
     );
   });
 });

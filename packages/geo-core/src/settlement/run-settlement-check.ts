@@ -1,6 +1,9 @@
+import { waterUnitWeightOf } from '../profile/water-unit-weight-of.js';
 import { footingPressureKpa } from '../stress/footing-pressure.js';
-import type { PreparedFooting } from '../stress/footing-stress-contribution.js';
-import type { Footing } from '../stress/footing.types.js';
+import { overlappingFootingPairs } from '../stress/overlapping-footing-pairs.js';
+import { prepareFooting } from '../stress/prepare-footing.js';
+import type { PreparedFooting } from '../stress/prepared-footing.js';
+import type { FootingShape } from '../stress/footing.types.js';
 import { footingPairResults } from './footing-pair-results.js';
 import { foxDepthFactor } from './fox-depth-factor.js';
 import { footingSettlementResult } from './footing-settlement-result.js';
@@ -24,8 +27,14 @@ const DEFAULT_DESIGN_ANGULAR_DISTORTION = 1 / 500;
  * pair of footings the differential settlement and angular distortion judged
  * against Bjerrum (1963) and Skempton & MacDonald (1956).
  *
- * Headline numbers are at each footing's centre; the corners are evaluated too
- * unless evaluationPoints is 'centre'. The result is plain data: it records the
+ * Footings may be rectangles, squares, circles (widthM the diameter) or strips
+ * (plane strain, load per metre run or pressure); each footing's result names
+ * its shape and the method names the stress method. A load or pressure is net
+ * unless marked gross; a gross one loses σv0 at the founding depth
+ * (netFootingPressure), and each footing's result states the net pressure used. Headline numbers are at
+ * each footing's centre; the corners — or, for circles and strips, their
+ * equivalents (EvaluationPointLabel) — are evaluated too unless
+ * evaluationPoints is 'centre'. The result is plain data: it records the
  * method, every layer parameter used, per-sublayer rows and every warning.
  *
  * @param input profile, footings (m, kN or kPa) and options (see SettlementCheckOptions)
@@ -55,23 +64,25 @@ export function runSettlementCheck(input: SettlementCheckInput): SettlementCheck
   if (stressMethod !== 'boussinesq' && stressMethod !== '2to1') throw new RangeError(`${caller} requires stressMethod 'boussinesq' or '2to1'`);
 
   const model = prepareSettlementModel(input.profile, spacing, endOfPrimaryShare, caller);
-  const prepared = prepareFootings(input.footings, model, caller, applyFoxDepthFactor);
-  const notes = methodNotes(stressMethod, includeNeighbours, applyFoxDepthFactor);
+  const footingWarnings: string[] = [];
+  const prepared = prepareFootings(input, model, caller, applyFoxDepthFactor, footingWarnings);
+  const notes = methodNotes(stressMethod, includeNeighbours, applyFoxDepthFactor, new Set(prepared.map((footing) => footing.shape)));
   const footings = prepared.map((footing, ownIndex) =>
     footingSettlementResult({ model, prepared, ownIndex, stressMethod, includeNeighbours, designLifeYears, options }),
   );
   const pairs = footingPairResults(footings, designAngularDistortion, options.pairMaxDistanceM);
   return {
-    method: { stressMethod, includeNeighbours, sublayerSpacing: spacing, designLifeYears, endOfPrimaryShare, designAngularDistortion, applyFoxDepthFactor, notes },
+    method: { stressMethod, waterUnitWeightKnPerM3: waterUnitWeightOf(input.profile), includeNeighbours, sublayerSpacing: spacing, designLifeYears, endOfPrimaryShare, designAngularDistortion, applyFoxDepthFactor, notes },
     layers: model.layers,
     footings,
     pairs,
-    warnings: [...model.warnings],
+    warnings: [...model.warnings, ...footingWarnings, ...overlapWarnings(input.footings)],
     caution: SETTLEMENT_CAUTION,
   };
 }
 
-function prepareFootings(footings: readonly Footing[], model: SettlementModel, caller: string, applyFoxDepthFactor: boolean): PreparedFooting[] {
+function prepareFootings(input: SettlementCheckInput, model: SettlementModel, caller: string, applyFoxDepthFactor: boolean, warnings: string[]): PreparedFooting[] {
+  const footings = input.footings;
   if (footings.length === 0) throw new RangeError(`${caller} requires at least one footing`);
   const ids = new Set<string>();
   return footings.map((footing) => {
@@ -81,10 +92,10 @@ function prepareFootings(footings: readonly Footing[], model: SettlementModel, c
     if (!(footing.depthM >= 0) || !(footing.depthM < model.profileBottomM)) {
       throw new RangeError(`${caller} requires depthM >= 0 and above the bottom of the profile (footing ${footing.id})`);
     }
-    const pressureKpa = footingPressureKpa(footing);
-    if (!(pressureKpa >= 0)) throw new RangeError(`${caller} requires a load or pressure >= 0 (footing ${footing.id}); uplift is outside this check`);
-    const prepared = { id: footing.id, xM: footing.xM, yM: footing.yM, widthM: footing.widthM, lengthM: footing.lengthM, depthM: footing.depthM, pressureKpa };
-    return applyFoxDepthFactor ? { ...prepared, immediateDepthFactor: footingFoxDepthFactor(prepared, model) } : prepared;
+    if (!(footingPressureKpa(footing) >= 0)) throw new RangeError(`${caller} requires a load or pressure >= 0 (footing ${footing.id}); uplift is outside this check`);
+    const prepared = prepareFooting(footing, input.profile, warnings);
+    const foxApplies = applyFoxDepthFactor && (prepared.shape === 'rectangle' || prepared.shape === 'square');
+    return foxApplies ? { ...prepared, immediateDepthFactor: footingFoxDepthFactor(prepared, model) } : prepared;
   });
 }
 
@@ -96,16 +107,37 @@ function footingFoxDepthFactor(footing: PreparedFooting, model: SettlementModel)
   return foxDepthFactor(Math.max(footing.widthM, footing.lengthM) / shortM, footing.depthM / shortM, below.poissonRatio);
 }
 
-function methodNotes(stressMethod: 'boussinesq' | '2to1', includeNeighbours: boolean, applyFoxDepthFactor: boolean): string[] {
+function methodNotes(stressMethod: 'boussinesq' | '2to1', includeNeighbours: boolean, applyFoxDepthFactor: boolean, shapes: ReadonlySet<FootingShape>): string[] {
   const notes = [
-    'Stresses below each footing base; footings are flexible and loaded by the given net pressure.',
+    'Stresses below each footing base; footings are flexible and loaded by their net pressure (a gross pressure less σv0 at the founding depth).',
     'Primary settlement per sublayer from Cc, Cs, e0 and σ′p at mid-depth (Terzaghi, e–log σ′), or from mv·Δσ′·H on a layer given mv and no Cc.',
     applyFoxDepthFactor
       ? 'Immediate settlement from Steinbrenner’s factors over the layers with E and ν; each footing’s own share reduced by Fox’s (1948) depth factor (ν of the layer below its base), its neighbours’ shares not.'
       : 'Immediate settlement from Steinbrenner’s factors over the layers with E and ν, without a depth (Fox) reduction.',
     'Secondary compression from Cα over the design life, starting at the end of primary consolidation; Cα·Cs/Cc where a sublayer stays overconsolidated (Mesri & Godlewski 1977).',
   ];
+  if (shapes.has('circle')) {
+    notes.push(
+      stressMethod === 'boussinesq'
+        ? 'Circles: Boussinesq’s point load integrated over the circle at any point (on the axis in closed form); immediate settlement from the half-space displacement under the circle, layer by layer as Steinbrenner’s method does for rectangles (centre factor 1 and edge factor 2/π on a half-space, Timoshenko & Goodier). Their “corners” are the four rim points on the x and y axes.'
+        : 'Circles: the load spread over a circle of diameter D + z (2V:1H). Their “corners” are the four rim points on the x and y axes.',
+    );
+  }
+  if (shapes.has('strip')) {
+    notes.push(
+      'Strips are infinitely long along y (plane strain), evaluated at their station yM: stress from the strip solution (Boussinesq) or q·B/(B + z) (2V:1H), immediate settlement from Steinbrenner’s factors in their infinitely-long limit. Their “corners” are the two edges across the width.',
+    );
+  }
+  if (applyFoxDepthFactor && (shapes.has('circle') || shapes.has('strip'))) {
+    notes.push('Fox’s depth factor is for rectangles: circles and strips keep their immediate settlement unreduced (more settlement, not less).');
+  }
   if (stressMethod === '2to1') notes.push('The 2V:1H method spreads the load uniformly, so corner and centre values of a footing alone do not differ; use Boussinesq for differential settlement within a footing.');
   if (!includeNeighbours) notes.push('Neighbouring footings are ignored: each footing is checked alone.');
   return notes;
+}
+
+function overlapWarnings(footings: SettlementCheckInput['footings']): string[] {
+  return overlappingFootingPairs(footings).map(
+    ([a, b]) => `Footings ${a} and ${b} overlap on plan. Both loads are added where they overlap, which is rarely meant: check their positions and sizes in the schedule.`,
+  );
 }

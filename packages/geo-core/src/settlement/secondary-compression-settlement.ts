@@ -20,7 +20,7 @@ export interface SecondaryCompressionSettlementInput {
  * Assumptions: Cα constant with time and stress; secondary compression starts
  * when primary ends (Mesri's view, the textbook one).
  * Source: Das, *Principles of Geotechnical Engineering*, secondary consolidation
- * settlement; Holtz & Kovacs, ch. 9; domain.md.
+ * settlement; Holtz & Kovacs, *An Introduction to Geotechnical Engineering*, ch. 9.
  *
  * @param input thickness in m, indices dimensionless, times in years
  * @returns Ss in m

@@ -1,4 +1,4 @@
-import type { PreparedFooting } from '../stress/footing-stress-contribution.js';
+import type { PreparedFooting } from '../stress/prepared-footing.js';
 import { addRectangleInfluenceOverDepths } from '../stress/add-rectangle-influence-over-depths.js';
 import { footingStressContributionKpa } from '../stress/footing-stress-contribution.js';
 import type { StressMethod } from '../stress/footing.types.js';
@@ -35,9 +35,10 @@ export interface SettlementAtPointResult {
 }
 
 /**
- * Settlement at one point of a footing: immediate (layered Steinbrenner, own
- * footing and neighbours), primary consolidation summed over the sublayers
- * below the footing's base with Δσ at each mid-depth from every footing, and
+ * Settlement at one point of a footing: immediate (layered Steinbrenner, or
+ * its analogue for a circle; own footing and neighbours), primary consolidation summed over the sublayers
+ * below the footing's base with Δσ at each mid-depth from every footing (each
+ * by its own shape: footingStressContributionKpa), and
  * secondary compression of the same sublayers over the design life.
  *
  * Primary settlement per sublayer is Terzaghi's e–log σ′ (three cases) or,
@@ -76,12 +77,10 @@ export function settlementAtPoint(input: SettlementAtPointInput): SettlementAtPo
     const out = index === ownIndex ? ownStressKpa : neighboursStressKpa;
     const dxM = xM - footing.xM;
     const dyM = yM - footing.yM;
-    if (method === 'boussinesq') {
+    if (method === 'boussinesq' && footing.lengthM !== Infinity && footing.shape !== 'circle') {
       addRectangleInfluenceOverDepths(footing.widthM / 2, footing.lengthM / 2, dxM, dyM, footing.depthM, footing.pressureKpa, model.midDepthsM, out);
     } else {
-      for (let k = 0; k < model.midDepthsM.length; k += 1) {
-        out[k] = (out[k] ?? 0) + footingStressContributionKpa(footing, dxM, dyM, (model.midDepthsM[k] ?? 0) - footing.depthM, method);
-      }
+      addFootingStressOverDepths(footing, dxM, dyM, method, model.midDepthsM, out);
     }
   }
   for (let k = 0; k < model.sublayers.length; k += 1) {
@@ -151,4 +150,11 @@ export function secondaryForSublayer(
   const voidRatioAtEndOfPrimary = sublayer.e0 - ((1 + sublayer.e0) * primarySettlementM) / sublayer.thicknessM;
   if (!(voidRatioAtEndOfPrimary > 0)) return null;
   return secondaryCompressionSettlement({ thicknessM: sublayer.thicknessM, cAlpha, voidRatioAtEndOfPrimary, endOfPrimaryYears: sublayer.endOfPrimaryYears, designLifeYears });
+}
+
+/** Circles, strips and the 2V:1H spread, one depth at a time (kept out of settlementAtPoint, whose loop stays small). */
+function addFootingStressOverDepths(footing: PreparedFooting, dxM: number, dyM: number, method: StressMethod, depthsM: Float64Array, out: Float64Array): void {
+  for (let k = 0; k < depthsM.length; k += 1) {
+    out[k] = (out[k] ?? 0) + footingStressContributionKpa(footing, dxM, dyM, (depthsM[k] ?? 0) - footing.depthM, method);
+  }
 }

@@ -1,7 +1,7 @@
 import type { ConsolidationCase } from './primary-consolidation-settlement.js';
 import type { AngularDistortionVerdict } from './judge-angular-distortion.js';
-import type { DrainageBoundary, SoilProfile } from '../profile/soil-profile.types.js';
-import type { Footing, StressMethod } from '../stress/footing.types.js';
+import type { DrainageBoundary, PreconsolidationBasis, SoilProfile } from '../profile/soil-profile.types.js';
+import type { Footing, FootingShape, PressureBasis, StressMethod } from '../stress/footing.types.js';
 
 /** Choices for a settlement check; every one has a stated default. */
 export interface SettlementCheckOptions {
@@ -17,7 +17,11 @@ export interface SettlementCheckOptions {
   readonly designLifeYears?: number;
   /** Times for the settlement–time curve, years; default 41 points from 0.01 to 100 years on log t. */
   readonly timesYears?: readonly number[];
-  /** 'centre' or 'centre-and-corners'. Default 'centre-and-corners'. */
+  /**
+   * 'centre' or 'centre-and-corners' (the corners of a rectangle or square, the
+   * rim points on the axes of a circle, the two edges of a strip: see
+   * EvaluationPointLabel). Default 'centre-and-corners'.
+   */
   readonly evaluationPoints?: 'centre' | 'centre-and-corners';
   /** Share of primary consolidation taken as its end, where secondary compression starts (fraction). Default 0.95. */
   readonly endOfPrimaryShare?: number;
@@ -67,10 +71,18 @@ export interface LayerParametersUsed {
   readonly mvM2PerKn: number | null;
   /** 'e-log-stress' where e0 and cc are given, 'mv' where only mv is; null for a layer that does not consolidate. */
   readonly primaryMethod: PrimaryMethod | null;
-  /** How σ′p was set: from σ′p, from OCR, or assumed normally consolidated. */
-  readonly preconsolidationBasis: 'preconsolidation-stress' | 'ocr' | 'assumed-normally-consolidated' | null;
+  /**
+   * How σ′p was carried through the layer: a constant σ′p, a constant OCR, a
+   * constant POP = σ′p − σ′v0, or assumed normally consolidated; null for a
+   * layer that does not consolidate, or an mv layer given no σ′p.
+   */
+  readonly preconsolidationBasis: PreconsolidationBasis | null;
+  /** The constant σ′p given, kPa (basis 'preconsolidation-stress'). */
   readonly preconsolidationKpa: number | null;
+  /** The OCR given (basis 'ocr'). */
   readonly ocr: number | null;
+  /** The POP given, kPa (basis 'pre-overburden-pressure'). */
+  readonly preOverburdenPressureKpa: number | null;
   readonly cvM2PerYr: number | null;
   readonly cAlpha: number | null;
   readonly elasticModulusKpa: number | null;
@@ -101,9 +113,27 @@ export interface SublayerSettlementRow {
   readonly secondarySettlementM: number | null;
 }
 
+/**
+ * Where on a footing a point lies: the centre; the four corners of a rectangle
+ * or square; for a circle, the four points of its rim on the x and y axes
+ * through its centre ('edge-x-' at x − D/2, and so on: the rim points nearest
+ * and farthest from neighbours set out on the plan's grid); for a strip, its
+ * two edges across the width at the footing's station ('edge-x-', 'edge-x+').
+ */
+export type EvaluationPointLabel =
+  | 'centre'
+  | 'corner-x-y-'
+  | 'corner-x+y-'
+  | 'corner-x-y+'
+  | 'corner-x+y+'
+  | 'edge-x-'
+  | 'edge-x+'
+  | 'edge-y-'
+  | 'edge-y+';
+
 /** Settlements at one point of a footing, m. */
 export interface PointSettlement {
-  readonly label: 'centre' | 'corner-x-y-' | 'corner-x+y-' | 'corner-x-y+' | 'corner-x+y+';
+  readonly label: EvaluationPointLabel;
   readonly xM: number;
   readonly yM: number;
   readonly immediateM: number;
@@ -115,13 +145,27 @@ export interface PointSettlement {
 /** One footing's results; the headline numbers are at its centre. */
 export interface FootingSettlementResult {
   readonly id: string;
+  /** The footing's shape as used ('rectangle' where none was given). */
+  readonly shape: FootingShape;
   readonly xM: number;
   readonly yM: number;
+  /** B, m: the diameter for a circle, the width across for a strip. */
   readonly widthM: number;
-  readonly lengthM: number;
+  /** L, m: a square's side again; null for a circle and a strip. */
+  readonly lengthM: number | null;
   readonly depthM: number;
+  /** Whether the load was given net or gross. */
+  readonly pressureBasis: PressureBasis;
+  /** Net pressure at founding level used for every stress and settlement, kPa. */
   readonly pressureKpa: number;
-  readonly loadKn: number;
+  /** The gross pressure given, kPa; null for a net load. */
+  readonly grossPressureKpa: number | null;
+  /** σv0 at the founding depth taken off the gross pressure, kPa; null for a net load. */
+  readonly overburdenRemovedKpa: number | null;
+  /** Net total load, kN (net pressure × plan area); null for a strip. */
+  readonly loadKn: number | null;
+  /** Net load per metre run, kN/m (net pressure × width); null except for a strip. */
+  readonly loadKnPerM: number | null;
   /** Fox's depth factor applied to the footing's own immediate settlement (1 when the option is off). */
   readonly immediateDepthFactor: number;
   readonly immediateM: number;
@@ -154,6 +198,8 @@ export interface FootingPairResult {
 export interface SettlementCheckResult {
   readonly method: {
     readonly stressMethod: StressMethod;
+    /** γw the pore pressures and effective stresses were worked out with, kN/m³. */
+    readonly waterUnitWeightKnPerM3: number;
     readonly includeNeighbours: boolean;
     readonly sublayerSpacing: { readonly count: number } | { readonly maxThicknessM: number };
     readonly designLifeYears: number;

@@ -1,6 +1,8 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import type { SoilProfile } from '../profile/soil-profile.types.js';
+import type { Footing } from '../stress/footing.types.js';
+import type { FootingToSize } from './footing-settlement-for-width.js';
 import { runSettlementCheck } from '../settlement/run-settlement-check.js';
 import { findWidthByBisection } from './find-width-by-bisection.js';
 import { sizeFootingForSettlement } from './size-footing-for-settlement.js';
@@ -90,6 +92,57 @@ describe('sizeFootingForSettlement({ profile, footing, targetSettlementM, minWid
   });
 });
 
+describe('sizeFootingForSettlement — circles, squares and strips', () => {
+  const settle = (footing: Footing) => runSettlementCheck({ profile, footings: [footing], options: { evaluationPoints: 'centre' } }).footings[0]?.totalM ?? Number.NaN;
+
+  it('property: a circle’s diameter and a strip’s width found meet the target, and 5 mm less does not', () => {
+    fc.assert(
+      fc.property(fc.double({ min: 300, max: 2000, noNaN: true }), fc.double({ min: 80, max: 400, noNaN: true }), (loadKn, loadKnPerM) => {
+        const targetSettlementM = 0.04;
+        const circle = sizeFootingForSettlement({ profile, footing: { shape: 'circle', depthM: 1, loadKn }, targetSettlementM, minWidthM: 0.5, maxWidthM: 12 });
+        if (circle.status === 'found') {
+          const widthM = circle.widthM ?? Number.NaN;
+          expect(settle({ id: 'S', shape: 'circle', xM: 0, yM: 0, widthM, depthM: 1, loadKn })).toBeLessThanOrEqual(targetSettlementM);
+          expect(settle({ id: 'S', shape: 'circle', xM: 0, yM: 0, widthM: widthM - 0.005, depthM: 1, loadKn })).toBeGreaterThan(targetSettlementM);
+          expect([circle.shape, circle.lengthM]).toEqual(['circle', null]);
+        }
+        const strip = sizeFootingForSettlement({ profile, footing: { shape: 'strip', depthM: 1, loadKnPerM }, targetSettlementM, minWidthM: 0.3, maxWidthM: 12 });
+        if (strip.status === 'found') {
+          const widthM = strip.widthM ?? Number.NaN;
+          expect(settle({ id: 'S', shape: 'strip', xM: 0, yM: 0, widthM, depthM: 1, loadKnPerM })).toBeLessThanOrEqual(targetSettlementM);
+          expect(settle({ id: 'S', shape: 'strip', xM: 0, yM: 0, widthM: widthM - 0.005, depthM: 1, loadKnPerM })).toBeGreaterThan(targetSettlementM);
+          expect([strip.shape, strip.lengthM]).toEqual(['strip', null]);
+        }
+      }),
+      { numRuns: 8 },
+    );
+  });
+
+  it('a square sizes as the rectangle with L/B = 1 and reports L = B', () => {
+    const base = { profile, targetSettlementM: 0.04, minWidthM: 0.5, maxWidthM: 12 };
+    const square = sizeFootingForSettlement({ ...base, footing: { shape: 'square', depthM: 1, loadKn: 1500 } });
+    const rectangle = sizeFootingForSettlement({ ...base, footing: { depthM: 1, loadKn: 1500 } });
+    expect([square.shape, square.widthM, square.lengthM]).toEqual(['square', rectangle.widthM, rectangle.widthM]);
+  });
+
+  it('matches a circle to a square reference', () => {
+    const reference: Footing = { id: 'C1', shape: 'square', xM: 0, yM: 0, widthM: 2, depthM: 1, loadKn: 800 };
+    const result = sizeFootingToMatchSettlement({ profile, reference, footing: { shape: 'circle', depthM: 1, loadKn: 1400 }, minWidthM: 1, maxWidthM: 10 });
+    expect(result.targetSettlementM).toBeCloseTo(settle(reference), 12);
+    expect(settle({ id: 'D', shape: 'circle', xM: 0, yM: 0, widthM: result.widthM ?? 0, depthM: 1, loadKn: 1400 })).toBeLessThanOrEqual(result.targetSettlementM);
+  });
+
+  it('throws RangeError for a strip without loadKnPerM or a circle given L/B', () => {
+    const base = { profile, targetSettlementM: 0.03, minWidthM: 1, maxWidthM: 5 };
+    expect(() => sizeFootingForSettlement({ ...base, footing: { shape: 'strip', depthM: 1, loadKnPerM: 0 } })).toThrow(
+      new RangeError('sizeFootingForSettlement requires a finite loadKnPerM > 0 for a strip'),
+    );
+    expect(() => sizeFootingForSettlement({ ...base, footing: { shape: 'circle', depthM: 1, loadKn: 500, lengthToWidthRatio: 2 } as unknown as FootingToSize })).toThrow(
+      new RangeError('sizeFootingForSettlement requires no lengthToWidthRatio for a circle'),
+    );
+  });
+});
+
 describe('sizeFootingToMatchSettlement({ profile, reference, footing, minWidthM, maxWidthM, options })', () => {
   it('gives the heavier footing the reference footing’s settlement, within the width tolerance', () => {
     const reference = { id: 'C1', xM: 0, yM: 0, widthM: 2, lengthM: 2, depthM: 1, loadKn: 800 };
@@ -102,9 +155,20 @@ describe('sizeFootingToMatchSettlement({ profile, reference, footing, minWidthM,
     expect(settlementOf((result.widthM ?? 0) - 0.005, 1400)).toBeGreaterThan(target);
   });
 
-  it('throws RangeError for a reference with L < B', () => {
-    expect(() =>
-      sizeFootingToMatchSettlement({ profile, reference: { id: 'C1', xM: 0, yM: 0, widthM: 2, lengthM: 1, depthM: 1, loadKn: 800 }, footing: { depthM: 1, loadKn: 1400 }, minWidthM: 1, maxWidthM: 10 }),
-    ).toThrow(new RangeError('sizeFootingToMatchSettlement requires the reference to have widthM > 0 and lengthM >= widthM'));
+  it('takes a reference laid either way round: 2 m × 1 m sets the same target as 1 m × 2 m', () => {
+    const size = (widthM: number, lengthM: number) =>
+      sizeFootingToMatchSettlement({ profile, reference: { id: 'C1', xM: 0, yM: 0, widthM, lengthM, depthM: 1, loadKn: 800 }, footing: { depthM: 1, loadKn: 1400 }, minWidthM: 1, maxWidthM: 10 });
+    expect(size(2, 1).targetSettlementM).toBeCloseTo(size(1, 2).targetSettlementM, 12);
+  });
+
+  it('throws RangeError for an unloaded reference or one founded below the profile', () => {
+    const reference = { id: 'C1', xM: 0, yM: 0, widthM: 2, lengthM: 2, depthM: 1, loadKn: 800 };
+    const base = { profile, footing: { depthM: 1, loadKn: 1400 }, minWidthM: 1, maxWidthM: 10 };
+    expect(() => sizeFootingToMatchSettlement({ ...base, reference: { ...reference, loadKn: 0 } })).toThrow(
+      new RangeError('sizeFootingToMatchSettlement requires the reference footing to carry a net load > 0'),
+    );
+    expect(() => sizeFootingToMatchSettlement({ ...base, reference: { ...reference, depthM: 9 } })).toThrow(
+      new RangeError("sizeFootingToMatchSettlement requires the reference's depthM >= 0 and above the bottom of the profile"),
+    );
   });
 });

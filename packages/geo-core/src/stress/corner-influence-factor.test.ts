@@ -1,5 +1,6 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
+import { gaussLegendreRule } from '../settlement/gauss-legendre-rule.js';
 import { cornerInfluenceFactor } from './corner-influence-factor.js';
 
 // Holl's form of the same integral, written without the branch of the arctangent
@@ -11,37 +12,51 @@ function hollCornerFactor(m: number, n: number): number {
   return (Math.atan((m * n) / rootV) + ((m * n) / rootV) * (1 / (1 + m * m) + 1 / (1 + n * n))) / (2 * Math.PI);
 }
 
-// The published table prints four decimals, so the tolerance is half a unit of
-// the fourth decimal. Sources: the first six points are printed in
-// the project domain brief (shared/domain.md); the rest are from the table of I against m and n in
-// Das, Principles of Geotechnical Engineering (Newmark/Fadum values), from memory.
-// Two recalled entries, (0.5, ∞) and (0.6, 1), disagreed in the last digit and were
-// dropped rather than adjusted: memory, not the formula, is the doubtful side there.
-const TABLE: ReadonlyArray<readonly [number, number, number, string]> = [
-  [1, 1, 0.1752, 'domain.md / Das table'],
-  [0.5, 0.5, 0.084, 'domain.md / Das table'],
-  [1, 2, 0.1999, 'domain.md / Das table'],
-  [2, 2, 0.2325, 'domain.md / Das table'],
-  [1, Infinity, 0.2046, 'domain.md / Das table'],
-  [Infinity, Infinity, 0.25, 'domain.md / Das table'],
-  [0.1, 0.1, 0.0047, 'Das table, from memory'],
-  [0.1, 0.2, 0.0092, 'Das table, from memory'],
-  [0.1, 0.5, 0.0198, 'Das table, from memory'],
-  [0.1, 1, 0.0279, 'Das table, from memory'],
-  [0.2, 0.2, 0.0179, 'Das table, from memory'],
-  [0.2, 1, 0.0547, 'Das table, from memory'],
-  [0.5, 1, 0.1202, 'Das table, from memory'],
-  [0.5, 2, 0.135, 'Das table, from memory'],
-  [0.3, 1, 0.0794, 'Das table, from memory'],
-  [0.4, 1, 0.1013, 'Das table, from memory'],
-  [0.8, 1, 0.1598, 'Das table, from memory'],
-  [1, 1.5, 0.1936, 'Das table, from memory'],
-  [2, Infinity, 0.2399, 'Das table, from memory'],
+// Hand calculations of Newmark's formula, written out (V = m² + n² + 1, V1 = m²n², I = [A + atan2(2mn√V, V − V1)]/(4π),
+// A = (2mn√V/(V + V1))·((V + 1)/V)):
+// I(1, 1): V = 3, V1 = 1, 2mn√V = 3.464102, A = 0.866025 × 4/3 = 1.154701, atan2(3.464102, 2) = π/3 = 1.047198 → 0.175221.
+// I(0.5, 0.5): V = 1.5, V1 = 0.0625, 2mn√V = 0.612372, A = 0.391918 × 5/3 = 0.653197, atan2(0.612372, 1.4375) = 0.402716 → 1.055913/(4π) = 0.084027.
+// I(2, 2): V = 9, V1 = 16, 2mn√V = 24, A = 0.96 × 10/9 = 1.066667, atan2(24, −7) = π − 1.287002 = 1.854590 → 0.232466.
+// I(1, ∞) = [2/(1 + 1) + atan2(2, 0)]/(4π) = (1 + π/2)/(4π) = 2.570796/12.566371 = 0.204577; I(∞, ∞) = 1/4 (a quarter of an infinite load).
+const HAND_CALCULATED: ReadonlyArray<readonly [number, number, number]> = [
+  [1, 1, 0.175221],
+  [0.5, 0.5, 0.084027],
+  [2, 2, 0.232466],
+  [1, Infinity, 0.204577],
+  [Infinity, Infinity, 0.25],
 ];
 
+// An independent route to the same number: Boussinesq's point load 3z³/(2πR⁵) integrated over the m × n corner
+// rectangle at z = 1 by a 64 × 64 Gauss–Legendre product rule (smooth at z = 1: converged to 1e-12 for m, n ≤ 3).
+const { nodes, weights } = gaussLegendreRule(64);
+function quadratureCornerFactor(m: number, n: number): number {
+  let sum = 0;
+  nodes.forEach((u, i) => {
+    const x = (m / 2) * (1 + u);
+    nodes.forEach((v, j) => {
+      const y = (n / 2) * (1 + v);
+      sum += (weights[i] ?? 0) * (weights[j] ?? 0) * (m / 2) * (n / 2) * (3 / (2 * Math.PI * (x * x + y * y + 1) ** 2.5));
+    });
+  });
+  return sum;
+}
+
 describe('cornerInfluenceFactor(m, n)', () => {
-  it.each(TABLE)('I(%s, %s) matches the published %s (%s) to the four printed decimals', (m, n, expected) => {
-    expect(Math.abs(cornerInfluenceFactor(m, n) - expected)).toBeLessThanOrEqual(0.00005 + 1e-12);
+  it.each(HAND_CALCULATED)('I(%s, %s) = %s, the hand calculation written out above (six decimals)', (m, n, expected) => {
+    expect(Math.abs(cornerInfluenceFactor(m, n) - expected)).toBeLessThanOrEqual(0.0000005 + 1e-12);
+  });
+
+  it.each([
+    [0.1, 0.1],
+    [0.1, 1],
+    [0.2, 0.5],
+    [0.5, 2],
+    [0.8, 1],
+    [1, 1.5],
+    [1.5, 3],
+    [3, 3],
+  ])('I(%s, %s) equals the point load integrated over the rectangle (independent quadrature, 1e-10)', (m, n) => {
+    expect(Math.abs(cornerInfluenceFactor(m, n) - quadratureCornerFactor(m, n))).toBeLessThan(1e-10);
   });
 
   it('agrees with Holl’s branch-free form over six decades of m and n (relative 1e-12)', () => {

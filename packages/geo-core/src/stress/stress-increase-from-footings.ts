@@ -1,6 +1,7 @@
-import { footingPressureKpa } from './footing-pressure.js';
+import type { SoilProfile } from '../profile/soil-profile.types.js';
 import type { Footing, StressMethod } from './footing.types.js';
 import { footingStressContributionKpa } from './footing-stress-contribution.js';
+import { prepareFooting } from './prepare-footing.js';
 
 /** A point in the ground and the footings that load it. */
 export interface StressIncreaseFromFootingsInput {
@@ -15,6 +16,8 @@ export interface StressIncreaseFromFootingsInput {
   readonly ownFootingId?: string;
   /** false: only the own footing counts. Default true. */
   readonly includeNeighbours?: boolean;
+  /** The ground model, needed only where a footing's load is gross (σv0 at its founding depth is taken off). */
+  readonly profile?: SoilProfile;
 }
 
 /** The stress increase at the point, split into the own footing's share and the neighbours'. */
@@ -29,18 +32,22 @@ export interface StressIncreaseFromFootingsResult {
  * (linear elasticity makes the contributions add): Δσz = Σ over footings of each
  * footing's own Δσz, with z measured below that footing's base.
  *
- * Boussinesq: each footing by corner-rectangle superposition (Newmark 1935;
- * Fadum 1948), valid for points inside or outside its plan area. 2V:1H: a
- * footing adds Q/((B + z)(L + z)) where the point lies inside its spread area
- * (B + z) × (L + z) and nothing outside — the method's own crude picture.
+ * Boussinesq: a rectangle or square by corner-rectangle superposition
+ * (Newmark 1935; Fadum 1948), a circle by the point load integrated over it
+ * (circleStressInfluence), a strip by the plane-strain strip solution — each
+ * valid for points inside or outside its plan area. 2V:1H: a footing adds its
+ * load spread uniformly over its spread area — (B + z) × (L + z), a circle of
+ * diameter D + z, or a width B + z under a strip — and nothing outside, the
+ * method's own crude picture (footingStressContributionKpa).
  * A footing whose base is at or below the point adds nothing: its half-space
  * starts at its base.
  * Source: Das, *Principles of Geotechnical Engineering*, stress from several
  * loads by superposition; Poulos & Davis (1974), ch. 3.
  *
- * @param input footings (m, kN or kPa), point position (m), depth below ground (m), method
+ * @param input footings (m, kN, kN/m or kPa; net, or gross with the profile), point position (m), depth below ground (m), method
  * @returns total, own and neighbours' Δσz in kPa
- * @throws RangeError when the depth is not positive, a footing is invalid, or neighbours are ignored without ownFootingId
+ * @throws RangeError when the depth is not positive, a footing is invalid, a load is gross and no profile is given,
+ *   or neighbours are ignored without ownFootingId
  * @example stressIncreaseFromFootings({ footings: [{ id: 'A', xM: 0, yM: 0, widthM: 2, lengthM: 2, depthM: 0, pressureKpa: 100 }], xM: 0, yM: 0, depthBelowGroundM: 1, method: 'boussinesq' }) // { totalKpa: 70.09, ownKpa: 70.09, neighboursKpa: 0 }
  */
 export function stressIncreaseFromFootings(input: StressIncreaseFromFootingsInput): StressIncreaseFromFootingsResult {
@@ -58,8 +65,7 @@ export function stressIncreaseFromFootings(input: StressIncreaseFromFootingsInpu
   for (const footing of footings) {
     const isOwn = footing.id === ownFootingId;
     if (!isOwn && !includeNeighbours) continue;
-    const prepared = { ...footing, pressureKpa: footingPressureKpa(footing) };
-    const contributionKpa = footingStressContributionKpa(prepared, xM - footing.xM, yM - footing.yM, depthBelowGroundM - footing.depthM, method);
+    const contributionKpa = footingStressContributionKpa(prepareFooting(footing, input.profile ?? null), xM - footing.xM, yM - footing.yM, depthBelowGroundM - footing.depthM, method);
     if (isOwn) ownKpa += contributionKpa;
     else neighboursKpa += contributionKpa;
   }

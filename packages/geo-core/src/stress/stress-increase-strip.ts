@@ -1,3 +1,5 @@
+import { stripStressInfluence } from './strip-stress-influence.js';
+
 /** A uniformly loaded strip (infinitely long) and a point in its cross-section. */
 export interface StressIncreaseStripInput {
   /** Uniform pressure on the strip, kPa. */
@@ -32,7 +34,5 @@ export function stressIncreaseStrip(input: StressIncreaseStripInput): number {
   if (!Number.isFinite(pressureKpa) || !Number.isFinite(xM)) throw new RangeError('stressIncreaseStrip requires finite pressureKpa and xM');
   if (!(widthM > 0) || !Number.isFinite(widthM)) throw new RangeError('stressIncreaseStrip requires finite widthM > 0');
   if (!(depthM > 0) || !Number.isFinite(depthM)) throw new RangeError('stressIncreaseStrip requires finite depthM > 0');
-  const theta1 = Math.atan((xM + widthM / 2) / depthM);
-  const theta2 = Math.atan((xM - widthM / 2) / depthM);
-  return (pressureKpa / Math.PI) * (theta1 - theta2 + Math.sin(theta1) * Math.cos(theta1) - Math.sin(theta2) * Math.cos(theta2));
+  return pressureKpa * stripStressInfluence(widthM / 2, xM, depthM);
 }

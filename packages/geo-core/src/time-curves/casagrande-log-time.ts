@@ -14,6 +14,15 @@ import type { TimeCurveLine, TimeCurveWarning, TimeDeformationReading, ValueSour
 const TAIL_START_FACTOR_DECADES = Math.log10(8);
 /** A tail at least half as steep as the tangent is not a secondary line but primary still going. */
 const MAXIMUM_TAIL_TO_TANGENT_SLOPE = 0.5;
+/**
+ * When the readings stop before 8× the steepest point's time: a run of last
+ * readings whose every segment has flattened below a quarter of the tangent's
+ * slope, starting at least twice the steepest point's time later, is taken as
+ * the secondary line (with a warning) — what a person drawing the construction
+ * by hand does with a short record.
+ */
+const SHORT_TAIL_SEGMENT_TO_TANGENT_SLOPE = 0.25;
+const SHORT_TAIL_START_FACTOR_DECADES = Math.log10(2);
 
 export interface CasagrandePicks {
   /** Time to 50 % consolidation read by the reviewer, min. */
@@ -64,6 +73,14 @@ export interface CasagrandeLogTimeResult {
  * t50 is read off the curve. cv = 0.197·Hdr²/t50 follows with
  * coefficientOfConsolidationM2PerYr; the tail slope gives Cα.
  *
+ * Short records: where fewer than two readings lie 8× past the steepest
+ * point, the line is drawn through the last readings if at least two of them,
+ * from twice the steepest time on, have every segment flatter than a quarter
+ * of the tangent (on Terzaghi's curve that is past U ≈ 98 %), with a
+ * 'short-secondary-line' warning — as the construction is drawn by hand on
+ * such a record (the readings of Powrie, Soil Mechanics, Question 4.4, end at 5.4×). Otherwise
+ * 'primary-not-reached'.
+ *
  * Assumptions: Terzaghi's theory for primary, secondary compression linear in
  * log t after primary. Sources: Casagrande, A. & Fadum, R. E. (1940) Notes on
  * soil testing for engineering purposes, Harvard Soil Mechanics Series 8;
@@ -104,9 +121,21 @@ export function casagrandeLogTime(readings: readonly TimeDeformationReading[], p
   // The 1e-9 decade keeps a reading exactly 8× later (8 → 64, 15 → 120 min) in the tail however the times are scaled.
   while (tailStart < count && (logs[tailStart] as number) < inflectionLog + TAIL_START_FACTOR_DECADES - 1e-9) tailStart += 1;
   let primaryNote: TimeCurveWarning | null = null;
-  if (count - tailStart < 2) {
+  const shortTailStart = count - tailStart < 2 ? flattenedLastRunStart(logs, deformations, inflectionLog, steepestSlope) : null;
+  if (shortTailStart !== null) {
+    const line = leastSquaresLine(logs, deformations, shortTailStart, count - 1);
+    if (line !== null) {
+      tail = line;
+      const reach = 10 ** ((logs[count - 1] as number) - inflectionLog);
+      warnings.push({
+        code: 'short-secondary-line',
+        message: `The readings end at ${reach.toFixed(1)} times the steepest point's time, short of the 8 times where the secondary line is normally drawn; the line rests on the last ${count - shortTailStart} readings, which have flattened to under a quarter of the tangent's slope. Check d100 on the drawn construction, or hold the load longer.`,
+      });
+    }
+  }
+  if (tail === null && count - tailStart < 2) {
     primaryNote = { code: 'primary-not-reached', message: 'The readings stop too soon after the steepest part of the log-time curve to show a secondary-compression line, so primary consolidation was not reached (or not shown) in this increment; hold the load longer or pick d100.' };
-  } else {
+  } else if (tail === null) {
     const line = leastSquaresLine(logs, deformations, tailStart, count - 1);
     if (line === null || line.slope >= MAXIMUM_TAIL_TO_TANGENT_SLOPE * steepestSlope) {
       primaryNote = { code: 'primary-not-reached', message: 'The last readings are still falling steeply on the log-time plot, so primary consolidation was not reached in this increment; hold the load longer or pick d100.' };
@@ -194,4 +223,20 @@ export function casagrandeLogTime(readings: readonly TimeDeformationReading[], p
     },
     warnings,
   };
+}
+
+/**
+ * Start of the longest run of last readings (two at least) whose every
+ * segment is flatter than a quarter of the tangent's slope and which begins at
+ * least twice the steepest point's time later; null when there is none.
+ */
+function flattenedLastRunStart(logs: Float64Array, deformations: Float64Array, inflectionLog: number, steepestSlope: number): number | null {
+  const count = logs.length;
+  let start = count - 1;
+  while (start > 0) {
+    const segmentSlope = ((deformations[start] as number) - (deformations[start - 1] as number)) / ((logs[start] as number) - (logs[start - 1] as number));
+    if (!(segmentSlope < SHORT_TAIL_SEGMENT_TO_TANGENT_SLOPE * steepestSlope) || (logs[start - 1] as number) < inflectionLog + SHORT_TAIL_START_FACTOR_DECADES - 1e-9) break;
+    start -= 1;
+  }
+  return count - 1 - start >= 1 ? start : null;
 }

@@ -3,9 +3,10 @@ import { describe, expect, it } from 'vitest';
 import { degreeOfConsolidation } from './degree-of-consolidation.js';
 import { timeFactorForDegree } from './time-factor-for-degree.js';
 
-// Published U–Tv table (Terzaghi 1943; as printed in Das, *Principles of
-// Geotechnical Engineering*, table "Variation of Tv with Uav", and in
-// ../shared/domain.md), three decimals.
+// The U–Tv table of Terzaghi (1943), as textbooks print it (Das, *Principles of Geotechnical Engineering*,
+// "Variation of Tv with Uav"), three decimals. Hand calculation of one entry, U(0.197) from the series
+// U = 1 − Σ (2/M²)·exp(−M²Tv): 0.810569 × e^(−0.486078) = 0.498529; 0.090063 × e^(−4.374703) = 0.001134;
+// the next term 2e-7 → U = 0.500337, which the table rounds to 50 %.
 const PUBLISHED_TABLE: readonly [number, number][] = [
   [0.1, 0.008],
   [0.2, 0.031],

@@ -43,6 +43,6 @@ export interface ReducedTimeCurve {
 
 /** Why a time-curve construction is missing or weak, in plain words for the reviewer. */
 export interface TimeCurveWarning {
-  readonly code: 'primary-not-reached' | 'insufficient-readings' | 'pick-outside-data';
+  readonly code: 'primary-not-reached' | 'insufficient-readings' | 'pick-outside-data' | 'short-secondary-line';
   readonly message: string;
 }

@@ -10,14 +10,15 @@ const PRINTED_FACTORS: ReadonlyArray<readonly [UnitName, UnitName, number, numbe
   ['kgfPerCm2', 'kPa', 98.0665, 0, 'NIST SP 811: kgf/cm² = 9.806 65 E+04 Pa, exact'],
   ['psi', 'kPa', 6.894757, 5e-7, 'NIST SP 811: lbf/in² = 6.894 757 E+03 Pa'],
   ['psf', 'kPa', 0.04788026, 5e-9, 'NIST SP 811: lbf/ft² = 4.788 026 E+01 Pa'],
-  ['tsf', 'kPa', 95.76052, 5e-6, 'NIST SP 811 psf × 2000 (tsf = 2000 lbf/ft²); domain.md prints 95.7605'],
+  ['tsf', 'kPa', 95.76052, 5e-6, 'NIST SP 811 psf × 2000 (tsf = 2000 lbf/ft²); printed to seven figures as 95.7605'],
   ['MPa', 'kPa', 1000, 0, 'SI prefix, exact'],
   ['in', 'mm', 25.4, 0, 'NIST SP 811: in = 2.54 E-02 m, exact'],
+  ['ft', 'mm', 304.8, 0, 'NIST SP 811: ft = 3.048 E-01 m, exact'],
   ['cm', 'mm', 10, 0, 'SI prefix, exact'],
   ['cm2PerS', 'm2PerYr', 3155.76, 1e-9, 'exact with the 365.25-day year (1e-4 m² × 31 557 600 s)'],
   ['m2PerS', 'm2PerYr', 31_557_600, 0, 'exact with the 365.25-day year'],
-  ['mm2PerMin', 'm2PerYr', 0.52596, 1e-12, 'exact with the 365.25-day year; domain.md prints 0.52596'],
-  ['pcf', 'knPerM3', 0.1570875, 5e-8, 'NIST SP 811: lb/ft³ = 1.601 846 E+01 kg/m³, × 9.806 65 m/s²; domain.md prints 0.157087'],
+  ['mm2PerMin', 'm2PerYr', 0.52596, 1e-12, 'exact with the 365.25-day year; printed as 0.52596'],
+  ['pcf', 'knPerM3', 0.1570875, 5e-8, 'NIST SP 811: lb/ft³ = 1.601 846 E+01 kg/m³, × 9.806 65 m/s²; printed to six figures as 0.157087'],
 ];
 
 describe('convertUnit(value, fromUnit, toUnit)', () => {

@@ -26,7 +26,7 @@ export interface UnitDefinition {
  * m²/yr for the coefficient of consolidation, kN/m³ for unit weight — the units
  * the core computes in. Factors follow NIST SP 811 (2008), appendix B.8:
  * 1 kgf/cm² = 98.0665 kPa, 1 psi = 6.894757 kPa, 1 psf = 0.04788026 kPa,
- * 1 tsf (2000 lbf/ft²) = 95.76052 kPa, 1 in = 25.4 mm, 1 lbf/ft³ = 0.1570875 kN/m³;
+ * 1 tsf (2000 lbf/ft²) = 95.76052 kPa, 1 in = 25.4 mm, 1 ft = 304.8 mm, 1 lbf/ft³ = 0.1570875 kN/m³;
  * years are Julian (365.25 d), so 1 cm²/s = 3155.76 m²/yr.
  */
 export const UNIT_CONVERSION_TABLE = {
@@ -40,6 +40,7 @@ export const UNIT_CONVERSION_TABLE = {
   cm: { quantity: 'length', symbol: 'cm', baseUnitsPerUnit: 10 },
   m: { quantity: 'length', symbol: 'm', baseUnitsPerUnit: 1000 },
   in: { quantity: 'length', symbol: 'in', baseUnitsPerUnit: INCH_M * 1000 },
+  ft: { quantity: 'length', symbol: 'ft', baseUnitsPerUnit: FOOT_M * 1000 },
   m2PerYr: { quantity: 'coefficientOfConsolidation', symbol: 'm²/yr', baseUnitsPerUnit: 1 },
   cm2PerS: { quantity: 'coefficientOfConsolidation', symbol: 'cm²/s', baseUnitsPerUnit: 1e-4 * SECONDS_PER_YEAR },
   m2PerS: { quantity: 'coefficientOfConsolidation', symbol: 'm²/s', baseUnitsPerUnit: SECONDS_PER_YEAR },

@@ -30,6 +30,8 @@ function parametersInput(layer: GroundModelLayer): CompressibleParametersInput |
     preconsolidationDepthM: p.preconsolidationKpa.origin === 'hand' ? p.preconsolidationDepthM : null,
     ocr: hand('ocr', p.ocr),
     cvM2PerYr: hand('cvM2PerYr', p.cvM2PerYr),
+    cvBasis: p.cvM2PerYr.cvBasis,
+    cvFinalStressKpa: p.cvM2PerYr.cvFinalStressKpa,
     cAlpha: hand('cAlpha', p.cAlpha),
     entered: layer.source?.kind === 'hand' ? [] : entered,
   };

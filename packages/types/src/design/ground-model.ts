@@ -24,9 +24,15 @@ export type LayerSourceInput = z.infer<typeof LayerSourceInputSchema>;
 
 /**
  * How σ′p varies through a layer from the value at the reference depth: 'ocr' keeps σ′p/σ′v0
- * constant, 'constant' keeps σ′p itself constant. (A constant σ′p − σ′v0 follows with the engine.)
+ * constant, 'pop' keeps σ′p − σ′v0 constant (a crust, or ground once loaded), 'constant' keeps
+ * σ′p itself constant.
  */
-export const PRECONSOLIDATION_CARRIES = ['ocr', 'constant'] as const;
+export const PRECONSOLIDATION_CARRIES = ['ocr', 'pop', 'constant'] as const;
+
+/** Which cv a record-sourced layer takes: the lowest of the test's increments, or cv over the layer's design stress range. */
+export const CV_BASES = ['lowest', 'design-range'] as const;
+export const CvBasisSchema = z.enum(CV_BASES);
+export type CvBasis = z.infer<typeof CvBasisSchema>;
 export const PreconsolidationCarrySchema = z.enum(PRECONSOLIDATION_CARRIES);
 export type PreconsolidationCarry = z.infer<typeof PreconsolidationCarrySchema>;
 
@@ -52,6 +58,10 @@ export const CompressibleParametersInputSchema = z.object({
   /** An OCR given directly (hand entry, or a characteristic set's adopted OCR). */
   ocr: numberIn('OCR', 1, 100).nullable().default(null),
   cvM2PerYr: positiveNumber('coefficient of consolidation cv', 'm²/yr').max(100_000).nullable().default(null),
+  /** With a record source: 'design-range' reads cv from the test's increments between σ′v0 and cvFinalStressKpa at the layer's mid-depth. */
+  cvBasis: CvBasisSchema.default('lowest'),
+  /** The effective stress the layer ends at under the load, kPa (σ′v0 + Δσ′ at mid-depth), for a 'design-range' cv. */
+  cvFinalStressKpa: positiveNumber('final effective stress for cv', 'kPa').nullable().default(null),
   cAlpha: nonNegativeNumber('secondary compression index Cα', '').max(1).nullable().default(null),
   /** Parameter names typed over the source's value ('e0', 'cc', …); ignored for a hand source. */
   entered: z.array(z.enum(['e0', 'cc', 'recompressionIndex', 'preconsolidationKpa', 'ocr', 'cvM2PerYr', 'cAlpha'])).max(7).default([]),
@@ -122,7 +132,8 @@ export const ResolvedCompressibleParametersSchema = z.object({
   preconsolidationKpa: ResolvedValueSchema,
   preconsolidationDepthM: z.number().nullable(),
   ocr: ResolvedValueSchema,
-  cvM2PerYr: ResolvedValueSchema.extend({ basis: z.string() }),
+  /** basis: how the value was had, in words; cvBasis/cvFinalStressKpa: the designer's choice, kept for the next save. */
+  cvM2PerYr: ResolvedValueSchema.extend({ basis: z.string(), cvBasis: CvBasisSchema.default('lowest'), cvFinalStressKpa: z.number().nullable().default(null) }),
   cAlpha: ResolvedValueSchema,
 });
 export type ResolvedCompressibleParameters = z.infer<typeof ResolvedCompressibleParametersSchema>;

@@ -23,9 +23,10 @@ export const LayerParametersUsedSchema = z.object({
   cs: z.number().nullable(),
   mvM2PerKn: z.number().nullable(),
   primaryMethod: z.enum(['e-log-stress', 'mv']).nullable(),
-  preconsolidationBasis: z.enum(['preconsolidation-stress', 'ocr', 'assumed-normally-consolidated']).nullable(),
+  preconsolidationBasis: z.enum(['preconsolidation-stress', 'ocr', 'pre-overburden-pressure', 'assumed-normally-consolidated']).nullable(),
   preconsolidationKpa: z.number().nullable(),
   ocr: z.number().nullable(),
+  preOverburdenPressureKpa: z.number().nullable(),
   cvM2PerYr: z.number().nullable(),
   cAlpha: z.number().nullable(),
   elasticModulusKpa: z.number().nullable(),
@@ -54,7 +55,7 @@ export const SublayerSettlementRowSchema = z.object({
 });
 export type SublayerSettlementRow = z.infer<typeof SublayerSettlementRowSchema>;
 
-const pointLabel = z.enum(['centre', 'corner-x-y-', 'corner-x+y-', 'corner-x-y+', 'corner-x+y+']);
+const pointLabel = z.enum(['centre', 'corner-x-y-', 'corner-x+y-', 'corner-x-y+', 'corner-x+y+', 'edge-x-', 'edge-x+', 'edge-y-', 'edge-y+']);
 export const PointSettlementSchema = z.object({
   label: pointLabel,
   xM: z.number(),
@@ -70,13 +71,20 @@ const layerShare = z.object({ layerIndex: z.number().int(), primarySettlementM: 
 
 export const FootingSettlementResultSchema = z.object({
   id: z.string(),
+  shape: z.enum(['rectangle', 'square', 'circle', 'strip']),
   xM: z.number(),
   yM: z.number(),
   widthM: z.number(),
-  lengthM: z.number(),
+  /** null for a circle and a strip. */
+  lengthM: z.number().nullable(),
   depthM: z.number(),
+  pressureBasis: z.enum(['net', 'gross']),
+  /** Net pressure at founding level, kPa. */
   pressureKpa: z.number(),
-  loadKn: z.number(),
+  grossPressureKpa: z.number().nullable(),
+  overburdenRemovedKpa: z.number().nullable(),
+  loadKn: z.number().nullable(),
+  loadKnPerM: z.number().nullable(),
   immediateDepthFactor: z.number(),
   immediateM: z.number(),
   primaryM: z.number(),
@@ -119,6 +127,7 @@ export type FootingPairResult = z.infer<typeof FootingPairResultSchema>;
 export const SettlementCheckResultSchema = z.object({
   method: z.object({
     stressMethod: z.enum(['boussinesq', '2to1']),
+    waterUnitWeightKnPerM3: z.number(),
     includeNeighbours: z.boolean(),
     sublayerSpacing: z.union([z.object({ count: z.number() }), z.object({ maxThicknessM: z.number() })]),
     designLifeYears: z.number(),

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { ConsolidationTestResultSchema } from './consolidation-result.js';
 import { JobStateSchema } from './states.js';
 
 /** Overrides of the automatic choices, as geo-core's ConsolidationPicks. */
@@ -37,8 +38,8 @@ export const AnalysisSchema = z.object({
   pickReason: z.string().nullable(),
   uploadId: z.uuid().nullable(),
   warningCount: z.number().int(),
-  /** geo-core's ConsolidationTestResult. */
-  result: z.record(z.string(), z.unknown()),
+  /** geo-core's ConsolidationTestResult, as the contract in consolidation-result.ts describes it. */
+  result: ConsolidationTestResultSchema,
 });
 export type Analysis = z.infer<typeof AnalysisSchema>;
 

@@ -54,6 +54,7 @@ const SPEC: Record<string, { access: Access; sample: (ctx: Context) => Promise<S
   'GET /api/health': { access: 'public', sample: () => ({ path: '/api/health' }) },
   'GET /api/auth/csrf': { access: 'public', sample: () => ({ path: '/api/auth/csrf' }) },
   'POST /api/auth/sign-up': { access: 'public', sample: () => ({ path: '/api/auth/sign-up', body: {} }) },
+  'POST /api/auth/sign-up/confirm': { access: 'public', sample: () => ({ path: '/api/auth/sign-up/confirm', body: {} }) },
   'POST /api/auth/sign-in': { access: 'public', sample: () => ({ path: '/api/auth/sign-in', body: { email: uniqueEmail('x'), password: 'x' } }) },
   'POST /api/auth/sign-out': { access: 'public', sample: () => ({ path: '/api/auth/sign-out' }), signsOut: true },
   'GET /api/auth/session': { access: 'signed-in', sample: () => ({ path: '/api/auth/session' }) },

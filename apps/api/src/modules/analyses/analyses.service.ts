@@ -1,6 +1,6 @@
 import { createHash } from 'node:crypto';
-import { analyzeConsolidationTest, GEO_CORE_VERSION, type ConsolidationTestInput, type ConsolidationTestResult } from '@porestack/geo-core';
-import type { Analysis, AnalysisSummary, Picks } from '@porestack/types';
+import { analyzeConsolidationTest, GEO_CORE_VERSION, type ConsolidationTestInput } from '@porestack/geo-core';
+import { ConsolidationTestResultSchema, type Analysis, type AnalysisSummary, type ConsolidationTestResult, type Picks } from '@porestack/types';
 import { dataSource } from '../../data-source.js';
 import { NotFoundError } from '../../errors/domain-error.js';
 import { BoreholeEntity } from '../boreholes/borehole.entity.js';
@@ -64,6 +64,18 @@ export async function analysisInput(orgId: string, test: ConsolidationTestEntity
 }
 
 /**
+ * geo-core's result checked against the shared contract, as the web will read it. Failing here
+ * is a fault of Porestack (geo-core produced a value the contract does not allow, such as a
+ * non-finite number), so it is not stored: JSON would quietly turn NaN into null.
+ */
+function storableResult(produced: unknown): ConsolidationTestResult {
+  const checked = ConsolidationTestResultSchema.safeParse(produced);
+  if (checked.success) return checked.data;
+  const [issue] = checked.error.issues;
+  throw new Error(`geo-core's result does not fit ConsolidationTestResultSchema at ${issue?.path.join('.') ?? '?'}: ${issue?.message ?? 'unknown problem'}`);
+}
+
+/**
  * Runs geo-core on the test's stored readings and stores the full result with the geo-core
  * version, the inputs hash and the picks; the test moves to analysed (audited). Called by
  * the analyse-test job, and directly by the seed.
@@ -82,7 +94,7 @@ export async function runAnalysis(
   await report(0.4, `Analysing ${input.increments.length} increments.`);
   let result: ConsolidationTestResult;
   try {
-    result = analyzeConsolidationTest(input);
+    result = storableResult(analyzeConsolidationTest(input));
   } catch (error) {
     if (error instanceof RangeError) throw analysisRejected(error.message);
     throw error;
@@ -103,7 +115,7 @@ export async function runAnalysis(
         picks: test.picks,
         pickReason: test.pickReason,
         uploadId: test.latestUploadId,
-        result: JSON.parse(JSON.stringify(result)) as Record<string, unknown>,
+        result,
         warningCount: result.warnings.length,
         readingCount: input.increments.reduce((sum, increment) => sum + increment.readings.length, 0),
         requestedById,
@@ -124,7 +136,7 @@ export function toAnalysisSummary(row: AnalysisEntity): AnalysisSummary {
     geoCoreVersion: row.geoCoreVersion,
     inputsHash: row.inputsHash,
     warningCount: row.warningCount,
-    keyParameters: keyParametersFrom(row.result as unknown as ConsolidationTestResult),
+    keyParameters: keyParametersFrom(row.result),
   };
 }
 

@@ -1,4 +1,4 @@
-import type { Picks } from '@porestack/types';
+import type { ConsolidationTestResult, Picks } from '@porestack/types';
 import { Column, CreateDateColumn, Entity, Index, JoinColumn, ManyToOne, PrimaryGeneratedColumn, type Relation } from 'typeorm';
 import { ConsolidationTestEntity } from '../consolidation-tests/consolidation-test.entity.js';
 
@@ -37,9 +37,9 @@ export class AnalysisEntity {
   @Column('uuid', { name: 'upload_id', nullable: true })
   uploadId!: string | null;
 
-  /** geo-core's ConsolidationTestResult. */
+  /** geo-core's ConsolidationTestResult, checked against ConsolidationTestResultSchema before it is stored. */
   @Column('jsonb')
-  result!: Record<string, unknown>;
+  result!: ConsolidationTestResult;
 
   @Column('integer', { name: 'warning_count' })
   warningCount!: number;

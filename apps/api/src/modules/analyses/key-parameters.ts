@@ -1,5 +1,4 @@
-import type { ConsolidationTestResult } from '@porestack/geo-core';
-import type { KeyParameters } from '@porestack/types';
+import type { ConsolidationTestResult, KeyParameters } from '@porestack/types';
 
 const EMPTY: KeyParameters = {
   initialVoidRatio: null,

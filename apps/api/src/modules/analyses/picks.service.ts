@@ -5,6 +5,7 @@ import { enqueueAnalysis } from '../../jobs/analyse-test-queue.js';
 import { audit } from '../audit/audit.service.js';
 import { ConsolidationTestEntity } from '../consolidation-tests/consolidation-test.entity.js';
 import type { Actor } from '../consolidation-tests/consolidation-tests.service.js';
+import { recordContribution } from '../consolidation-tests/test-contributions.js';
 import { lockTest } from '../consolidation-tests/test-transition.js';
 import { assertMove } from '../consolidation-tests/test-status-machine.js';
 import { noReadings } from './analysis.exception.js';
@@ -21,6 +22,7 @@ export async function setPicks(orgId: string, testId: string, input: PicksUpdate
     if (test.status === 'draft') throw noReadings();
     assertMove(test.status, 'analysed');
     await manager.getRepository(ConsolidationTestEntity).update({ organisationId: orgId, id: testId }, { picks: input.picks, pickReason: input.reason });
+    await recordContribution(manager, test, actor.id, 'picks');
     await audit.record(
       {
         organisationId: orgId,

@@ -27,3 +27,12 @@ export const resetTokenUsed = () =>
 
 export const resetTokenExpired = () =>
   new DomainError('token_expired', 'This password-reset link has expired. Ask for a new link: each one works for 60 minutes.');
+
+export const signUpLinkUnknown = () =>
+  new DomainError('token_invalid', 'This sign-up link is not valid. Open the latest link from your e-mail, or sign up again.');
+
+export const signUpLinkUsed = () =>
+  new DomainError('token_used', 'This sign-up link has already been used: the account exists. Sign in with your e-mail address and password.');
+
+export const signUpLinkExpired = () =>
+  new DomainError('token_expired', 'This sign-up link has expired. Sign up again: each link works for 24 hours.');

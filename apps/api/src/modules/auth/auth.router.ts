@@ -2,19 +2,27 @@ import {
   PasswordResetConfirmSchema,
   PasswordResetRequestSchema,
   SignInSchema,
+  SignUpConfirmSchema,
   SignUpSchema,
   type CsrfToken,
+  type SignUpSent,
 } from '@porestack/types';
 import type { Router } from 'express';
 import type { Csrf } from '../../http/csrf.js';
 import { parse } from '../../http/parse.js';
 import { currentUser } from '../../http/request-context.js';
 import { defineRoutes } from '../../http/routes.js';
-import { clearSessionCookie, readSessionClaims, setSessionCookie } from '../../http/session-cookie.js';
-import { signInRateLimit } from '../../http/sign-in-rate-limit.js';
+import { clearSessionCookie, openSession, readSessionClaims } from '../../http/session-cookie.js';
+import { endSession } from '../sessions/sessions.service.js';
+import { clientKey } from '../../http/rate-limits.js';
 import { sessionFor } from '../users/sessions.service.js';
-import { recordSignOut, signIn, signUp } from './auth.service.js';
+import { recordSignOut, signIn } from './auth.service.js';
+import { confirmSignUp, requestSignUp, SIGN_UP_LINK_HOURS } from './sign-up.service.js';
 import { confirmPasswordReset, requestPasswordReset } from './password-reset.service.js';
+
+/** The same words whether or not the address has an account. */
+const signUpSentMessage = (email: string) =>
+  `We sent a link to ${email}. Open it within ${SIGN_UP_LINK_HOURS} hours to finish creating your account (check the spam folder if it does not arrive).`;
 
 export function authRouter(csrf: Csrf): Router {
   return defineRoutes('/api/auth', [
@@ -32,8 +40,19 @@ export function authRouter(csrf: Csrf): Router {
       path: '/sign-up',
       access: 'public',
       handler: async (req, res) => {
-        const { user, session } = await signUp(parse(SignUpSchema, req.body));
-        setSessionCookie(res, user);
+        const input = parse(SignUpSchema, req.body);
+        await requestSignUp(input, clientKey(req));
+        const body: SignUpSent = { message: signUpSentMessage(input.email) };
+        res.status(202).json(body);
+      },
+    },
+    {
+      method: 'post',
+      path: '/sign-up/confirm',
+      access: 'public',
+      handler: async (req, res) => {
+        const { user, session } = await confirmSignUp(parse(SignUpConfirmSchema, req.body));
+        await openSession(res, user);
         res.status(201).json(session);
       },
     },
@@ -41,10 +60,9 @@ export function authRouter(csrf: Csrf): Router {
       method: 'post',
       path: '/sign-in',
       access: 'public',
-      before: [signInRateLimit()],
       handler: async (req, res) => {
-        const { user, session } = await signIn(parse(SignInSchema, req.body), req.ip);
-        setSessionCookie(res, user);
+        const { user, session } = await signIn(parse(SignInSchema, req.body), clientKey(req));
+        await openSession(res, user);
         res.json(session);
       },
     },
@@ -55,7 +73,10 @@ export function authRouter(csrf: Csrf): Router {
       access: 'public',
       handler: async (req, res) => {
         const claims = readSessionClaims(req);
-        if (claims) await recordSignOut(claims.sub);
+        if (claims) {
+          await endSession(claims.sid);
+          await recordSignOut(claims.sub);
+        }
         clearSessionCookie(res);
         res.status(204).end();
       },
@@ -73,7 +94,7 @@ export function authRouter(csrf: Csrf): Router {
       path: '/password-reset/request',
       access: 'public',
       handler: async (req, res) => {
-        await requestPasswordReset(parse(PasswordResetRequestSchema, req.body));
+        await requestPasswordReset(parse(PasswordResetRequestSchema, req.body), clientKey(req));
         res.status(202).json({ message: 'If an account uses this e-mail address, a reset link is on its way. It works for 60 minutes.' });
       },
     },

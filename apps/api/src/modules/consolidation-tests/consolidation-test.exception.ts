@@ -25,6 +25,19 @@ export const invalidTransition = (from: TestStatus, to: TestStatus) =>
     `This test cannot ${ACTION[to]} now: it is “${TEST_STATUS_LABELS[from]}”. ${NEXT_STEP[from]}`,
   );
 
+const CHANGED_WORDS: Record<string, string> = { 'set-up': 'set-up', picks: 'picks', readings: 'readings' };
+
+/** An approver changed the test in this review round: naming what, and when. */
+export const ownChanges = (changes: Array<{ kind: string; at: Date }>) =>
+  new DomainError(
+    'own_test',
+    `You changed this test's ${changes.map((c) => CHANGED_WORDS[c.kind] ?? c.kind).join(' and ')} since it was last approved (last on ${changes
+      .map((c) => c.at)
+      .reduce((a, b) => (a > b ? a : b))
+      .toISOString()
+      .slice(0, 10)}), so you cannot approve or send it back. Ask another lab manager to review it.`,
+  );
+
 export const ownTest = () =>
   new DomainError(
     'own_test',
@@ -34,6 +47,11 @@ export const ownTest = () =>
 export const technicianNotMember = () =>
   new DomainError('validation_failed', 'The technician must be a member of this organisation. Choose someone from the members list.', [
     { path: 'technicianId', message: 'Not a member of this organisation.' },
+  ]);
+
+export const technicianWithoutRole = () =>
+  new DomainError('validation_failed', 'The technician must hold the technician role in this organisation. Choose a technician, or ask an administrator to give this member the role.', [
+    { path: 'technicianId', message: 'This member is not a technician.' },
   ]);
 
 /** What the technician reads for each specimen value the analysis cannot do without. */

@@ -7,7 +7,8 @@ import { audit } from '../audit/audit.service.js';
 import { MembershipEntity } from '../organisations/membership.entity.js';
 import { SampleEntity } from '../samples/sample.entity.js';
 import { ConsolidationTestEntity } from './consolidation-test.entity.js';
-import { specimenLocked, technicianNotMember } from './consolidation-test.exception.js';
+import { specimenLocked, technicianNotMember, technicianWithoutRole } from './consolidation-test.exception.js';
+import { recordContribution } from './test-contributions.js';
 import { lockTest, moveTest } from './test-transition.js';
 
 export interface Actor {
@@ -44,13 +45,17 @@ export async function markReadingsUploaded(
       changes: { latestUploadId: options.uploadId, latestAnalysisId: null, submittedAt: null, submittedById: null },
       details: { uploadId: options.uploadId, staleAnalysisId: test.latestAnalysisId },
     });
+    await recordContribution(manager, test, actor.id, 'readings');
     return { analysisJobId: await enqueueAnalysis(orgId, testId, actor.id, manager) };
   };
   return options.manager ? work(options.manager) : dataSource.transaction(work);
 }
 
+/** The test's technician must be a member holding the technician role (not, say, a client). */
 async function assertTechnician(manager: EntityManager, orgId: string, userId: string): Promise<void> {
-  if (!(await manager.getRepository(MembershipEntity).existsBy({ organisationId: orgId, userId }))) throw technicianNotMember();
+  const membership = await manager.getRepository(MembershipEntity).findOneBy({ organisationId: orgId, userId });
+  if (!membership) throw technicianNotMember();
+  if (!membership.roles.includes('technician')) throw technicianWithoutRole();
 }
 
 function specimenColumns(specimen: TestUpdate['specimen']): Partial<ConsolidationTestEntity> {
@@ -92,6 +97,7 @@ export async function createTest(orgId: string, sampleId: string, input: TestCre
         picks: {},
       }),
     );
+    await recordContribution(manager, saved, actor.id, 'set-up');
     await audit.record(
       { organisationId: orgId, actorUserId: actor.id, action: 'test.created', objectType: 'consolidation_test', objectId: saved.id, details: { reference: input.reference, sampleId } },
       manager,
@@ -119,6 +125,7 @@ export async function updateTest(orgId: string, testId: string, input: TestUpdat
     if (input.startedOn !== undefined) changes.startedOn = input.startedOn;
     if (input.finishedOn !== undefined) changes.finishedOn = input.finishedOn;
     await manager.getRepository(ConsolidationTestEntity).update({ organisationId: orgId, id: testId }, changes);
+    if (Object.keys(changes).length > 0) await recordContribution(manager, test, actor.id, 'set-up');
     await audit.record(
       { organisationId: orgId, actorUserId: actor.id, action: 'test.updated', objectType: 'consolidation_test', objectId: testId, details: { fields: Object.keys(changes) } },
       manager,

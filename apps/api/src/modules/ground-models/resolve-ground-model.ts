@@ -1,9 +1,9 @@
-import { WATER_UNIT_WEIGHT_KN_PER_M3 } from '@porestack/geo-core';
 import { CompressibleParametersInputSchema, GroundModelContentInputSchema, type GroundModelContent, type GroundModelLayer, type ResolvedCompressibleParameters } from '@porestack/types';
 import type { z } from 'zod';
 import type { FieldIssue } from '../../errors/domain-error.js';
 import { setRevisionsByIds, type StoredSetRevision } from '../characteristic-sets/characteristic-sets.service.js';
 import { designVersions, type DesignVersion } from '../design-records/design-records.service.js';
+import { cvAtDesignRange } from './cv-at-design-range.js';
 import { groundModelWarnings } from './ground-model-warnings.js';
 
 type ContentInput = z.output<typeof GroundModelContentInputSchema>;
@@ -101,14 +101,8 @@ export async function resolveGroundModel(orgId: string, projectId: string, input
     return { ...base, source: { kind: 'hand' }, parameters: handParameters(given, (base.topDepthM + bottomDepthM) / 2) };
   });
   const content: GroundModelContent = { groundLevelM: input.groundLevelM, waterTableDepthM: input.waterTableDepthM, waterUnitWeightKnPerM3: input.waterUnitWeightKnPerM3, layers };
+  if (input.waterTableDepthM <= topDepthM) errors.push(...(await cvAtDesignRange(orgId, content, versions)));
   errors.push(...missingParameters(content));
-  if (Math.abs(input.waterUnitWeightKnPerM3 - WATER_UNIT_WEIGHT_KN_PER_M3) > 1e-9) {
-    // Until geo-core takes γw on the profile, any other value would be silently replaced by 9.81.
-    errors.push({
-      path: 'waterUnitWeightKnPerM3',
-      message: `This version of the settlement engine works with γw = ${WATER_UNIT_WEIGHT_KN_PER_M3} kN/m³ only; ${input.waterUnitWeightKnPerM3} kN/m³ cannot be used yet. Enter ${WATER_UNIT_WEIGHT_KN_PER_M3}.`,
-    });
-  }
   if (input.waterTableDepthM > topDepthM) {
     errors.push({
       path: 'waterTableDepthM',
@@ -163,7 +157,12 @@ function fromRecord(v: DesignVersion, given: ParametersInput): ResolvedCompressi
     preconsolidationKpa: value(v.preconsolidationKpa, given, 'preconsolidationKpa', given.preconsolidationKpa),
     preconsolidationDepthM: given.entered.includes('preconsolidationKpa') ? (given.preconsolidationDepthM ?? v.depthM) : v.depthM,
     ocr: given.entered.includes('ocr') ? { value: given.ocr, origin: 'hand' } : { value: null, origin: 'source' },
-    cvM2PerYr: { ...value(v.cvMinM2PerYr, given, 'cvM2PerYr', given.cvM2PerYr), basis: given.entered.includes('cvM2PerYr') ? 'entered by hand' : CV_BASIS_LOWEST },
+    cvM2PerYr: {
+      ...value(v.cvMinM2PerYr, given, 'cvM2PerYr', given.cvM2PerYr),
+      basis: given.entered.includes('cvM2PerYr') ? 'entered by hand' : CV_BASIS_LOWEST,
+      cvBasis: given.cvBasis,
+      cvFinalStressKpa: given.cvFinalStressKpa,
+    },
     cAlpha: value(v.cAlpha, given, 'cAlpha', given.cAlpha),
   };
 }
@@ -181,7 +180,12 @@ function fromSet(set: StoredSetRevision, given: ParametersInput): ResolvedCompre
     preconsolidationKpa: given.entered.includes('preconsolidationKpa') ? { value: given.preconsolidationKpa, origin: 'hand' } : { value: null, origin: 'source' },
     preconsolidationDepthM: given.entered.includes('preconsolidationKpa') ? given.preconsolidationDepthM : null,
     ocr: value(adopted('ocr'), given, 'ocr', given.ocr),
-    cvM2PerYr: { ...value(adopted('cvM2PerYr'), given, 'cvM2PerYr', given.cvM2PerYr), basis: given.entered.includes('cvM2PerYr') ? 'entered by hand' : 'adopted in the characteristic set' },
+    cvM2PerYr: {
+      ...value(adopted('cvM2PerYr'), given, 'cvM2PerYr', given.cvM2PerYr),
+      basis: given.entered.includes('cvM2PerYr') ? 'entered by hand' : 'adopted in the characteristic set',
+      cvBasis: 'lowest',
+      cvFinalStressKpa: null,
+    },
     cAlpha: value(adopted('cAlpha'), given, 'cAlpha', given.cAlpha),
   };
 }
@@ -196,7 +200,7 @@ function handParameters(given: ParametersInput, midDepthM: number): ResolvedComp
     preconsolidationKpa: hand(given.preconsolidationKpa),
     preconsolidationDepthM: given.preconsolidationKpa === null || given.preconsolidationKpa === undefined ? null : (given.preconsolidationDepthM ?? midDepthM),
     ocr: hand(given.ocr),
-    cvM2PerYr: { ...hand(given.cvM2PerYr), basis: 'entered by hand' },
+    cvM2PerYr: { ...hand(given.cvM2PerYr), basis: 'entered by hand', cvBasis: 'lowest', cvFinalStressKpa: null },
     cAlpha: hand(given.cAlpha),
   };
 }

@@ -1,4 +1,4 @@
-import { verticalStressAtDepth, type SoilLayer, type SoilProfile } from '@porestack/geo-core';
+import { carryPreconsolidationFromSample, verticalStressAtDepth, type SoilLayer, type SoilProfile } from '@porestack/geo-core';
 import type { GroundModelContent, GroundModelLayer } from '@porestack/types';
 
 export interface ProfileChoices {
@@ -8,11 +8,14 @@ export interface ProfileChoices {
   secondary: boolean;
 }
 
+/** How σ′p reaches geo-core for one layer: exactly one of the three, or none (normally consolidated). */
+type PreconsolidationFields = { ocr: number } | { preOverburdenPressureKpa: number } | { preconsolidationKpa: number } | Record<string, never>;
+
 /** geo-core's profile from a stored ground model, and how each layer's σ′p was carried. */
 export interface ProfileFromContent {
   profile: SoilProfile;
-  /** Per layer: the OCR or constant σ′p handed to geo-core (null for a layer with neither). */
-  preconsolidation: Array<{ ocr: number | null; preconsolidationKpa: number | null }>;
+  /** Per layer: the σ′p fields handed to geo-core. */
+  preconsolidation: PreconsolidationFields[];
   warnings: string[];
 }
 
@@ -21,44 +24,50 @@ function stressProfile(content: GroundModelContent): SoilProfile {
   return {
     groundLevelM: content.groundLevelM,
     waterTableDepthM: content.waterTableDepthM,
+    waterUnitWeightKnPerM3: content.waterUnitWeightKnPerM3,
     layers: content.layers.map((layer) => ({ name: layer.name, thicknessM: layer.thicknessM, unitWeightKnPerM3: layer.unitWeightKnPerM3, saturatedUnitWeightKnPerM3: layer.saturatedUnitWeightKnPerM3 })),
   };
 }
 
-/** σ′v0 of the ground model at a depth; a depth below the profile is read at its bottom. */
-export function effectiveStressAt(content: GroundModelContent, depthM: number): number {
+/** A depth clamped into the profile (a sample below its bottom is read at the bottom). */
+function withinProfile(content: GroundModelContent, depthM: number): number {
   const bottomM = content.layers.reduce((sum, layer) => sum + layer.thicknessM, 0);
-  return verticalStressAtDepth(stressProfile(content), Math.min(Math.max(depthM, 0), bottomM)).effectiveStressKpa;
+  return Math.min(Math.max(depthM, 0), bottomM);
 }
 
+/** σ′v0 of the ground model at a depth, with its γw. */
+export function effectiveStressAt(content: GroundModelContent, depthM: number): number {
+  return verticalStressAtDepth(stressProfile(content), withinProfile(content, depthM)).effectiveStressKpa;
+}
+
+const BASIS = { ocr: 'ocr', pop: 'pre-overburden-pressure', constant: 'preconsolidation-stress' } as const;
+
 /**
- * σ′p as geo-core takes it: an OCR constant through the layer, or a constant σ′p. A σ′p known at
- * one depth (a sample's) is carried by OCR = σ′p/σ′v0 at that depth of this ground model — so the
- * designer's unit weights and water table, not the lab's estimate, fix the in-situ stress.
+ * σ′p as geo-core takes it. A σ′p known at one depth (a sample's) is carried through the layer
+ * by geo-core's carryPreconsolidationFromSample — OCR or POP at that depth of this ground model,
+ * so the designer's unit weights, water table and γw, not the lab's estimate, fix the in-situ
+ * stress. An OCR given directly (hand, or a set's adopted OCR) is used as it is, or turned
+ * into POP or a constant σ′p at the layer's mid-depth.
  */
-function preconsolidationOf(content: GroundModelContent, layer: GroundModelLayer, index: number, warnings: string[]) {
+function preconsolidationOf(content: GroundModelContent, layer: GroundModelLayer, index: number, warnings: string[]): PreconsolidationFields {
   const p = layer.parameters;
-  if (p === null) return { ocr: null, preconsolidationKpa: null };
+  if (p === null) return {};
   const midDepthM = (layer.topDepthM + layer.bottomDepthM) / 2;
+  const label = `Layer ${index + 1} (${layer.name})`;
   if (p.ocr.value !== null) {
-    return p.preconsolidationCarry === 'constant' ? { ocr: null, preconsolidationKpa: p.ocr.value * effectiveStressAt(content, midDepthM) } : { ocr: p.ocr.value, preconsolidationKpa: null };
+    if (p.preconsolidationCarry === 'ocr') return { ocr: p.ocr.value };
+    const midKpa = effectiveStressAt(content, midDepthM);
+    return p.preconsolidationCarry === 'pop' ? { preOverburdenPressureKpa: (p.ocr.value - 1) * midKpa } : { preconsolidationKpa: p.ocr.value * midKpa };
   }
-  if (p.preconsolidationKpa.value === null) return { ocr: null, preconsolidationKpa: null };
-  if (p.preconsolidationCarry === 'constant') return { ocr: null, preconsolidationKpa: p.preconsolidationKpa.value };
-  const atDepthM = p.preconsolidationDepthM ?? midDepthM;
-  const inSituKpa = effectiveStressAt(content, atDepthM);
-  if (!(inSituKpa > 0)) {
-    warnings.push(`Layer ${index + 1} (${layer.name}): σ′v0 is zero at ${atDepthM.toFixed(2)} m, so no OCR can be had there; σ′p = ${p.preconsolidationKpa.value.toFixed(0)} kPa is kept constant through the layer.`);
-    return { ocr: null, preconsolidationKpa: p.preconsolidationKpa.value };
+  if (p.preconsolidationKpa.value === null) return {};
+  const atDepthM = withinProfile(content, p.preconsolidationDepthM ?? midDepthM);
+  if (!(effectiveStressAt(content, atDepthM) > 0)) {
+    warnings.push(`${label}: σ′v0 is zero at ${atDepthM.toFixed(2)} m, so σ′p = ${p.preconsolidationKpa.value.toFixed(0)} kPa is kept constant through the layer.`);
+    return { preconsolidationKpa: p.preconsolidationKpa.value };
   }
-  const ocr = p.preconsolidationKpa.value / inSituKpa;
-  if (ocr < 1) {
-    warnings.push(
-      `Layer ${index + 1} (${layer.name}): σ′p = ${p.preconsolidationKpa.value.toFixed(0)} kPa at ${atDepthM.toFixed(2)} m is below σ′v0 = ${inSituKpa.toFixed(0)} kPa of this ground model there (OCR ${ocr.toFixed(2)}); the layer is treated as normally consolidated. Check the unit weights and water table against the lab's.`,
-    );
-    return { ocr: 1, preconsolidationKpa: null };
-  }
-  return { ocr, preconsolidationKpa: null };
+  const carried = carryPreconsolidationFromSample({ profile: stressProfile(content), sampleDepthM: atDepthM, preconsolidationKpa: p.preconsolidationKpa.value, basis: BASIS[p.preconsolidationCarry] });
+  warnings.push(...carried.warnings.map((w) => `${label}: ${w}`));
+  return carried.layerFields;
 }
 
 /** The stored ground model as geo-core's SoilProfile; E′/ν and Cα dropped when the check leaves them out. */
@@ -67,7 +76,6 @@ export function soilProfileFromContent(content: GroundModelContent, choices: Pro
   const preconsolidation = content.layers.map((layer, index) => preconsolidationOf(content, layer, index, warnings));
   const layers = content.layers.map((layer, index): SoilLayer => {
     const p = layer.parameters;
-    const pre = preconsolidation[index] ?? { ocr: null, preconsolidationKpa: null };
     const optional = (key: string, v: number | null | undefined) => (v === null || v === undefined ? {} : { [key]: v });
     return {
       name: layer.name,
@@ -80,8 +88,7 @@ export function soilProfileFromContent(content: GroundModelContent, choices: Pro
             ...optional('e0', p.e0.value),
             ...optional('cc', p.cc.value),
             ...optional('cs', p.recompressionIndex.value),
-            ...optional('ocr', pre.ocr),
-            ...optional('preconsolidationKpa', pre.preconsolidationKpa),
+            ...preconsolidation[index],
             ...optional('cvM2PerYr', p.cvM2PerYr.value),
             ...(choices.secondary ? optional('cAlpha', p.cAlpha.value) : {}),
             drainageTop: layer.drainageTop,
@@ -90,5 +97,9 @@ export function soilProfileFromContent(content: GroundModelContent, choices: Pro
         : {}),
     };
   });
-  return { profile: { groundLevelM: content.groundLevelM, waterTableDepthM: content.waterTableDepthM, layers }, preconsolidation, warnings };
+  return {
+    profile: { groundLevelM: content.groundLevelM, waterTableDepthM: content.waterTableDepthM, waterUnitWeightKnPerM3: content.waterUnitWeightKnPerM3, layers },
+    preconsolidation,
+    warnings,
+  };
 }

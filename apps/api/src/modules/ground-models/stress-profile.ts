@@ -1,4 +1,4 @@
-import { verticalStressAtDepth } from '@porestack/geo-core';
+import { preconsolidationStressAtDepth } from '@porestack/geo-core';
 import type { GroundModelContent, SetMember, StressProfile } from '@porestack/types';
 import { soilProfileFromContent } from './soil-profile-from-content.js';
 
@@ -10,18 +10,17 @@ const POINTS_PER_LAYER = 12;
  * boundary), and the samples whose values the layers use.
  */
 export function stressProfile(content: GroundModelContent, setMembers: ReadonlyMap<string, readonly SetMember[]>): StressProfile {
-  const { profile, preconsolidation, warnings } = soilProfileFromContent(content, { immediate: true, secondary: true });
+  const { profile, warnings } = soilProfileFromContent(content, { immediate: true, secondary: true });
   // Summed as geo-core sums it, so the last point is never a rounding error below the profile.
   const bottomM = profile.layers.reduce((sum, layer) => sum + layer.thicknessM, 0);
-  const points = content.layers.flatMap((layer, index) => {
-    const pre = preconsolidation[index] ?? { ocr: null, preconsolidationKpa: null };
-    return Array.from({ length: POINTS_PER_LAYER }, (_, step) => {
+  const points = content.layers.flatMap((layer) =>
+    Array.from({ length: POINTS_PER_LAYER }, (_, step) => {
       const depthM = Math.min(bottomM, step === POINTS_PER_LAYER - 1 ? layer.bottomDepthM : layer.topDepthM + (layer.thicknessM * step) / (POINTS_PER_LAYER - 1));
-      const state = verticalStressAtDepth(profile, depthM);
-      const preconsolidationKpa = pre.ocr !== null ? pre.ocr * state.effectiveStressKpa : pre.preconsolidationKpa;
-      return { depthM, ...state, preconsolidationKpa: layer.kind === 'compressible' ? (preconsolidationKpa ?? state.effectiveStressKpa) : null };
-    });
-  });
+      // A layer's top is also the layer above's bottom: read it just inside this layer.
+      const at = preconsolidationStressAtDepth(profile, step === 0 && depthM > 0 ? Math.min(bottomM, depthM + 1e-9) : depthM);
+      return { depthM, totalStressKpa: at.totalStressKpa, porePressureKpa: at.porePressureKpa, effectiveStressKpa: at.effectiveStressKpa, preconsolidationKpa: at.preconsolidationKpa };
+    }),
+  );
   const samples = content.layers.flatMap((layer, layerIndex) => {
     const source = layer.source;
     if (source?.kind === 'record') {

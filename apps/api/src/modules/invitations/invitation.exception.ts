@@ -25,6 +25,11 @@ export const passwordTooShort = (min: number) =>
     { path: 'password', message: `Use a password of at least ${min} characters.` },
   ]);
 
+export const passwordTooLong = (maxBytes: number) =>
+  new DomainError('validation_failed', `The request was not accepted. password: Use a password of at most ${maxBytes} bytes.`, [
+    { path: 'password', message: `Use a password of at most ${maxBytes} bytes (72 plain letters or digits; accented letters and symbols count two to four).` },
+  ]);
+
 export const invitationMailFailed = () =>
   new DomainError(
     'service_unavailable',

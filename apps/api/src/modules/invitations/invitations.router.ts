@@ -4,7 +4,7 @@ import { uuidParam } from '../../http/params.js';
 import { parse } from '../../http/parse.js';
 import { currentTenant, currentUser } from '../../http/request-context.js';
 import { defineRoutes } from '../../http/routes.js';
-import { setSessionCookie } from '../../http/session-cookie.js';
+import { openSession } from '../../http/session-cookie.js';
 import { sessionFor } from '../users/sessions.service.js';
 import {
   acceptInvitation,
@@ -31,7 +31,7 @@ export function invitationsRouter(): Router {
       access: 'public',
       handler: async (req, res) => {
         const user = await acceptInvitation(String(req.params['token']), parse(InvitationAcceptSchema, req.body));
-        setSessionCookie(res, user);
+        await openSession(res, user);
         res.json(await sessionFor(user));
       },
     },

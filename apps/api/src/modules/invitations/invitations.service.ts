@@ -1,4 +1,4 @@
-import type { Invitation, InvitationAccept, InvitationCreate, InvitationPreview } from '@porestack/types';
+import { PASSWORD_MAX_BYTES, type Invitation, type InvitationAccept, type InvitationCreate, type InvitationPreview } from '@porestack/types';
 import { IsNull, MoreThan, type EntityManager } from 'typeorm';
 import { dataSource } from '../../data-source.js';
 import { NotFoundError } from '../../errors/domain-error.js';
@@ -10,7 +10,7 @@ import { invalidCredentials } from '../auth/auth.exception.js';
 import { createOneTimeToken, hashToken } from '../auth/one-time-token.js';
 import { MembershipEntity } from '../organisations/membership.entity.js';
 import { OrganisationEntity } from '../organisations/organisation.entity.js';
-import { hashPassword, MIN_PASSWORD_LENGTH, verifyPassword } from '../users/passwords.js';
+import { byteLength, hashPassword, MIN_PASSWORD_LENGTH, verifyPassword } from '../users/passwords.js';
 import { UserEntity } from '../users/user.entity.js';
 import {
   alreadyMember,
@@ -20,6 +20,7 @@ import {
   invitationMailFailed,
   invitationUsed,
   nameRequired,
+  passwordTooLong,
   passwordTooShort,
 } from './invitation.exception.js';
 import { InvitationEntity } from './invitation.entity.js';
@@ -173,6 +174,7 @@ export async function acceptInvitation(token: string, input: InvitationAccept): 
     } else {
       if (!input.name) throw nameRequired();
       if (input.password.length < MIN_PASSWORD_LENGTH) throw passwordTooShort(MIN_PASSWORD_LENGTH);
+      if (byteLength(input.password) > PASSWORD_MAX_BYTES) throw passwordTooLong(PASSWORD_MAX_BYTES);
       user = await users.save(users.create({ email: row.email, name: input.name, passwordHash: await hashPassword(input.password) }));
       await audit.record(
         { organisationId: null, actorUserId: user.id, action: 'user.signed_up', objectType: 'user', objectId: user.id, details: { via: 'invitation' } },

@@ -1,5 +1,4 @@
-import type { ConsolidationTestResult } from '@porestack/geo-core';
-import type { ReviewEvent, ReviewQueueItem, TestStatus } from '@porestack/types';
+import type { ConsolidationTestResult, ReviewEvent, ReviewQueueItem, TestStatus } from '@porestack/types';
 import type { EntityManager } from 'typeorm';
 import { dataSource } from '../../data-source.js';
 import { NotFoundError } from '../../errors/domain-error.js';
@@ -7,7 +6,8 @@ import { AnalysisEntity } from '../analyses/analysis.entity.js';
 import { noAnalysis } from '../analyses/analysis.exception.js';
 import { keyParametersFrom } from '../analyses/key-parameters.js';
 import type { ConsolidationTestEntity } from '../consolidation-tests/consolidation-test.entity.js';
-import { ownTest } from '../consolidation-tests/consolidation-test.exception.js';
+import { ownChanges, ownTest } from '../consolidation-tests/consolidation-test.exception.js';
+import { contributionsThisRound } from '../consolidation-tests/test-contributions.js';
 import type { Actor } from '../consolidation-tests/consolidation-tests.service.js';
 import { findTestOrThrow } from '../consolidation-tests/consolidation-tests.service.js';
 import { lockTest, moveTest } from '../consolidation-tests/test-transition.js';
@@ -44,16 +44,21 @@ export async function submitTest(orgId: string, testId: string, actor: Actor): P
   await notifySubmitted(await testContext(orgId, testId), warningCount);
 }
 
-/** Nobody reviews a test they ran or submitted. */
-function assertNotOwn(test: ConsolidationTestEntity, actor: Actor): void {
+/**
+ * Nobody reviews a test they ran or submitted, nor one whose set-up, picks or readings they
+ * changed since its last approval (test_contributions), whoever its technician is.
+ */
+async function assertNotOwn(manager: EntityManager, test: ConsolidationTestEntity, actor: Actor): Promise<void> {
   if (test.technicianId === actor.id || test.submittedById === actor.id) throw ownTest();
+  const changed = await contributionsThisRound(manager, test.organisationId, test.id, actor.id);
+  if (changed.length > 0) throw ownChanges(changed);
 }
 
 /** Approval: the next soil record version, e-mails to the technician and the project's designers. */
 export async function approveTest(orgId: string, testId: string, actor: Actor & { name: string }, comment: string | null): Promise<{ recordId: string; version: number }> {
   const outcome = await dataSource.transaction(async (manager) => {
     const { test, analysis } = await lockedWithAnalysis(manager, orgId, testId);
-    assertNotOwn(test, actor);
+    await assertNotOwn(manager, test, actor);
     await moveTest(manager, test, 'approved', actor.id, { details: { analysisId: analysis?.id ?? null, comment } });
     if (!analysis) throw noAnalysis();
     await recordEvent(manager, test, 'approved', actor.id, analysis.id, comment);
@@ -70,7 +75,7 @@ export async function approveTest(orgId: string, testId: string, actor: Actor & 
 export async function requestChanges(orgId: string, testId: string, actor: Actor & { name: string }, comment: string): Promise<void> {
   await dataSource.transaction(async (manager) => {
     const { test, analysis } = await lockedWithAnalysis(manager, orgId, testId);
-    assertNotOwn(test, actor);
+    await assertNotOwn(manager, test, actor);
     await moveTest(manager, test, 'changes_requested', actor.id, { details: { comment } });
     await recordEvent(manager, test, 'changes_requested', actor.id, analysis?.id ?? null, comment);
   });
@@ -126,6 +131,7 @@ export async function reviewQueue(orgId: string): Promise<ReviewQueueItem[]> {
     technicianId: row['technician_id'] as string,
     technicianName: row['technician_name'] as string,
     submittedAt: (row['submitted_at'] as Date).toISOString(),
+    // analyses.result is stored only after ConsolidationTestResultSchema has checked it (runAnalysis).
     keyParameters: keyParametersFrom((row['result'] as ConsolidationTestResult | null) ?? null),
     warningCount: (row['warning_count'] as number | null) ?? 0,
   }));

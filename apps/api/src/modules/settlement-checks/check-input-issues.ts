@@ -1,6 +1,7 @@
+import { overlappingFootingPairs } from '@porestack/geo-core';
 import type { CheckOptions, FootingRow, GroundModelContent } from '@porestack/types';
 import type { FieldIssue } from '../../errors/domain-error.js';
-import { planExtent } from './footing-geometry.js';
+import { engineFootings } from './run-check-engine.js';
 
 const rowLabel = (index: number, footing: FootingRow) => `Row ${index + 1} (${footing.id})`;
 
@@ -31,12 +32,6 @@ export function checkInputIssues(content: GroundModelContent, footings: readonly
     if (footing.shape === 'rectangle' && footing.lengthM === null) {
       errors.push({ path: `footings.${index}.lengthM`, message: `${label}: a rectangle needs its length L (m). Enter L, or make the shape square.` });
     }
-    if (footing.shape === 'circle' || footing.shape === 'strip') {
-      errors.push({
-        path: `footings.${index}.shape`,
-        message: `${label}: ${footing.shape} footings are not yet handled by this version of the settlement engine. Enter it as a rectangle for now (a circle of diameter D as a square of side 0.886·D; a strip as a rectangle 10 times as long as it is wide).`,
-      });
-    }
     if (footing.depthM >= bottomM) {
       errors.push({
         path: `footings.${index}.depthM`,
@@ -52,25 +47,11 @@ export function checkInputIssues(content: GroundModelContent, footings: readonly
   return { errors, warnings };
 }
 
-/** Footings whose plan areas overlap (each pair once): usually a typing slip in x, y or a size. */
+/** Footings whose plan areas overlap (geo-core's overlappingFootingPairs), each pair once: usually a typing slip in x, y or a size. */
 function overlaps(footings: readonly FootingRow[]): FieldIssue[] {
-  const extents = footings.map(planExtent);
-  const order = extents.map((_, index) => index).sort((a, b) => extents[a]!.minX - extents[b]!.minX);
-  const issues: FieldIssue[] = [];
-  // Sweep along x: only footings whose x-ranges overlap are compared, so 2,000 rows stay quick.
-  for (let i = 0; i < order.length; i += 1) {
-    const a = extents[order[i]!]!;
-    for (let j = i + 1; j < order.length; j += 1) {
-      const b = extents[order[j]!]!;
-      if (b.minX >= a.maxX) break;
-      if (b.minY < a.maxY && a.minY < b.maxY) {
-        const [first, second] = [order[i]!, order[j]!].sort((x, y) => x - y) as [number, number];
-        issues.push({
-          path: `footings.${second}`,
-          message: `Rows ${first + 1} (${footings[first]!.id}) and ${second + 1} (${footings[second]!.id}) overlap on plan. Check their x, y and sizes.`,
-        });
-      }
-    }
-  }
-  return issues;
+  const rowOf = new Map(footings.map((footing, index) => [footing.id, index]));
+  return overlappingFootingPairs(engineFootings(footings)).map(([a, b]) => {
+    const [first, second] = [rowOf.get(a) ?? 0, rowOf.get(b) ?? 0].sort((x, y) => x - y) as [number, number];
+    return { path: `footings.${second}`, message: `Rows ${first + 1} (${footings[first]!.id}) and ${second + 1} (${footings[second]!.id}) overlap on plan. Check their x, y and sizes.` };
+  });
 }

@@ -1,9 +1,8 @@
-import { runSettlementCheck, settlementUnderUniformLoad, verticalStressAtDepth, type Footing, type SettlementCheckOptions } from '@porestack/geo-core';
+import { runSettlementCheck, settlementUnderUniformLoad, type Footing, type SettlementCheckOptions } from '@porestack/geo-core';
 import type { CheckOptions, CheckRunResult, FootingRow, GroundModelContent } from '@porestack/types';
 import { DomainError } from '../../errors/domain-error.js';
 import { soilProfileFromContent } from '../ground-models/soil-profile-from-content.js';
 import type { FootingAsRun } from './check-revision.entity.js';
-import { planAreaM2, planSides } from './footing-geometry.js';
 import { asStoredResult } from './result-contract.js';
 
 /** A run's result as geo-core gave it (every footing's sublayers and time curve included). */
@@ -30,27 +29,15 @@ export function engineOptions(options: CheckOptions): SettlementCheckOptions {
 }
 
 /**
- * The footings as geo-core takes them: plan sides, and the net pressure — a gross pressure less
- * the total overburden σv at founding level (the weight of the soil removed).
+ * The footings as geo-core takes them: shape and plan, a load (kN; kN/m for a strip) or a
+ * pressure (kPa), net or gross — geo-core nets a gross pressure against σv0 at founding level.
  */
-export function engineFootings(footings: readonly FootingRow[], profile: ReturnType<typeof soilProfileFromContent>['profile']): { footings: Footing[]; asRun: FootingAsRun[]; warnings: string[] } {
-  const warnings: string[] = [];
-  const asRun: FootingAsRun[] = [];
-  const engine = footings.map((row, index): Footing => {
-    const { alongXM, alongYM } = planSides(row);
-    const grossPressureKpa = row.loadKind === 'pressure' ? row.load : row.load / planAreaM2(row);
-    const overburdenKpa = row.loadBasis === 'gross' ? verticalStressAtDepth(profile, row.depthM).totalStressKpa : 0;
-    let netPressureKpa = grossPressureKpa - overburdenKpa;
-    if (netPressureKpa < 0) {
-      warnings.push(
-        `Row ${index + 1} (${row.id}): the gross pressure (${grossPressureKpa.toFixed(1)} kPa) is less than the weight of soil removed (${overburdenKpa.toFixed(1)} kPa), so the net pressure is taken as zero: the footing is fully compensated and adds no settlement of its own.`,
-      );
-      netPressureKpa = 0;
-    }
-    asRun.push({ id: row.id, shape: row.shape, grossPressureKpa, overburdenKpa, netPressureKpa });
-    return { id: row.id, xM: row.xM, yM: row.yM, widthM: alongXM, lengthM: alongYM, depthM: row.depthM, pressureKpa: netPressureKpa };
+export function engineFootings(footings: readonly FootingRow[]): Footing[] {
+  return footings.map((row): Footing => {
+    const load = row.loadKind === 'pressure' ? { pressureKpa: row.load } : row.shape === 'strip' ? { loadKnPerM: row.load } : { loadKn: row.load };
+    const plan = row.shape === 'rectangle' ? { shape: 'rectangle' as const, widthM: row.widthM, lengthM: row.lengthM ?? row.widthM } : { shape: row.shape, widthM: row.widthM };
+    return { id: row.id, xM: row.xM, yM: row.yM, depthM: row.depthM, pressureBasis: row.loadBasis, ...load, ...plan } as Footing;
   });
-  return { footings: engine, asRun, warnings };
 }
 
 /**
@@ -74,12 +61,11 @@ export function runCheckEngine(content: GroundModelContent, footings: readonly F
       });
       return { result: asStoredResult({ kind: 'uniform', check }), footingsAsRun: [], warnings: [...profileWarnings, ...check.warnings], durationMs: performance.now() - started };
     }
-    const prepared = engineFootings(footings, profile);
-    const check = runSettlementCheck({ profile, footings: prepared.footings, options: engineOptions(options) });
+    const check = runSettlementCheck({ profile, footings: engineFootings(footings), options: engineOptions(options) });
     return {
       result: asStoredResult({ kind: 'footings', check }),
-      footingsAsRun: prepared.asRun,
-      warnings: [...profileWarnings, ...prepared.warnings, ...check.warnings],
+      footingsAsRun: check.footings.map((f) => ({ id: f.id, shape: f.shape, grossPressureKpa: f.grossPressureKpa ?? f.pressureKpa, overburdenKpa: f.overburdenRemovedKpa ?? 0, netPressureKpa: f.pressureKpa })),
+      warnings: [...profileWarnings, ...check.warnings],
       durationMs: performance.now() - started,
     };
   } catch (error) {

@@ -1,4 +1,3 @@
-import type { ConsolidationTestResult } from '@porestack/geo-core';
 import type { SoilRecordDetail, SoilRecordSummary, SoilRecordVersion } from '@porestack/types';
 import type { EntityManager } from 'typeorm';
 import { dataSource } from '../../data-source.js';
@@ -35,7 +34,7 @@ export async function createVersion(
     await records.update({ id: record.id }, { currentVersion: number });
     record.currentVersion = number;
   }
-  const result = analysis.result as unknown as ConsolidationTestResult;
+  const { result } = analysis;
   const cv = cvRange(result);
   const version = await versions.save(
     versions.create({

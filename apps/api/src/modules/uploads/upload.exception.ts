@@ -1,6 +1,6 @@
 import type { TestStatus } from '@porestack/types';
 import { DomainError } from '../../errors/domain-error.js';
-import { ImportProblem } from '../readings-import/import-problem.js';
+import type { ImportProblem } from '../readings-import/import-problem.js';
 
 export const fileTooLarge = (maxMb: number) =>
   new DomainError(

@@ -148,7 +148,7 @@ function CheckPage({ orgId, projectId, check, canEdit }: { orgId: string; projec
         ))}
       </nav>
       {tab === 'schedule' ? (
-        <Panel title="Footing schedule" description="B along x, L along y; depths below ground level. A load is in kN (kN per metre for a strip), a pressure in kPa; gross loads are netted against the soil removed.">
+        <Panel title="Footing schedule" description="B along x (a circle's diameter, a strip's width), L along y (rectangles only); depths below ground level. A load is in kN (kN per metre for a strip), a pressure in kPa; gross loads are netted against the soil removed.">
           <FootingScheduleEditor key={check.updatedAt} orgId={orgId} projectId={projectId} check={check} canEdit={canEdit} running={run.isPending} onRun={() => run.mutate({}, { onSuccess: ran })} />
         </Panel>
       ) : tab === 'options' ? (

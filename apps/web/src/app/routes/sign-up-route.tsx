@@ -1,18 +1,20 @@
-import { Link, Navigate, useNavigate } from 'react-router-dom';
+import { useState } from 'react';
+import { Link, Navigate } from 'react-router-dom';
+import { Alert } from '../../components/alert';
 import { paths } from '../../config/paths';
 import { SignUpForm } from '../../features/auth/components/sign-up-form';
 import { useSession } from '../../features/auth/hooks/use-session';
 import { AuthPanel } from '../layout/auth-panel';
 
 export function SignUpRoute() {
-  const navigate = useNavigate();
   const { session } = useSession();
+  const [sent, setSent] = useState<string | null>(null);
   if (session) return <Navigate to={paths.root.to()} replace />;
 
   return (
     <AuthPanel
       title="Create an account"
-      description="Set up your organisation in Porestack. Colleagues join later by invitation, each with their own role."
+      description="Set up your organisation in Porestack. Colleagues join later by invitation, each with their own roles."
       footer={
         <>
           Already have an account?{' '}
@@ -22,12 +24,13 @@ export function SignUpRoute() {
         </>
       }
     >
-      <SignUpForm
-        onSignedUp={(created) => {
-          const org = created.memberships[0];
-          void navigate(org ? paths.org.home.to(org.organisationId) : paths.root.to(), { replace: true });
-        }}
-      />
+      {sent ? (
+        <Alert tone="success" title="Check your inbox">
+          {sent} You can close this page.
+        </Alert>
+      ) : (
+        <SignUpForm onSent={setSent} />
+      )}
     </AuthPanel>
   );
 }

@@ -1,3 +1,4 @@
+import type * as PlotlyNamespace from 'plotly.js-dist-min';
 import type { Config, Data, Layout, PlotMouseEvent } from 'plotly.js-dist-min';
 import { useEffect, useRef, useState } from 'react';
 import { Alert } from '../alert';
@@ -17,7 +18,7 @@ type PlotlyChartProps = {
   heightPx?: number;
 };
 
-type PlotlyModule = typeof import('plotly.js-dist-min');
+type PlotlyModule = typeof PlotlyNamespace;
 
 const CONFIG: Partial<Config> = { displaylogo: false, responsive: true, modeBarButtonsToRemove: ['select2d', 'lasso2d'] };
 

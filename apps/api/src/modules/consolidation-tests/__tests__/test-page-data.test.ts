@@ -4,11 +4,10 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { createApp } from '../../../app.js';
 import { dataSource } from '../../../data-source.js';
 import { analyseTestJob } from '../../../jobs/analyse-test.job.js';
-import { ANALYSE_TEST_QUEUE } from '../../../jobs/analyse-test-queue.js';
-import { BOSS_SCHEMA, createBoss, stopJobQueue } from '../../../jobs/boss.js';
-import { registerJobs } from '../../../jobs/register-jobs.js';
+import { stopJobQueue } from '../../../jobs/boss.js';
 import { createMember, signedInBrowser, signUpAdmin, type Browser } from '../../../testing/browser.js';
 import { analysedTest, draftTest, uploadKnownReadings } from '../../../testing/lab-fixtures.js';
+import { startTestWorker } from '../../../testing/test-worker.js';
 import { ConsolidationTestEntity } from '../consolidation-test.entity.js';
 
 const app = createApp();
@@ -30,13 +29,7 @@ describe('what the test page reads: one increment of readings, the last analysis
   let tech: Browser;
 
   beforeAll(async () => {
-    // Files run one after another: analyses still queued now were left by earlier files (which
-    // ran no worker) and would only delay this file's own jobs.
-    await dataSource.query(`DELETE FROM ${BOSS_SCHEMA}.job WHERE name = $1 AND state IN ('created', 'retry')`, [ANALYSE_TEST_QUEUE]);
-    boss = createBoss();
-    boss.on('error', () => undefined);
-    await boss.start();
-    await registerJobs(boss, [analyseTestJob]);
+    boss = await startTestWorker([analyseTestJob]);
     const admin = await signUpAdmin(app, 'page-data-admin');
     orgId = admin.orgId;
     const t = await createMember(orgId, 'technician', 'page-data-tech');

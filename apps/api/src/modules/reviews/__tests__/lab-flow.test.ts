@@ -6,11 +6,11 @@ import { createApp } from '../../../app.js';
 import { env } from '../../../config/env.js';
 import { dataSource } from '../../../data-source.js';
 import { analyseTestJob } from '../../../jobs/analyse-test.job.js';
-import { createBoss, stopJobQueue } from '../../../jobs/boss.js';
-import { registerJobs } from '../../../jobs/register-jobs.js';
+import { stopJobQueue } from '../../../jobs/boss.js';
 import { createMember, signedInBrowser, signUpAdmin, type Browser } from '../../../testing/browser.js';
 import { draftTest, KNOWN_SOIL, KNOWN_TEST, submittedTest, uploadKnownReadings } from '../../../testing/lab-fixtures.js';
 import { linkIn, waitForMail } from '../../../testing/mail-inbox.js';
+import { startTestWorker } from '../../../testing/test-worker.js';
 
 const app = createApp();
 let boss: PgBoss;
@@ -50,10 +50,7 @@ describe('lab workflow: readings → analysis → review → soil record version
 
   beforeAll(async () => {
     // The real worker, in this process, on the real queue.
-    boss = createBoss();
-    boss.on('error', () => undefined);
-    await boss.start();
-    await registerJobs(boss, [analyseTestJob]);
+    boss = await startTestWorker([analyseTestJob]);
     const signedUp = await signUpAdmin(app, 'lab-admin');
     orgId = signedUp.orgId;
     admin = signedUp.browser;
@@ -225,16 +222,46 @@ describe('lab workflow: readings → analysis → review → soil record version
   });
 
   it('when a lab manager ran a test themselves, then they may not approve it (403 with the reason), and another manager may', async () => {
-    const own = await submittedTest(orgId, managerId);
-    const res = await manager.post(`/api/orgs/${orgId}/tests/${own.testId}/approve`, {}).expect(403);
+    const hands = await createMember(orgId, ['lab_manager', 'technician'], 'hands-on-manager');
+    const handsOn = await signedInBrowser(app, hands.email);
+    const own = await submittedTest(orgId, hands.userId);
+    const res = await handsOn.post(`/api/orgs/${orgId}/tests/${own.testId}/approve`, {}).expect(403);
     expect(res.body).toMatchObject({ code: 'own_test' });
     expect(res.body.message).toMatch(/you ran or submitted yourself/);
-    await manager.post(`/api/orgs/${orgId}/tests/${own.testId}/request-changes`, { comment: 'Looks fine to me' }).expect(403);
+    await handsOn.post(`/api/orgs/${orgId}/tests/${own.testId}/request-changes`, { comment: 'Looks fine to me' }).expect(403);
     await manager2.post(`/api/orgs/${orgId}/tests/${own.testId}/approve`, {}).expect(200);
   });
 
+  it('when a lab manager set a test up for another technician and overrode its σ′p, then they may not approve it: their changes are named; another manager may', async () => {
+    const setUp = await draftTest(orgId, techId);
+    // The manager, not the technician, changes the set-up and the picks.
+    await manager.patch(`/api/orgs/${orgId}/tests/${setUp.testId}`, { apparatusName: 'Frame 9' }).expect(200);
+    const first = await uploadKnownReadings(orgId, setUp.testId, techId);
+    await waitForJob(tech, orgId, first.analysisJobId);
+    const picked = await put(manager, `/api/orgs/${orgId}/tests/${setUp.testId}/picks`, { picks: { preconsolidationStressKpa: 999 }, reason: 'Read from the plot' }).expect(202);
+    expect((await waitForJob(manager, orgId, picked.body.job.id)).state).toBe('succeeded');
+    await tech.post(`/api/orgs/${orgId}/tests/${setUp.testId}/submit`).expect(200);
+
+    const refused = await manager.post(`/api/orgs/${orgId}/tests/${setUp.testId}/approve`, {}).expect(403);
+    expect(refused.body.code).toBe('own_test');
+    expect(refused.body.message).toMatch(/^You changed this test's picks and set-up since it was last approved \(last on \d{4}-\d{2}-\d{2}\), so you cannot approve or send it back\. Ask another lab manager to review it\.$/);
+    expect((await manager.get(`/api/orgs/${orgId}/tests/${setUp.testId}`).expect(200)).body.status).toBe('submitted');
+    // The history cannot be rewritten to slip past the rule.
+    await expect(dataSource.query('DELETE FROM test_contributions WHERE test_id = $1', [setUp.testId])).rejects.toThrow(/insert-only/);
+    await manager2.post(`/api/orgs/${orgId}/tests/${setUp.testId}/approve`, {}).expect(200);
+  });
+
+  it('when a test is given a technician who does not hold the technician role (a client), then 400 names the field and nothing changes', async () => {
+    const client = await createMember(orgId, 'client', 'not-a-technician');
+    const fixture = await draftTest(orgId, techId);
+    const res = await manager.patch(`/api/orgs/${orgId}/tests/${fixture.testId}`, { technicianId: client.userId }).expect(400);
+    expect(res.body.issues).toEqual([{ path: 'technicianId', message: 'This member is not a technician.' }]);
+    const detail = (await manager.get(`/api/orgs/${orgId}/tests/${fixture.testId}`).expect(200)).body;
+    expect(detail.technicianId ?? detail.technician?.id).toBe(techId);
+  });
+
   it('when an administrator who is also lab manager ran a test, then she may not approve it (403 with the reason), and another admin and lab manager may', async () => {
-    const first = await createMember(orgId, ['admin', 'lab_manager'], 'small-lab-head');
+    const first = await createMember(orgId, ['admin', 'lab_manager', 'technician'], 'small-lab-head');
     const second = await createMember(orgId, ['admin', 'lab_manager'], 'small-lab-deputy');
     const own = await submittedTest(orgId, first.userId);
     const firstBrowser = await signedInBrowser(app, first.email);

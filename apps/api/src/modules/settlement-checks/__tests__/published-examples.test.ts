@@ -83,12 +83,12 @@ describe('published settlement examples through the API', () => {
   });
 
   it('S4 — CIE 365, Example 7.4(a): 25 ft of clay under the strip’s Δσ = 3749 psf at mid-depth gives σ′0 = 782.5 psf and 2.57 ft', async () => {
-    // Entered in SI as a designer would, converted at the edge with geo-core's NIST factors.
-    // γw is 9.81 kN/m³ here (62.4 pcf = 9.802 kN/m³ in the source): σ′0 differs by 0.08 %, inside the 0.5 %.
+    // Entered in SI as a designer would, converted at the edge with geo-core's NIST factors, γw = 62.4 pcf as the source has it.
     const unitWeight = convertUnit(125, 'pcf', 'knPerM3');
     const model: GroundModelCreate = {
       name: 'S4',
       waterTableDepthM: 0,
+      waterUnitWeightKnPerM3: convertUnit(62.4, 'pcf', 'knPerM3'),
       layers: [
         {
           name: 'clay',
@@ -105,5 +105,32 @@ describe('published settlement examples through the API', () => {
     expectWithin(row.initialEffectiveStressKpa, convertUnit(782.5, 'psf', 'kPa'), 'σ′0 at mid-clay');
     expectWithin(row.preconsolidationKpa, convertUnit(1174, 'psf', 'kPa'), 'σ′p at mid-clay');
     expectWithin(totalM, 2.57 * FOOT_M, 'settlement');
+  });
+
+  it('S5 — GATE 2020 Civil Engineering, Set II (2-mark question) with its published solution: a 2 m square footing at 1.5 m, 200 kPa by 2V:1H, γw = 10, gives σ′0 = 39.25 kPa, Δσ = 56.89 kPa and 74.28 mm', async () => {
+    // Sand γ 15 kN/m³ to the water table at 2.0 m and γsat 18 to 2.5 m; clay 2.5–4.0 m, γsat 17, Cc 0.30, NC,
+    // e0 = 1.357 from γsat = (Gs + e)γw/(1 + e) with Gs 2.65 (as the published solution takes it).
+    const groundModel = await createGroundModel(world, {
+      name: 'S5',
+      waterTableDepthM: 2,
+      waterUnitWeightKnPerM3: 10,
+      layers: [
+        { name: 'sand', kind: 'granular', thicknessM: 2.5, unitWeightKnPerM3: 15, saturatedUnitWeightKnPerM3: 18 },
+        { name: 'clay', kind: 'compressible', thicknessM: 1.5, unitWeightKnPerM3: 17, saturatedUnitWeightKnPerM3: 17, source: { kind: 'hand' }, parameters: { e0: 1.357, cc: 0.3 } },
+      ],
+    });
+    const check = await createCheck(world, {
+      name: 'S5',
+      groundModelId: groundModel.id,
+      footings: [{ id: 'F', shape: 'square', widthM: 2, depthM: 1.5, loadKind: 'pressure', load: 200, loadBasis: 'net', xM: 0, yM: 0 }],
+      options: { stressMethod: '2to1', sublayerMode: 'count', sublayerCount: 1, evaluationPoints: 'centre' },
+    });
+    const revision = await runAndRead(world, check.id);
+    if (revision.result.kind !== 'footings') throw new Error('expected a footing result');
+    const footing = revision.result.check.footings[0]!;
+    const [row] = footing.sublayers;
+    expectWithin(row!.initialEffectiveStressKpa, 39.25, 'σ′0 at mid-clay');
+    expectWithin(row!.stressIncreaseKpa, 56.89, 'Δσ at mid-clay');
+    expectWithin(footing.totalM, 0.07428, 'settlement');
   });
 });

@@ -4,7 +4,7 @@ import { PlotlyChart, type PlotLayout } from '../../../components/plot/plotly-ch
 import { Select } from '../../../components/select';
 import { LoadingBlock } from '../../../components/spinner';
 import { useIncrementReadings } from '../api/get-increment-readings';
-import type { AnalysisResult } from './analysis-result';
+import type { ConsolidationTestResult } from '@porestack/types';
 import { coefficientTraces, compressionTraces, logTimeTraces, PLOT_COLOURS, taylorTraces } from './plot-traces';
 
 const LOG_STRESS = { title: { text: 'Effective vertical stress σ′ (kPa)' }, type: 'log' as const };
@@ -12,7 +12,7 @@ const LOG_STRESS = { title: { text: 'Effective vertical stress σ′ (kPa)' }, t
 type Proposal = { preconsolidationStressKpa?: number; t90Min?: number; t50Min?: number };
 
 /** e–log σ′ and ε–log σ′ with both σ′p constructions; a click on a point proposes σ′p there. */
-export function CompressionPlots({ result, onPropose }: { result: AnalysisResult; onPropose: (p: Proposal) => void }) {
+export function CompressionPlots({ result, onPropose }: { result: ConsolidationTestResult; onPropose: (p: Proposal) => void }) {
   const voidRatio = useMemo(() => compressionTraces(result, 'voidRatio'), [result]);
   const strain = useMemo(() => compressionTraces(result, 'strain'), [result]);
   const eLayout = useMemo<Partial<PlotLayout>>(() => ({ xaxis: LOG_STRESS, yaxis: { title: { text: 'Void ratio e' } }, hovermode: 'closest' }), []);
@@ -29,7 +29,7 @@ export function CompressionPlots({ result, onPropose }: { result: AnalysisResult
 }
 
 /** Offsets of each increment's first reading in test order, from the analysis' reading counts. */
-function readingOffsets(result: AnalysisResult): Map<number, { offset: number; count: number }> {
+function readingOffsets(result: ConsolidationTestResult): Map<number, { offset: number; count: number }> {
   const offsets = new Map<number, { offset: number; count: number }>();
   let offset = 0;
   for (const increment of result.increments) {
@@ -39,10 +39,14 @@ function readingOffsets(result: AnalysisResult): Map<number, { offset: number; c
   return offsets;
 }
 
+const DEFORMATION_AXIS = { title: { text: 'Deformation (mm)' }, autorange: 'reversed' as const };
+const TAYLOR_LAYOUT: Partial<PlotLayout> = { xaxis: { title: { text: '√time (√min)' } }, yaxis: DEFORMATION_AXIS, hovermode: 'closest' };
+const LOG_TIME_LAYOUT: Partial<PlotLayout> = { xaxis: { title: { text: 'Time (min)' }, type: 'log' }, yaxis: DEFORMATION_AXIS, hovermode: 'closest' };
+
 type TimePlotsProps = {
   orgId: string;
   testId: string;
-  result: AnalysisResult;
+  result: ConsolidationTestResult;
   incrementIndex: number;
   onIncrementChange: (index: number) => void;
   onPropose: (p: Proposal) => void;
@@ -55,9 +59,6 @@ export function TimePlots({ orgId, testId, result, incrementIndex, onIncrementCh
   const readings = useIncrementReadings(orgId, testId, increment?.index ?? -1, where?.offset ?? 0, where?.count ?? 0);
   const taylor = useMemo(() => (increment && readings.data ? taylorTraces(increment, readings.data) : []), [increment, readings.data]);
   const logTime = useMemo(() => (increment && readings.data ? logTimeTraces(increment, readings.data) : []), [increment, readings.data]);
-  const yAxis = { title: { text: 'Deformation (mm)' }, autorange: 'reversed' as const };
-  const taylorLayout = useMemo<Partial<PlotLayout>>(() => ({ xaxis: { title: { text: '√time (√min)' } }, yaxis: yAxis, hovermode: 'closest' }), []);
-  const logLayout = useMemo<Partial<PlotLayout>>(() => ({ xaxis: { title: { text: 'Time (min)' }, type: 'log' }, yaxis: yAxis, hovermode: 'closest' }), []);
   if (!increment) return <p className="text-sm text-slate-600">The analysis has no increments to draw.</p>;
   return (
     <div className="space-y-3">
@@ -75,11 +76,11 @@ export function TimePlots({ orgId, testId, result, incrementIndex, onIncrementCh
       ) : (
         <div className="grid gap-4 xl:grid-cols-2">
           <div>
-            <PlotlyChart label={`Increment ${increment.index}: deformation against square root of time, Taylor construction`} data={taylor} layout={taylorLayout} onPointClick={(p) => onPropose({ t90Min: Math.round(p.x * p.x * 1000) / 1000 })} />
+            <PlotlyChart label={`Increment ${increment.index}: deformation against square root of time, Taylor construction`} data={taylor} layout={TAYLOR_LAYOUT} onPointClick={(p) => onPropose({ t90Min: Math.round(p.x * p.x * 1000) / 1000 })} />
             <p className="mt-1 text-xs text-slate-500">Click a reading to propose t90 at its time.</p>
           </div>
           <div>
-            <PlotlyChart label={`Increment ${increment.index}: deformation against log time, Casagrande construction`} data={logTime} layout={logLayout} onPointClick={(p) => onPropose({ t50Min: Math.round(p.x * 1000) / 1000 })} />
+            <PlotlyChart label={`Increment ${increment.index}: deformation against log time, Casagrande construction`} data={logTime} layout={LOG_TIME_LAYOUT} onPointClick={(p) => onPropose({ t50Min: Math.round(p.x * 1000) / 1000 })} />
             <p className="mt-1 text-xs text-slate-500">Click a reading to propose t50 at its time.</p>
           </div>
         </div>
@@ -89,7 +90,7 @@ export function TimePlots({ orgId, testId, result, incrementIndex, onIncrementCh
 }
 
 /** cv, mv, k and Cα against stress, on the axes the trade reads them on. */
-export function CoefficientPlots({ result }: { result: AnalysisResult }) {
+export function CoefficientPlots({ result }: { result: ConsolidationTestResult }) {
   const loading = useMemo(() => result.increments.filter((i) => i.kind !== 'unloading'), [result]);
   const cv = useMemo(
     () =>

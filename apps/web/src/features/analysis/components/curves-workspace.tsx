@@ -7,7 +7,6 @@ import { JobProgress } from '../../../components/job-progress';
 import { isJobRunning, useJob } from '../../../lib/jobs';
 import { useSavePicks } from '../api/save-picks';
 import { CoefficientPlots, CompressionPlots, TimePlots, type Proposal } from './analysis-plots';
-import type { AnalysisResult } from './analysis-result';
 import { draftFromPicks, picksUpdateFromDraft, type PicksDraft, type PicksErrors } from './picks-draft';
 import { PicksForm } from './picks-form';
 
@@ -23,7 +22,7 @@ type CurvesWorkspaceProps = {
 
 /** The plots and the override form side by side, sharing one set of proposed picks. */
 export function CurvesWorkspace({ orgId, testId, analysis, canPick, pendingJobId }: CurvesWorkspaceProps) {
-  const result = analysis.result as unknown as AnalysisResult;
+  const result = analysis.result;
   const queryClient = useQueryClient();
   const [draft, setDraft] = useState<PicksDraft>(() => draftFromPicks(analysis.picks));
   const [errors, setErrors] = useState<PicksErrors>({});

@@ -1,7 +1,8 @@
+import type { ConsolidationWarning } from '@porestack/types';
 import { describe, expect, it } from 'vitest';
 import { formatParameter, MISSING_VALUE, warningFor } from './format-parameter';
 
-const warnings = [
+const warnings: ConsolidationWarning[] = [
   { code: 'no-unload-branch', message: 'The test has no unloading, so Cs cannot be fitted.', incrementIndex: null },
   { code: 'primary-not-reached', message: 'Increment 3 stopped before primary consolidation ended.', incrementIndex: 3 },
 ];

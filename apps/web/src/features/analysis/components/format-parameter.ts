@@ -1,4 +1,4 @@
-import type { AnalysisWarning } from './analysis-result';
+import type { ConsolidationWarning } from '@porestack/types';
 
 export type FormattedParameter = {
   /** What the cell shows: the number, or an em dash when there is none. */
@@ -17,7 +17,7 @@ const FALLBACK_REASON = 'Not available from these readings.';
 export function formatParameter(
   value: number | null | undefined,
   style: { digits?: number; scientific?: boolean } = {},
-  warning?: AnalysisWarning | null,
+  warning?: ConsolidationWarning | null,
 ): FormattedParameter {
   if (value === null || value === undefined || !Number.isFinite(value)) {
     return { text: MISSING_VALUE, reason: warning?.message ?? FALLBACK_REASON };
@@ -32,10 +32,10 @@ export function formatParameter(
 
 /** The first warning with one of these codes, for the test or for one increment. */
 export function warningFor(
-  warnings: readonly AnalysisWarning[],
+  warnings: readonly ConsolidationWarning[],
   codes: readonly string[],
   incrementIndex: number | null = null,
-): AnalysisWarning | null {
+): ConsolidationWarning | null {
   return (
     warnings.find((w) => codes.includes(w.code) && (incrementIndex === null || w.incrementIndex === incrementIndex)) ??
     (incrementIndex === null ? null : (warnings.find((w) => w.incrementIndex === incrementIndex) ?? null))

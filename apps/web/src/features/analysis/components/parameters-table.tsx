@@ -1,5 +1,5 @@
 import type { ReactNode } from 'react';
-import type { AnalysisResult, AnalysisWarning } from './analysis-result';
+import type { ConsolidationTestResult, ConsolidationWarning } from '@porestack/types';
 import { formatParameter, warningFor } from './format-parameter';
 
 type Row = {
@@ -22,7 +22,7 @@ function PickedMark() {
 }
 
 /** One parameter: its number with unit, or '—' and why there is none. */
-export function ParameterCell({ value, digits, scientific, warning, picked, compact = false }: { value: number | null; digits?: number; scientific?: boolean; warning?: AnalysisWarning | null; picked?: boolean; compact?: boolean }) {
+export function ParameterCell({ value, digits, scientific, warning, picked, compact = false }: { value: number | null; digits?: number; scientific?: boolean; warning?: ConsolidationWarning | null; picked?: boolean; compact?: boolean }) {
   const formatted = formatParameter(value, { ...(digits === undefined ? {} : { digits }), ...(scientific ? { scientific } : {}) }, warning);
   if (compact && formatted.reason) {
     // In a dense table the reason goes in a tooltip and for screen readers; the warnings list says it in full.
@@ -43,7 +43,7 @@ export function ParameterCell({ value, digits, scientific, warning, picked, comp
 }
 
 /** The test's whole-curve parameters, each with symbol, unit and a "picked" mark when overridden. */
-export function ParametersTable({ result }: { result: AnalysisResult }) {
+export function ParametersTable({ result }: { result: ConsolidationTestResult }) {
   const p = result.preconsolidation;
   const fitPicked = result.compressionFit?.source === 'pick';
   const rows: Row[] = [
@@ -107,7 +107,7 @@ export function ParametersTable({ result }: { result: AnalysisResult }) {
 }
 
 /** Per-increment time-curve results: t50, t90, cv by both methods, Cα, mv and k. */
-export function IncrementParametersTable({ result }: { result: AnalysisResult }) {
+export function IncrementParametersTable({ result }: { result: ConsolidationTestResult }) {
   const head = ['Increment', 'σ′ (kPa)', 'Stage', 't50 (min)', 't90 (min)', 'cv Taylor (m²/yr)', 'cv Casagrande (m²/yr)', 'Cα (–)', 'mv (1/MPa)', 'k (m/s)'];
   return (
     <div className="overflow-x-auto">
@@ -145,7 +145,7 @@ export function IncrementParametersTable({ result }: { result: AnalysisResult })
 }
 
 /** The analysis' warnings in its own words, grouped test-first. */
-export function WarningsList({ warnings }: { warnings: readonly AnalysisWarning[] }) {
+export function WarningsList({ warnings }: { warnings: readonly ConsolidationWarning[] }) {
   if (warnings.length === 0) return <p className="text-sm text-slate-600">The analysis raised no warnings.</p>;
   return (
     <ul className="space-y-1.5 text-sm" aria-label="Analysis warnings">

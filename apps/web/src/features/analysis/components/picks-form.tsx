@@ -3,11 +3,11 @@ import { Button } from '../../../components/button';
 import { ErrorMessage } from '../../../components/error-message';
 import { Select } from '../../../components/select';
 import { TextField } from '../../../components/text-field';
-import type { AnalysisResult } from './analysis-result';
+import type { ConsolidationTestResult } from '@porestack/types';
 import type { PicksDraft, PicksErrors } from './picks-draft';
 
 type PicksFormProps = {
-  result: AnalysisResult;
+  result: ConsolidationTestResult;
   draft: PicksDraft;
   incrementIndex: number;
   errors: PicksErrors;

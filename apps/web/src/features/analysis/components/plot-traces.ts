@@ -1,5 +1,5 @@
 import type { PlotData } from '../../../components/plot/plotly-chart';
-import type { AnalysisIncrement, AnalysisResult, LinePoints, StressPoint, TimePoint } from './analysis-result';
+import type { ConsolidationIncrementResult, ConsolidationTestResult, StressVoidRatioLine, StressVoidRatioPoint, TimeCurvePoint } from '@porestack/types';
 
 /** Colours used on every plot, so a construction looks the same wherever it appears. */
 export const PLOT_COLOURS = {
@@ -18,7 +18,7 @@ export function strainPercentAt(voidRatio: number, initialVoidRatio: number): nu
   return ((initialVoidRatio - voidRatio) / (1 + initialVoidRatio)) * 100;
 }
 
-function line(name: string, points: readonly StressPoint[], toY: (e: number) => number, colour: string, dash: 'solid' | 'dash' | 'dot' = 'dash', showlegend = true, legendgroup?: string): PlotData {
+function line(name: string, points: readonly StressVoidRatioPoint[], toY: (e: number) => number, colour: string, dash: 'solid' | 'dash' | 'dot' = 'dash', showlegend = true, legendgroup?: string): PlotData {
   return {
     type: 'scatter',
     mode: 'lines',
@@ -32,13 +32,13 @@ function line(name: string, points: readonly StressPoint[], toY: (e: number) => 
   };
 }
 
-const ends = (l: LinePoints): StressPoint[] => [l.start, l.end];
+const ends = (l: StressVoidRatioLine): StressVoidRatioPoint[] => [l.start, l.end];
 
 /**
  * The e–log σ′ (or ε–log σ′) curve with both preconsolidation constructions drawn from the
  * geometry the analysis returned, never re-derived here, so the plot shows what was computed.
  */
-export function compressionTraces(result: AnalysisResult, axis: CompressionAxis): PlotData[] {
+export function compressionTraces(result: ConsolidationTestResult, axis: CompressionAxis): PlotData[] {
   const e0 = result.initialVoidRatio;
   const toY = axis === 'voidRatio' ? (e: number) => e : (e: number) => strainPercentAt(e, e0);
   const traces: PlotData[] = [];
@@ -113,12 +113,12 @@ export function compressionTraces(result: AnalysisResult, axis: CompressionAxis)
 }
 
 /** Readings of one increment at t > 0 (t = 0 cannot sit on a log axis; √0 is fine). */
-function positiveTimes(readings: readonly TimePoint[]): TimePoint[] {
+function positiveTimes(readings: readonly TimeCurvePoint[]): TimeCurvePoint[] {
   return readings.filter((r) => r.timeMin > 0);
 }
 
 /** Taylor's √t plot: readings, the early straight line, the 1.15× line, t90 (marked red when picked). */
-export function taylorTraces(increment: AnalysisIncrement, readings: readonly TimePoint[]): PlotData[] {
+export function taylorTraces(increment: ConsolidationIncrementResult, readings: readonly TimeCurvePoint[]): PlotData[] {
   const traces: PlotData[] = [
     {
       type: 'scatter',
@@ -133,7 +133,7 @@ export function taylorTraces(increment: AnalysisIncrement, readings: readonly Ti
   ];
   const taylor = increment.taylor;
   if (!taylor) return traces;
-  const sqrt = (l: { start: TimePoint; end: TimePoint }) => ({ x: [Math.sqrt(l.start.timeMin), Math.sqrt(l.end.timeMin)], y: [l.start.deformationMm, l.end.deformationMm] });
+  const sqrt = (l: { start: TimeCurvePoint; end: TimeCurvePoint }) => ({ x: [Math.sqrt(l.start.timeMin), Math.sqrt(l.end.timeMin)], y: [l.start.deformationMm, l.end.deformationMm] });
   traces.push({ type: 'scatter', mode: 'lines', name: 'Early straight line', ...sqrt(taylor.initialLine), line: { color: PLOT_COLOURS.casagrande, dash: 'dash' }, hoverinfo: 'skip' });
   traces.push({ type: 'scatter', mode: 'lines', name: '1.15 × abscissae', ...sqrt(taylor.offsetLine), line: { color: PLOT_COLOURS.pachecoSilva, dash: 'dash' }, hoverinfo: 'skip' });
   const picked = taylor.t90Source === 'pick';
@@ -151,7 +151,7 @@ export function taylorTraces(increment: AnalysisIncrement, readings: readonly Ti
 }
 
 /** Casagrande's log-t plot: readings, the tangent and secondary lines, d0, d50 and d100 with t50. */
-export function logTimeTraces(increment: AnalysisIncrement, readings: readonly TimePoint[]): PlotData[] {
+export function logTimeTraces(increment: ConsolidationIncrementResult, readings: readonly TimeCurvePoint[]): PlotData[] {
   const shown = positiveTimes(readings);
   const traces: PlotData[] = [
     {
@@ -166,7 +166,7 @@ export function logTimeTraces(increment: AnalysisIncrement, readings: readonly T
   ];
   const construction = increment.casagrande;
   if (!construction) return traces;
-  const xy = (l: { start: TimePoint; end: TimePoint }) => ({ x: [l.start.timeMin, l.end.timeMin], y: [l.start.deformationMm, l.end.deformationMm] });
+  const xy = (l: { start: TimeCurvePoint; end: TimeCurvePoint }) => ({ x: [l.start.timeMin, l.end.timeMin], y: [l.start.deformationMm, l.end.deformationMm] });
   if (construction.tangentLine) {
     traces.push({ type: 'scatter', mode: 'lines', name: 'Tangent at inflection', ...xy(construction.tangentLine), line: { color: PLOT_COLOURS.casagrande, dash: 'dash' }, hoverinfo: 'skip' });
   }
@@ -194,10 +194,10 @@ export function logTimeTraces(increment: AnalysisIncrement, readings: readonly T
   return traces;
 }
 
-type CoefficientSeries = { name: string; value: (i: AnalysisIncrement) => number | null; colour: string };
+type CoefficientSeries = { name: string; value: (i: ConsolidationIncrementResult) => number | null; colour: string };
 
 /** One parameter per increment against the increment's stress, leaving out increments without a value. */
-export function coefficientTraces(increments: readonly AnalysisIncrement[], series: readonly CoefficientSeries[]): PlotData[] {
+export function coefficientTraces(increments: readonly ConsolidationIncrementResult[], series: readonly CoefficientSeries[]): PlotData[] {
   return series.map((s) => {
     const points = increments.flatMap((i) => {
       const value = s.value(i);

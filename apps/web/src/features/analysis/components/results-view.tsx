@@ -1,12 +1,11 @@
 import type { Analysis } from '@porestack/types';
 import { EngineeringCaution } from '../../../components/engineering-caution';
 import { formatDateTime } from '../../../lib/format';
-import type { AnalysisResult } from './analysis-result';
 import { IncrementParametersTable, ParametersTable, WarningsList } from './parameters-table';
 
 /** The reduced parameters of the stored analysis, with its warnings and where it came from. */
 export function ResultsView({ analysis }: { analysis: Analysis }) {
-  const result = analysis.result as unknown as AnalysisResult;
+  const result = analysis.result;
   return (
     <div className="space-y-5">
       <EngineeringCaution />

@@ -1,4 +1,4 @@
-import { SignUpSchema, type Session } from '@porestack/types';
+import { SignUpSchema } from '@porestack/types';
 import { Button } from '../../../components/button';
 import { ErrorMessage } from '../../../components/error-message';
 import { TextField } from '../../../components/text-field';
@@ -7,11 +7,12 @@ import { useSignUp } from '../api/sign-up';
 
 const FIELDS = ['name', 'email', 'password', 'organisationName'];
 
-export function SignUpForm({ onSignedUp }: { onSignedUp: (session: Session) => void }) {
+/** Sends the sign-up; the account is made from the link e-mailed to the address (`onSent` gets the server's words). */
+export function SignUpForm({ onSent }: { onSent: (message: string) => void }) {
   const signUp = useSignUp();
   const { errors, onSubmit } = useSchemaForm(SignUpSchema, {
     serverError: signUp.error,
-    onValid: (data) => signUp.mutate(data, { onSuccess: onSignedUp }),
+    onValid: (data) => signUp.mutate(data, { onSuccess: (sent) => onSent(sent.message) }),
   });
 
   return (
@@ -24,7 +25,7 @@ export function SignUpForm({ onSignedUp }: { onSignedUp: (session: Session) => v
         name="password"
         type="password"
         autoComplete="new-password"
-        hint="At least 10 characters. A short sentence is easier to remember than symbols."
+        hint="10 to 72 characters. A short sentence is easier to remember than symbols."
         error={errors['password']}
       />
       <TextField
@@ -35,7 +36,7 @@ export function SignUpForm({ onSignedUp }: { onSignedUp: (session: Session) => v
         error={errors['organisationName']}
       />
       <Button type="submit" pending={signUp.isPending}>
-        {signUp.isPending ? 'Creating your account…' : 'Create account'}
+        {signUp.isPending ? 'Sending the link…' : 'Create account'}
       </Button>
     </form>
   );

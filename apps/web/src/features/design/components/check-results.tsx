@@ -74,11 +74,7 @@ export function CheckResults({ orgId, projectId, checkId, revision, selectedFoot
 function FootingsResult({ orgId, projectId, checkId, revision, check, selectedFooting, onSelectFooting }: Omit<CheckResultsProps, 'revision'> & { revision: CheckRevision; check: SettlementCheckResult }) {
   const o = revision.options;
   const limitLabel = `1/${o.angularDistortionDenominator} (${LIMIT_SOURCE_LABELS[o.angularDistortionSource]})`;
-  const shapes = useMemo(() => new Map(revision.footings.map((f) => [f.id, f.shape])), [revision.footings]);
-  const plan: PlanFooting[] = useMemo(
-    () => check.footings.map((f) => ({ id: f.id, xM: f.xM, yM: f.yM, alongXM: f.widthM, alongYM: f.lengthM, circle: shapes.get(f.id) === 'circle', totalM: f.totalM })),
-    [check.footings, shapes],
-  );
+  const plan: PlanFooting[] = useMemo(() => planFootings(check.footings), [check.footings]);
   const chosen = selectedFooting ?? check.footings.reduce((worst, f) => (f.totalM > worst.totalM ? f : worst), check.footings[0]!).id;
   const over = check.pairs.filter((p) => !p.withinDesignLimit).length;
   const overTotal = check.footings.filter((f) => f.withinTotalLimit === false).length;
@@ -132,4 +128,22 @@ function FootingPanel({ orgId, projectId, checkId, revision, footingId }: { orgI
       )}
     </Panel>
   );
+}
+
+/**
+ * The plan sizes of the footings: B × L, a circle's D, and a strip drawn as long as the rest of
+ * the plan is deep (at least ten widths), since it runs on beyond the drawing.
+ */
+function planFootings(footings: SettlementCheckResult['footings']): PlanFooting[] {
+  const others = footings.filter((f) => f.shape !== 'strip');
+  const spanY = others.length === 0 ? 0 : Math.max(...others.map((f) => f.yM + (f.lengthM ?? f.widthM) / 2)) - Math.min(...others.map((f) => f.yM - (f.lengthM ?? f.widthM) / 2));
+  return footings.map((f) => ({
+    id: f.id,
+    xM: f.xM,
+    yM: f.yM,
+    alongXM: f.widthM,
+    alongYM: f.shape === 'strip' ? Math.max(10 * f.widthM, spanY) : (f.lengthM ?? f.widthM),
+    circle: f.shape === 'circle',
+    totalM: f.totalM,
+  }));
 }

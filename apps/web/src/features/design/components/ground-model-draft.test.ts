@@ -29,7 +29,7 @@ const stored: GroundModelContent = {
         preconsolidationKpa: { value: 85, origin: 'source' },
         preconsolidationDepthM: 3.2,
         ocr: { value: null, origin: 'source' },
-        cvM2PerYr: { value: 2.3, origin: 'source', basis: 'lowest' },
+        cvM2PerYr: { value: 2.3, origin: 'source', basis: 'lowest', cvBasis: 'lowest', cvFinalStressKpa: null },
         cAlpha: { value: 0.02, origin: 'hand' },
       },
     },

@@ -33,7 +33,9 @@ export interface LayerDraft {
   setId: string;
   setRevisionId: string;
   recompressionIndexKind: '' | 'Cr' | 'Cs';
-  preconsolidationCarry: 'ocr' | 'constant';
+  preconsolidationCarry: 'ocr' | 'pop' | 'constant';
+  cvBasis: 'lowest' | 'design-range';
+  cvFinalStressKpa: string;
   preconsolidationDepthM: string;
   values: Record<ParameterName, string>;
   /** Values typed over the source's (ignored for a hand source). */
@@ -72,6 +74,8 @@ export function emptyLayer(kind: LayerDraft['kind']): LayerDraft {
     setRevisionId: '',
     recompressionIndexKind: '',
     preconsolidationCarry: 'ocr',
+    cvBasis: 'lowest',
+    cvFinalStressKpa: '',
     preconsolidationDepthM: '',
     values: { e0: '', cc: '', recompressionIndex: '', preconsolidationKpa: '', ocr: '', cvM2PerYr: '', cAlpha: '' },
     entered: [],
@@ -111,6 +115,8 @@ export function draftFromContent(content: GroundModelContent, name: string): Mod
         setRevisionId: source?.kind === 'set' ? source.setRevisionId : '',
         recompressionIndexKind: p?.recompressionIndexKind ?? '',
         preconsolidationCarry: p?.preconsolidationCarry ?? 'ocr',
+        cvBasis: p?.cvBasis ?? 'lowest',
+        cvFinalStressKpa: text(p?.cvFinalStressKpa),
         preconsolidationDepthM: text(p?.preconsolidationDepthM),
         values: {
           e0: text(p?.e0),
@@ -143,6 +149,8 @@ function parametersInput(layer: LayerDraft): CompressibleParametersInput {
     preconsolidationDepthM: hand || layer.entered.includes('preconsolidationKpa') ? num(layer.preconsolidationDepthM) : null,
     ocr: value('ocr'),
     cvM2PerYr: value('cvM2PerYr'),
+    cvBasis: layer.cvBasis,
+    cvFinalStressKpa: num(layer.cvFinalStressKpa),
     cAlpha: value('cAlpha'),
     entered: hand ? [] : layer.entered,
   };

@@ -174,10 +174,13 @@ function CompressibleFields({ layer, resolved, records, sets, issues, onChange }
           hint={
             layer.preconsolidationCarry === 'ocr'
               ? `OCR = σ′p/σ′v0 kept constant${p?.preconsolidationDepthM != null ? ` (from σ′p at ${p.preconsolidationDepthM.toFixed(2)} m)` : ''}.`
-              : 'σ′p kept the same at every depth of the layer.'
+              : layer.preconsolidationCarry === 'pop'
+                ? `σ′p − σ′v0 (POP) kept constant${p?.preconsolidationDepthM != null ? ` (from σ′p at ${p.preconsolidationDepthM.toFixed(2)} m)` : ''}: σ′p runs parallel to σ′v0.`
+                : 'σ′p kept the same at every depth of the layer.'
           }
           options={[
             { value: 'ocr', label: 'a constant OCR' },
+            { value: 'pop', label: 'a constant σ′p − σ′v0 (POP)' },
             { value: 'constant', label: 'a constant σ′p' },
           ]}
         />
@@ -185,6 +188,30 @@ function CompressibleFields({ layer, resolved, records, sets, issues, onChange }
           <TextField label="σ′p given at depth (m)" name="preconsolidationDepthM" inputMode="decimal" value={layer.preconsolidationDepthM} onChange={(e) => set('preconsolidationDepthM', e.target.value)} hint="Left empty: the layer's mid-depth." />
         ) : null}
       </div>
+      {layer.sourceKind === 'record' && !layer.entered.includes('cvM2PerYr') ? (
+        <div className="grid gap-3 sm:grid-cols-3">
+          <Select
+            label="cv taken as"
+            value={layer.cvBasis}
+            onChange={(e) => set('cvBasis', e.target.value as LayerDraft['cvBasis'])}
+            options={[
+              { value: 'lowest', label: "the lowest of the test's increments" },
+              { value: 'design-range', label: 'cv over the design stress range' },
+            ]}
+          />
+          {layer.cvBasis === 'design-range' ? (
+            <TextField
+              label="Final effective stress σ′f (kPa)"
+              name="cvFinalStressKpa"
+              inputMode="decimal"
+              value={layer.cvFinalStressKpa}
+              onChange={(e) => set('cvFinalStressKpa', e.target.value)}
+              error={issues.get('parameters.cvFinalStressKpa')}
+              hint="σ′v0 + Δσ′ at the layer's mid-depth under the load"
+            />
+          ) : null}
+        </div>
+      ) : null}
       {p ? <p className="text-xs text-slate-500">cv: {p.cvM2PerYr.basis}.</p> : null}
     </div>
   );

@@ -77,7 +77,14 @@ export function FootingResultsTable({ footings, selectedId, onSelect }: { footin
   const columns = useMemo(
     () => [
       footingColumn.accessor('id', { header: 'Footing', cell: (c) => <span className="font-medium text-slate-900">{c.getValue()}</span> }),
-      footingColumn.accessor((f) => f.widthM * f.lengthM, { id: 'size', header: 'B × L (m)', cell: (c) => `${formatFixed(c.row.original.widthM, 2)} × ${formatFixed(c.row.original.lengthM, 2)}` }),
+      footingColumn.accessor((f) => f.widthM * (f.lengthM ?? f.widthM), {
+        id: 'size',
+        header: 'Size (m)',
+        cell: (c) => {
+          const f = c.row.original;
+          return f.shape === 'circle' ? `D ${formatFixed(f.widthM, 2)}` : f.shape === 'strip' ? `strip B ${formatFixed(f.widthM, 2)}` : `${formatFixed(f.widthM, 2)} × ${formatFixed(f.lengthM, 2)}`;
+        },
+      }),
       footingColumn.accessor('depthM', { header: 'Depth (m)', cell: (c) => formatFixed(c.getValue(), 2) }),
       footingColumn.accessor('pressureKpa', { header: 'Net q (kPa)', cell: (c) => formatFixed(c.getValue(), 1) }),
       footingColumn.accessor('immediateM', { header: 'Immediate (mm)', cell: (c) => formatMm(c.getValue()) }),

@@ -1,7 +1,7 @@
 import type { MigrationInterface, QueryRunner } from "typeorm";
 
-export class Design1796314148424 implements MigrationInterface {
-    name = 'Design1796314148424'
+export class Design1796323725979 implements MigrationInterface {
+    name = 'Design1796323725979'
 
     public async up(queryRunner: QueryRunner): Promise<void> {
         await queryRunner.query(`CREATE TABLE "characteristic_sets" ("id" uuid NOT NULL DEFAULT gen_random_uuid(), "organisation_id" uuid NOT NULL, "project_id" uuid NOT NULL, "name" text NOT NULL, "current_revision" integer NOT NULL, "created_by_id" uuid NOT NULL, "created_at" TIMESTAMP WITH TIME ZONE NOT NULL DEFAULT now(), "updated_at" TIMESTAMP WITH TIME ZONE NOT NULL DEFAULT now(), CONSTRAINT "PK_f5e2cd4f899c73f14859f805673" PRIMARY KEY ("id"))`);
