@@ -47,6 +47,9 @@ export function useSaveCharacteristicSet(orgId: string, projectId: string, setId
       setId === null
         ? api.post(apiPaths.characteristicSets(orgId, projectId), body, CharacteristicSetDetailSchema)
         : api.post(apiPaths.characteristicSetRevisions(orgId, projectId, setId), body, CharacteristicSetDetailSchema),
-    onSuccess: () => client.invalidateQueries({ queryKey: designKeys.sets(orgId, projectId) }),
+    onSuccess: () => {
+      // Not awaited: the page moves on with the saved answer while the lists refresh behind it.
+      void client.invalidateQueries({ queryKey: designKeys.sets(orgId, projectId) });
+    },
   });
 }

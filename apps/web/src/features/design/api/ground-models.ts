@@ -38,7 +38,10 @@ export function useSaveGroundModel(orgId: string, projectId: string, modelId: st
       modelId === null
         ? api.post(apiPaths.groundModels(orgId, projectId), body, GroundModelDetailSchema)
         : api.post(apiPaths.groundModelRevisions(orgId, projectId, modelId), body, GroundModelDetailSchema),
-    onSuccess: () => client.invalidateQueries({ queryKey: designKeys.groundModels(orgId, projectId) }),
+    onSuccess: () => {
+      // Not awaited: the page moves on with the saved answer while the lists refresh behind it.
+      void client.invalidateQueries({ queryKey: designKeys.groundModels(orgId, projectId) });
+    },
   });
 }
 

@@ -45,7 +45,10 @@ export function useCreateCheck(orgId: string, projectId: string) {
   const client = useQueryClient();
   return useMutation({
     mutationFn: (body: SettlementCheckCreate) => api.post(apiPaths.checks(orgId, projectId), body, SettlementCheckDetailSchema),
-    onSuccess: () => client.invalidateQueries({ queryKey: designKeys.checks(orgId, projectId) }),
+    onSuccess: () => {
+      // Not awaited: the page moves on with the saved answer while the lists refresh behind it.
+      void client.invalidateQueries({ queryKey: designKeys.checks(orgId, projectId) });
+    },
   });
 }
 
@@ -62,7 +65,10 @@ function useRunMutation<Body>(orgId: string, projectId: string, checkId: string,
   const client = useQueryClient();
   return useMutation({
     mutationFn: send,
-    onSuccess: () => client.invalidateQueries({ queryKey: designKeys.checks(orgId, projectId) }),
+    onSuccess: () => {
+      // Not awaited: the page moves on with the saved answer while the lists refresh behind it.
+      void client.invalidateQueries({ queryKey: designKeys.checks(orgId, projectId) });
+    },
   });
 }
 
