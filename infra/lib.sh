@@ -43,6 +43,12 @@ build_packages() {
   (cd "$REPO" && pnpm --filter @porestack/types --filter @porestack/geo-core run build) || die "Building the shared packages failed."
 }
 
+build_api() {
+  # The portal runs compiled JavaScript with node (apps/api/dist), not the TypeScript sources.
+  log "Building the API"
+  (cd "$REPO" && pnpm --filter @porestack/api run build >/dev/null) || die "Building the API failed: run 'pnpm --filter @porestack/api run build' to see why."
+}
+
 # ── PostgreSQL ────────────────────────────────────────────────────────────────
 # pg_root <name>: where a cluster lives. PostgreSQL runs as the postgres user, which
 # must be able to traverse every parent folder; fall back to /tmp when it cannot.
@@ -96,12 +102,13 @@ drop_database() {
 # ── S3 fake and mail fake ─────────────────────────────────────────────────────
 port_open() { (exec 3<>"/dev/tcp/127.0.0.1/$1") 2>/dev/null; }
 
-# wait_port <port> <what>: up to 60 s. The portal (tsx compiling the API at start) took over 10 s
-# on two cores shared by several test runs; waiting longer costs nothing when it starts sooner.
+# The portal took over 10 s to open its port on two cores shared by several test runs;
+# waiting longer costs nothing when it starts sooner.
 wait_port() {
-  local port=$1 what=$2 i
-  for i in $(seq 1 600); do port_open "$port" && return 0; sleep 0.1; done
-  die "$what did not open 127.0.0.1:$port in 60 s."
+  # wait_port <port> <what> [seconds, 60 by default]
+  local port=$1 what=$2 seconds=${3:-60} i
+  for i in $(seq 1 $((seconds * 10))); do port_open "$port" && return 0; sleep 0.1; done
+  die "$what did not open 127.0.0.1:$port in $seconds s."
 }
 
 # start_bg <pidfile> <logfile> <command...>: runs a command in its own process group.

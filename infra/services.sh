@@ -22,6 +22,8 @@ if [ "${1:-}" = stop ]; then
 fi
 
 mkdir -p "$DATA" .run
+# Hand-run report tests print with Chromium and read the PDFs back with poppler-utils.
+apt_install chromium fonts-dejavu-core poppler-utils
 start_postgres services "$PG_PORT" "-c fsync=off -c synchronous_commit=off -c full_page_writes=off"
 create_database "$PG_PORT" porestack_test
 create_database "$PG_PORT" porestack_e2e

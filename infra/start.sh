@@ -14,10 +14,14 @@ MAIL_WEB_PORT=${MAIL_WEB_PORT:-1080}
 DATA="$REPO/.data/dev"
 mkdir -p "$DATA" .run
 
-trap 'log "Stopping"; stop_started' EXIT
-trap 'exit 130' INT TERM
+# Ctrl-C stops what this script started and ends with a plain "Stopped." (no failure trace).
+stopping() { log "Stopping"; stop_started; log "Stopped."; }
+trap stopping EXIT
+trap 'exit 0' INT TERM
 
 ensure_node_deps
+# The job worker prints the issued reports to PDF with Debian's Chromium (CHROMIUM_PATH to use another).
+[ -n "${CHROMIUM_PATH:-}" ] || apt_install chromium fonts-dejavu-core
 
 if [ -z "${DATABASE_URL:-}" ]; then
   # Durable settings here: this cluster holds the data a person works with.
@@ -49,16 +53,23 @@ log "Running migrations"
 pnpm --filter @porestack/api run --silent migrate >.run/migrate.log 2>&1 || die "Migrations failed: see .run/migrate.log"
 log "Seeding the demo organisation (kept if already there)"
 pnpm --filter @porestack/api run --silent seed >.run/seed.txt || die "Seeding failed."
+build_api
 
-start_bg "$REPO/.run/worker.pid" "$REPO/.run/worker.log" pnpm --filter @porestack/api run --silent worker
+start_bg "$REPO/.run/worker.pid" "$REPO/.run/worker.log" node apps/api/dist/src/worker.js
 log "Job worker started (log: .run/worker.log)"
+start_bg "$REPO/.run/api.pid" "$REPO/.run/api.log" node apps/api/dist/src/server.js
+wait_port "$PORT" "The portal"
 
 cat <<INFO
 
-  Porestack is starting on  ${PUBLIC_URL}
+  Porestack is serving on   ${PUBLIC_URL}
   Mail inbox (fake SMTP):   ${MAIL_INBOX_URL:-your SMTP server}
+  Logs, one line a request: .run/api.log and .run/worker.log
 $(cat .run/seed.txt)
   Press Ctrl-C to stop.
 
 INFO
-pnpm --filter @porestack/api run --silent start
+# Wait on the portal; if it stops by itself, say so and where to look.
+api_pid=$(cat "$REPO/.run/api.pid")
+while kill -0 "$api_pid" 2>/dev/null; do sleep 1; done
+die "The portal stopped: see .run/api.log"

@@ -19,7 +19,9 @@ trap stop_started EXIT
 trap 'exit 130' INT TERM
 
 ensure_node_deps
-apt_install chromium
+# chromium: the browser tests, and the worker printing reports to PDF (fonts-dejavu-core for its
+# page margins and fallback glyphs); poppler-utils: the report tests read the PDFs back (pdftotext, pdfinfo).
+apt_install chromium fonts-dejavu-core poppler-utils
 
 # Test data is thrown away on every run, so every run starts clean.
 rm -rf "$DATA" "$(pg_root test)"
@@ -62,14 +64,16 @@ suite "API integration tests" env DATABASE_URL="$TEST_DATABASE_URL" S3_BUCKET=po
 
 e2e() {
   pnpm --filter @porestack/web run build >/dev/null || return 1
+  # As in production: compiled JavaScript run with node.
+  pnpm --filter @porestack/api run build >/dev/null || return 1
   # Every browser test signs people up from this one machine: lift the per-client limits.
   export DATABASE_URL="$E2E_DATABASE_URL" S3_BUCKET=porestack-e2e PORT="$E2E_PORT" \
     PUBLIC_URL="http://127.0.0.1:$E2E_PORT" NODE_ENV=production \
     SIGN_UP_CLIENT_RATE_LIMIT=10000 SIGN_IN_CLIENT_RATE_LIMIT=10000 RESET_CLIENT_RATE_LIMIT=10000
   pnpm --filter @porestack/api run --silent migrate >/dev/null || return 1
   pnpm --filter @porestack/api run --silent seed >/dev/null || return 1
-  start_bg "$REPO/.run/e2e-worker.pid" "$REPO/.run/e2e-worker.log" pnpm --filter @porestack/api run --silent worker
-  start_bg "$REPO/.run/e2e-api.pid" "$REPO/.run/e2e-api.log" pnpm --filter @porestack/api run --silent start
+  start_bg "$REPO/.run/e2e-worker.pid" "$REPO/.run/e2e-worker.log" node apps/api/dist/src/worker.js
+  start_bg "$REPO/.run/e2e-api.pid" "$REPO/.run/e2e-api.log" node apps/api/dist/src/server.js
   wait_port "$E2E_PORT" "The portal (e2e)"
   E2E_BASE_URL="http://127.0.0.1:$E2E_PORT" pnpm --filter @porestack/web run e2e
 }

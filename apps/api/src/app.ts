@@ -14,12 +14,18 @@ import { isSecureOrigin } from './http/session-cookie.js';
 import { auditRouter } from './modules/audit/audit.router.js';
 import { authRouter } from './modules/auth/auth.router.js';
 import { healthRouter } from './modules/health/health.router.js';
+import { homeRouter } from './modules/home/home.router.js';
 import { invitationsRouter, orgInvitationsRouter } from './modules/invitations/invitations.router.js';
 import { membersRouter } from './modules/organisations/members.router.js';
 import { consolidationTestsRouter } from './modules/consolidation-tests/consolidation-tests.router.js';
 import { jobRunsRouter } from './modules/job-runs/job-runs.router.js';
+import { projectClientsRouter } from './modules/projects/project-clients.router.js';
 import { projectsRouter } from './modules/projects/projects.router.js';
 import { reviewsRouter } from './modules/reviews/reviews.router.js';
+import { issuedResultsRouter } from './modules/soil-records/issued-results.router.js';
+import { exportsRouter } from './modules/exports/exports.router.js';
+import { reportSettingsRouter } from './modules/organisations/report-settings.router.js';
+import { reportsRouter } from './modules/reports/reports.router.js';
 import { soilRecordsRouter } from './modules/soil-records/soil-records.router.js';
 import { importProfilesRouter } from './modules/import-profiles/import-profiles.router.js';
 import { readingsRouter } from './modules/readings/readings.router.js';
@@ -67,7 +73,20 @@ export function createApp(options: AppOptions = {}): Express {
       strictTransportSecurity: isSecureOrigin(),
     }),
   );
-  app.use(pinoHttp({ logger, autoLogging: config.NODE_ENV !== 'test' }));
+  // One short line per request: method, path, status and time — no headers, no cookies.
+  app.use(
+    pinoHttp({
+      logger,
+      autoLogging: config.NODE_ENV !== 'test',
+      quietReqLogger: true,
+      serializers: {
+        req: (req: { method: string; url: string }) => ({ method: req.method, url: req.url }),
+        res: (res: { statusCode: number }) => ({ status: res.statusCode }),
+      },
+      customSuccessMessage: (req, res, responseTime) => `${req.method} ${req.url} ${res.statusCode} ${Math.round(responseTime)} ms`,
+      customErrorMessage: (req, res) => `${req.method} ${req.url} ${res.statusCode}`,
+    }),
+  );
   app.use(express.json({ limit: '1mb' }));
   app.use(cookieParser());
 
@@ -79,11 +98,17 @@ export function createApp(options: AppOptions = {}): Express {
   app.use(invitationsRouter());
   app.use(orgInvitationsRouter());
   app.use(membersRouter());
+  app.use(reportSettingsRouter());
   app.use(auditRouter());
+  app.use(homeRouter());
   app.use(projectsRouter());
+  app.use(projectClientsRouter());
   app.use(consolidationTestsRouter());
   app.use(reviewsRouter());
   app.use(soilRecordsRouter());
+  app.use(issuedResultsRouter());
+  app.use(reportsRouter());
+  app.use(exportsRouter());
   app.use(jobRunsRouter());
   app.use(uploadsRouter());
   app.use(importProfilesRouter());

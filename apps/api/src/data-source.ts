@@ -4,6 +4,7 @@ import { databaseUrl } from './config/env.js';
 import { AuditEntryEntity } from './modules/audit/audit-entry.entity.js';
 import { PasswordResetTokenEntity } from './modules/auth/password-reset-token.entity.js';
 import { InvitationEntity } from './modules/invitations/invitation.entity.js';
+import { InvitationProjectEntity } from './modules/invitations/invitation-project.entity.js';
 import { MembershipEntity } from './modules/organisations/membership.entity.js';
 import { OrganisationEntity } from './modules/organisations/organisation.entity.js';
 import { UserEntity } from './modules/users/user.entity.js';
@@ -21,6 +22,7 @@ import { SoilRecordEntity } from './modules/soil-records/soil-record.entity.js';
 import { ImportProfileEntity } from './modules/import-profiles/import-profile.entity.js';
 import { ReadingEntity } from './modules/readings/reading.entity.js';
 import { UploadEntity } from './modules/uploads/upload.entity.js';
+import { IssuedReportEntity } from './modules/reports/issued-report.entity.js';
 import { SessionEntity } from './modules/sessions/session.entity.js';
 import { SignUpRequestEntity } from './modules/auth/sign-up-request.entity.js';
 import { TestContributionEntity } from './modules/consolidation-tests/test-contribution.entity.js';
@@ -36,9 +38,11 @@ import { LabRecords1796180920952 } from './migrations/1796180920952-lab-records.
 import { ReadingsImport1796181181337 } from './migrations/1796181181337-readings-import.js';
 import { ReadingsOneForeignKey1796181664432 } from './migrations/1796181664432-readings-one-foreign-key.js';
 import { MembershipRoles1796313749156 } from './migrations/1796313749156-membership-roles.js';
+import { IssuedReports1796313882857 } from './migrations/1796313882857-issued-reports.js';
 import { SessionsAndRateLimits1796317586769 } from './migrations/1796317586769-sessions-and-rate-limits.js';
 import { SignUpRequests1796318744210 } from './migrations/1796318744210-sign-up-requests.js';
 import { TestContributions1796320068018 } from './migrations/1796320068018-test-contributions.js';
+import { ClientSharing1796322759129 } from './migrations/1796322759129-client-sharing.js';
 import { Design1796323725979 } from './migrations/1796323725979-design.js';
 
 /**
@@ -52,11 +56,12 @@ export const dataSource = new DataSource({
   entities: [UserEntity, OrganisationEntity, MembershipEntity, InvitationEntity, PasswordResetTokenEntity, AuditEntryEntity,
     ProjectEntity, ProjectMemberEntity, BoreholeEntity, SampleEntity, ConsolidationTestEntity, AnalysisEntity, ReviewEventEntity,
     SoilRecordEntity, SoilRecordVersionEntity, SoilRecordSupersessionEntity, JobRunEntity,
-    UploadEntity, ReadingEntity, ImportProfileEntity, SessionEntity, SignUpRequestEntity, TestContributionEntity,
+    UploadEntity, ReadingEntity, ImportProfileEntity, IssuedReportEntity, SessionEntity, SignUpRequestEntity, TestContributionEntity, InvitationProjectEntity,
     GroundModelEntity, GroundModelRevisionEntity, CharacteristicSetEntity, CharacteristicSetRevisionEntity,
     SettlementCheckEntity, CheckRevisionEntity, FootingResultEntity],
   migrations: [Init1796179339734, LabRecords1796180920952, ReadingsImport1796181181337, ReadingsOneForeignKey1796181664432, MembershipRoles1796313749156,
-    SessionsAndRateLimits1796317586769, SignUpRequests1796318744210, TestContributions1796320068018, Design1796323725979],
+    IssuedReports1796313882857, SessionsAndRateLimits1796317586769, SignUpRequests1796318744210, TestContributions1796320068018,
+    ClientSharing1796322759129, Design1796323725979],
   // gen_random_uuid() is built into PostgreSQL 13+, so no extension is needed on a managed server.
   uuidExtension: 'pgcrypto',
   synchronize: false,

@@ -5,7 +5,7 @@ import { createBoss } from './jobs/boss.js';
 import { JOBS } from './jobs/index.js';
 import { registerJobs } from './jobs/register-jobs.js';
 import { closeMailer } from './mail/mailer.js';
-import { closeParsePool } from './modules/readings-import/parse-pool.js';
+import { closeParsePool, warmParsePool } from './modules/readings-import/parse-pool.js';
 import { closeEnginePool } from './modules/settlement-checks/engine-pool.js';
 import { ensureBucket } from './storage/storage.js';
 
@@ -14,6 +14,7 @@ await ensureBucket();
 const boss = createBoss();
 boss.on('error', (error) => logger.error({ err: error }, 'job queue error'));
 await boss.start();
+await warmParsePool();
 await registerJobs(boss, JOBS);
 logger.info({ jobs: JOBS.map((job) => job.name) }, 'Porestack worker started');
 

@@ -63,7 +63,9 @@ test('an admin invites a technician, who joins from the e-mailed link and sees o
   await expect(roles.getByRole('checkbox', { name: 'Technician' })).toBeChecked();
   await page.getByRole('navigation', { name: 'Organisation' }).getByRole('link', { name: 'Activity' }).click();
   await expect(page.getByRole('heading', { level: 1, name: 'Activity' })).toBeVisible();
-  await expect(page.getByRole('cell', { name: 'Sent an invitation' })).toBeVisible();
+  // The log says it in words: who was invited as what, and the roles before and after.
+  await expect(page.getByRole('cell', { name: `Invited ${technician.email} as Technician` })).toBeVisible();
+  await expect(page.getByRole('cell', { name: `Changed the roles of ${technician.name}: Technician → Technician and Lab manager` })).toBeVisible();
 });
 
 test('an admin revokes an invitation and the link stops working', async ({ page, browser }) => {

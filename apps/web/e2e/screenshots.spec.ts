@@ -151,9 +151,13 @@ test('screenshots of the lab pages', async ({ browser }) => {
   await page.waitForLoadState('networkidle');
   await shot(page, 'lab-soil-records');
   const record = page.getByRole('table').getByRole('link').first();
+  let recordUrl = '';
   if (await record.count()) {
     await record.click();
     await expect(page.getByRole('navigation', { name: 'Versions' })).toBeVisible();
+    // The seeded approvals' reports are printed by the worker after the seed.
+    await expect(page.getByRole('link', { name: 'Download the test report (PDF)' })).toBeVisible({ timeout: 60_000 });
+    recordUrl = page.url();
     await shot(page, 'lab-soil-record');
   }
 
@@ -161,5 +165,69 @@ test('screenshots of the lab pages', async ({ browser }) => {
   await page.goto(`/orgs/${orgId}/tests`);
   await expect(page.getByRole('table', { name: 'Consolidation tests' })).toBeVisible();
   await shot(page, 'lab-tests-narrow');
+  if (recordUrl) {
+    await page.goto(recordUrl);
+    await expect(page.getByRole('link', { name: 'Download the test report (PDF)' })).toBeVisible();
+    await shot(page, 'lab-soil-record-narrow');
+  }
   await context.close();
+});
+
+/** Every role's home page, the client's pages and the sharing panel, wide and at 390 px, on the demo lab. */
+test('screenshots of the home pages and the client pages', async ({ browser }) => {
+  test.setTimeout(300_000);
+  const demo = (role: string) => `${role}@demo.porestack.test`;
+  for (const [role, email] of [
+    ['admin', demo('admin')],
+    ['technician', demo('technician')],
+    ['lab-manager', demo('lab-manager')],
+    ['designer', demo('designer')],
+    ['client', demo('client')],
+  ] as const) {
+    const context = await browser.newContext({ viewport: { width: 1280, height: 800 } });
+    const page = await context.newPage();
+    await signIn(page, email, 'porestack-demo');
+    await page.waitForURL(/\/orgs\/[^/]+/);
+    const orgId = /\/orgs\/([^/?]+)/.exec(page.url())?.[1] ?? '';
+    await expect(page.getByRole('heading', { level: 2 }).first()).toBeVisible();
+    for (const width of [1280, 390]) {
+      await page.setViewportSize({ width, height: 800 });
+      await page.goto(`/orgs/${orgId}`);
+      await expect(page.getByRole('heading', { level: 2 }).first()).toBeVisible();
+      await shot(page, `home-${role}-${width}`);
+    }
+    if (role === 'lab-manager' || role === 'client' || role === 'admin') {
+      for (const width of [1280, 390]) {
+        await page.setViewportSize({ width, height: 800 });
+        await page.goto(`/orgs/${orgId}/projects`);
+        await page.getByRole('link', { name: 'Saltmarsh Lane Pumping Station' }).click();
+        await expect(page.getByRole('region', { name: 'Approved test results' }).getByRole('table')).toBeVisible();
+        await shot(page, `project-${role}-${width}`);
+      }
+    }
+    if (role === 'admin') {
+      for (const width of [1280, 390]) {
+        await page.setViewportSize({ width, height: 800 });
+        await page.goto(`/orgs/${orgId}/activity`);
+        await expect(page.getByRole('heading', { level: 1, name: 'Activity' })).toBeVisible();
+        await shot(page, `activity-${width}`);
+      }
+    }
+    if (role === 'client') {
+      await page.goto(`/orgs/${orgId}/projects`);
+      await shot(page, 'projects-client-1280');
+      await page.getByRole('link', { name: 'Saltmarsh Lane Pumping Station' }).click();
+      await page.getByRole('region', { name: 'Approved test results' }).getByRole('link', { name: 'PLM-OED-01' }).click();
+      await expect(page.getByRole('heading', { level: 1, name: /^Test PLM-OED-01/ })).toBeVisible();
+      const charts = page.getByRole('region', { name: 'Curves' }).getByTestId('plotly-chart');
+      await expect(charts.locator('.main-svg').first()).toBeVisible({ timeout: 90_000 });
+      await expect(page.locator('[data-testid="plotly-chart"]:not(:has(.main-svg))')).toHaveCount(0, { timeout: 30_000 });
+      await shot(page, 'issued-test-client-1280');
+      await page.setViewportSize({ width: 390, height: 800 });
+      await page.waitForTimeout(1_000);
+      await shot(page, 'issued-test-client-390');
+      await page.screenshot({ path: 'screenshots/issued-test-client-390-top.png' });
+    }
+    await context.close();
+  }
 });

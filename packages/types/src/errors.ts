@@ -21,6 +21,7 @@ export const API_ERROR_CODES = [
   'unsupported_file',
   'invalid_file',
   'profile_name_taken',
+  'report_not_ready',
   'rate_limited',
   'token_invalid',
   'token_used',

@@ -366,3 +366,33 @@ export type {
   DesignRecordQuery,
 } from './design/traceability.js';
 export { groundModelInputFromContent } from './design/ground-model-input.js';
+export {
+  ProjectShareCreateSchema,
+  ProjectClientSchema,
+  ProjectClientInvitationSchema,
+  ProjectClientsSchema,
+  ProjectShareOutcomeSchema,
+} from './sharing.js';
+export type { ProjectShareCreate, ProjectClient, ProjectClientInvitation, ProjectClients, ProjectShareOutcome } from './sharing.js';
+export {
+  ResultsProjectSchema,
+  IssuedResultSchema,
+  ResultsSampleSchema,
+  ResultsBoreholeSchema,
+  ProjectResultsSchema,
+  IssuedSpecimenSchema,
+  IssuedTestSummarySchema,
+} from './lab/results.js';
+export type { ResultsProject, IssuedResult, ResultsBorehole, ProjectResults, IssuedSpecimen, IssuedTestSummary } from './lab/results.js';
+export {
+  WAITING_REASONS,
+  WaitingReasonSchema,
+  HomeTestSchema,
+  WaitingTestSchema,
+  HomeApprovalSchema,
+  StuckTestSchema,
+  HomeOverviewSchema,
+} from './home.js';
+export type { WaitingReason, HomeTest, WaitingTest, HomeApproval, StuckTest, HomeOverview } from './home.js';
+export { REPORT_KINDS, ReportKindSchema, REPORT_STATES, ReportStateSchema, IssuedReportSchema, ReportSettingsSchema, ReportSettingsViewSchema } from './lab/reports.js';
+export type { ReportKind, ReportState, IssuedReport, ReportSettings, ReportSettingsView } from './lab/reports.js';

@@ -24,6 +24,8 @@ export const InvitationSchema = z.object({
   invitedBy: z.string(),
   createdAt: z.iso.datetime({ offset: true }),
   expiresAt: z.iso.datetime({ offset: true }),
+  /** Projects shared with the invitee: accepting puts them on these as a client. */
+  projects: z.array(z.object({ id: z.uuid(), name: z.string(), reference: z.string() })),
 });
 export type Invitation = z.infer<typeof InvitationSchema>;
 
@@ -35,6 +37,8 @@ export const InvitationPreviewSchema = z.object({
   invitedBy: z.string(),
   accountExists: z.boolean(),
   expiresAt: z.iso.datetime({ offset: true }),
+  /** Names of the projects shared with the invitee, if any. */
+  projectNames: z.array(z.string()),
 });
 export type InvitationPreview = z.infer<typeof InvitationPreviewSchema>;
 
@@ -56,6 +60,8 @@ export const AuditEntrySchema = z.object({
   action: z.string(),
   objectType: z.string(),
   objectId: z.string().nullable(),
+  /** The object in words as it is now (a test's reference, a project's reference and name, a person's name); null once it is gone. */
+  objectLabel: z.string().nullable(),
   details: z.record(z.string(), z.unknown()),
 });
 export type AuditEntry = z.infer<typeof AuditEntrySchema>;

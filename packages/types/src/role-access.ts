@@ -17,8 +17,10 @@ export const ROLE_ACCESS = {
   labWorkers: ['technician', 'lab_manager'],
   /** Who approves a test or sends it back. */
   reviewers: ['lab_manager'],
-  /** Who reads approved soil records: everyone in the organisation. */
+  /** Who reads approved soil records: everyone in the organisation, each within their project scope. */
   recordReaders: ROLES,
+  /** Who reads projects, their boreholes and samples: everyone, each within their project scope (designers and clients: the projects they are on). */
+  projectReaders: ROLES,
   /**
    * Who sends readings files and runs imports: the technician who runs the test. Lab managers
    * review what was imported rather than import it, which keeps the review independent.

@@ -44,6 +44,8 @@ const EnvSchema = z.object({
   IMPORT_MAX_FILE_MB: z.coerce.number().positive().default(40),
   /** Most rows of readings one file may hold. */
   IMPORT_MAX_ROWS: z.coerce.number().int().positive().default(500_000),
+  /** The Chromium that prints reports to PDF (Debian's package, installed by infra/lib.sh). */
+  CHROMIUM_PATH: z.string().default('/usr/bin/chromium'),
   /**
    * Seconds a file's parse may take, plus 4 s per MB (a tenth and 0.5 s per MB for a
    * preview, which reads only the first rows); a parse past it is stopped as unreadable.

@@ -21,6 +21,7 @@ const STATUS_BY_CODE: Record<ErrorCode, number> = {
   unsupported_file: 415,
   invalid_file: 422,
   profile_name_taken: 409,
+  report_not_ready: 409,
   rate_limited: 429,
   token_invalid: 400,
   token_used: 410,
@@ -46,8 +47,32 @@ function fromBodyParser(error: unknown): DomainError | null {
   return null;
 }
 
+/** Codes of a connection that failed or was refused, and PostgreSQL's "connection" and "shutting down" states. */
+const UNREACHABLE_CODES = new Set(['ECONNREFUSED', 'ECONNRESET', 'ETIMEDOUT', 'EHOSTUNREACH', 'ENETUNREACH', 'ENOTFOUND', 'EAI_AGAIN', 'EPIPE', '57P01', '57P02', '57P03', '53300']);
+
+/**
+ * The database or the file store not answering: 503 with what to do, not a 500 — the
+ * request can be sent again once the service is back.
+ */
+function fromUnavailableService(error: unknown): DomainError | null {
+  const candidates = [error, (error as { driverError?: unknown } | null)?.driverError, (error as { cause?: unknown } | null)?.cause];
+  for (const candidate of candidates) {
+    if (typeof candidate !== 'object' || candidate === null) continue;
+    const code = (candidate as { code?: unknown }).code;
+    const message = String((candidate as { message?: unknown }).message ?? '');
+    if ((typeof code === 'string' && (UNREACHABLE_CODES.has(code) || code.startsWith('08'))) || /Connection terminated|connect ECONNREFUSED|timeout exceeded when trying to connect/i.test(message)) {
+      return new DomainError(
+        'service_unavailable',
+        'A service Porestack needs (its database or its file storage) is not answering, so this could not be done. Try again in a minute; if it keeps happening, tell your administrator.',
+      );
+    }
+  }
+  return null;
+}
+
 export const errorMiddleware: ErrorRequestHandler = (error: unknown, req, res, _next) => {
-  const known = error instanceof DomainError ? error : fromBodyParser(error);
+  const known = error instanceof DomainError ? error : (fromBodyParser(error) ?? fromUnavailableService(error));
+  if (known?.code === 'service_unavailable') (req.log ?? logger).warn({ err: error }, 'a service is not answering');
   if (known) {
     const body: ApiError = { code: known.code, message: known.message };
     if (known.issues) body.issues = known.issues;

@@ -9,3 +9,10 @@ export function uuidParam(req: Request, name: string, what: string): string {
   if (typeof value !== 'string' || !UUID_PATTERN.test(value)) throw new NotFoundError(what);
   return value;
 }
+
+/** A soil record version number path parameter (1, 2, …); anything else answers 404 like a missing version. */
+export function versionParam(req: Request): number {
+  const version = Number(req.params['version']);
+  if (!Number.isInteger(version) || version < 1) throw new NotFoundError('soil record version');
+  return version;
+}

@@ -5,7 +5,14 @@ import { env } from '../config/env.js';
 export const BOSS_SCHEMA = 'pgboss';
 
 export function createBoss(): PgBoss {
-  return new PgBoss({ connectionString: env().DATABASE_URL, schema: BOSS_SCHEMA, application_name: 'porestack-jobs' });
+  return new PgBoss({
+    connectionString: env().DATABASE_URL,
+    schema: BOSS_SCHEMA,
+    application_name: 'porestack-jobs',
+    // Expired jobs (a worker that died mid-job) are failed and retried at the next maintenance:
+    // every 10 s instead of pg-boss's 2 minutes, so a killed import is retried within a minute.
+    maintenanceIntervalSeconds: 10,
+  });
 }
 
 let sender: Promise<PgBoss> | undefined;

@@ -60,9 +60,14 @@ export async function requeueImport(data: ImportReadingsJobData): Promise<void> 
   });
 }
 
+/**
+ * Retried on our failures only (storage or database down), with a growing pause — 5 s, then
+ * 10, 20 … about eleven minutes in all — so an import that met a service being restarted goes
+ * through once it is back. The import replaces the readings in one transaction, so a retry
+ * never duplicates.
+ */
 function sendOptions(data: ImportReadingsJobData) {
-  // Retried on our failures only (storage or database down): the import replaces the readings in one transaction, so a retry never duplicates.
-  return { retryLimit: 2, retryDelay: 2, expireInSeconds: importExpirySeconds(data.sizeBytes) };
+  return { retryLimit: 7, retryDelay: 5, retryBackoff: true, expireInSeconds: importExpirySeconds(data.sizeBytes) };
 }
 
 /** Imports one worker process works at once; below the parse threads of a process (PARSE_THREADS). */
@@ -75,8 +80,12 @@ export const IMPORT_CONCURRENCY = 3;
  */
 export const IMPORTS_PER_ORGANISATION = 2;
 
-/** A running import whose row has not moved for this long is taken to be dead (its worker stopped). */
-const STALE_RUNNING_MINUTES = 15;
+/**
+ * A running import whose row has not moved for this long is taken to be dead (its worker
+ * stopped) and does not count against its organisation's slots: longer than the slowest
+ * parse of the largest file allowed (pg-boss retries the job itself after its expiry).
+ */
+const STALE_RUNNING_MINUTES = 5;
 
 /**
  * pg-boss picks the highest priority first, then the oldest. An import is sent at minus the
@@ -91,10 +100,15 @@ export async function importPriority(manager: EntityManager, orgId: string): Pro
   return -(row?.pending ?? 0);
 }
 
-/** How long pg-boss lets an import run before it is failed and retried: the parse deadline and the write, with a margin. */
+/**
+ * How long pg-boss lets an import run before it takes its worker for dead and retries it:
+ * the parse deadline and the write (COPY of 500,000 readings takes about 3 s), with a margin.
+ * A small file's import is retried within about 40 s of its worker dying (with the 10 s
+ * maintenance of boss.ts).
+ */
 export function importExpirySeconds(sizeBytes: number): number {
   const megabytes = sizeBytes / (1024 * 1024);
-  return Math.ceil(parseDeadlineMs(sizeBytes, 'import') / 1000 + 30 + 3 * megabytes);
+  return Math.ceil(parseDeadlineMs(sizeBytes, 'import') / 1000 + 10 + 3 * megabytes);
 }
 
 /**

@@ -10,6 +10,7 @@ import { ProjectMemberEntity } from '../modules/projects/project-member.entity.j
 import { ProjectEntity } from '../modules/projects/project.entity.js';
 import { ReviewEventEntity } from '../modules/reviews/review-event.entity.js';
 import { SampleEntity } from '../modules/samples/sample.entity.js';
+import { queueReport } from '../modules/reports/reports.service.js';
 import { createVersion } from '../modules/soil-records/soil-records.service.js';
 import { ensureBucket } from '../storage/storage.js';
 import type { DemoOrganisation } from './demo-organisation.seed.js';
@@ -94,7 +95,11 @@ export async function seedLabDemo(dataSource: DataSource, demo: DemoOrganisation
       siteName: 'Saltmarsh Lane, Pellowmere',
       createdById: managerId,
     });
-    await manager.getRepository(ProjectMemberEntity).insert({ organisationId: orgId, projectId: DEMO_PROJECT_ID, userId: demo.userIds.designer, role: 'designer' });
+    await manager.getRepository(ProjectMemberEntity).insert([
+      { organisationId: orgId, projectId: DEMO_PROJECT_ID, userId: demo.userIds.designer, role: 'designer', addedById: managerId },
+      // The demo client reads this project's approved results.
+      { organisationId: orgId, projectId: DEMO_PROJECT_ID, userId: demo.userIds.client, role: 'client', addedById: managerId },
+    ]);
     const boreholeIds = new Map<string, string>();
     for (const borehole of BOREHOLES) {
       const saved = await manager.getRepository(BoreholeEntity).save({ organisationId: orgId, projectId: DEMO_PROJECT_ID, ...borehole });
@@ -158,7 +163,9 @@ export async function seedLabDemo(dataSource: DataSource, demo: DemoOrganisation
       await manager.getRepository(ReviewEventEntity).insert({ organisationId: orgId, testId, decision, actorId: managerId, analysisId: test.latestAnalysisId, comment });
       if (decision === 'approved') {
         const analysis = await manager.getRepository(AnalysisEntity).findOneByOrFail({ id: test.latestAnalysisId as string });
-        await createVersion(manager, test, analysis, DEMO_PROJECT_ID, managerId);
+        const { version } = await createVersion(manager, test, analysis, DEMO_PROJECT_ID, managerId);
+        // As an approval through the API does: the worker prints the version's report.
+        await queueReport(manager, { orgId, kind: 'test-report', subjectId: version.id, testId, requestedById: managerId });
       }
     });
 

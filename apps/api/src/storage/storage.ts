@@ -24,6 +24,11 @@ export function storage(): Minio.Client {
   return client;
 }
 
+/** Drops the client, so the next call connects anew from the environment (tests that move the endpoint). */
+export function forgetStorageClient(): void {
+  client = undefined;
+}
+
 export function bucketName(): string {
   return env().S3_BUCKET;
 }
@@ -33,4 +38,12 @@ export async function ensureBucket(): Promise<void> {
   const s3 = storage();
   const bucket = bucketName();
   if (!(await s3.bucketExists(bucket))) await s3.makeBucket(bucket, env().S3_REGION);
+}
+
+/** The whole object as bytes (uploads and reports are small enough to hold in memory). */
+export async function objectBytes(key: string): Promise<Buffer> {
+  const stream = await storage().getObject(bucketName(), key);
+  const chunks: Buffer[] = [];
+  for await (const chunk of stream) chunks.push(chunk as Buffer);
+  return Buffer.concat(chunks);
 }

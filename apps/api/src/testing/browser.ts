@@ -37,7 +37,8 @@ export function clientAddress(): string {
   return `10.${octets[0]}.${octets[1]}.${octets[2]}`;
 }
 
-export async function openBrowser(app: Express, address = clientAddress()): Promise<Browser> {
+/** `app` is the app in this process, or the base URL of a portal running in another. */
+export async function openBrowser(app: Express | string, address = clientAddress()): Promise<Browser> {
   const agent = request.agent(app).set('X-Forwarded-For', address);
   const res = await agent.get('/api/auth/csrf').expect(200);
   const csrfToken = (res.body as { csrfToken: string }).csrfToken;
@@ -92,7 +93,7 @@ export async function createMember(orgId: string, role: Role | readonly Role[], 
 }
 
 /** A browser signed in as `email` (password TEST_PASSWORD). */
-export async function signedInBrowser(app: Express, email: string): Promise<Browser> {
+export async function signedInBrowser(app: Express | string, email: string): Promise<Browser> {
   const browser = await openBrowser(app);
   await browser.post('/api/auth/sign-in', { email, password: TEST_PASSWORD }).expect(200);
   return browser;

@@ -7,12 +7,14 @@ import { BOSS_SCHEMA, createBoss } from '../jobs/boss.js';
 import { importReadingsJob } from '../jobs/import-readings.job.js';
 import type { JobDefinition } from '../jobs/job-definition.js';
 import { registerJobs } from '../jobs/register-jobs.js';
+import { warmParsePool } from '../modules/readings-import/parse-pool.js';
 import { bucketName, ensureBucket, storage } from '../storage/storage.js';
 import type { Browser } from './browser.js';
 
 /** A pg-boss worker in this process working the given queues, as the worker process does. */
 export async function startWorker(jobs: JobDefinition[]): Promise<PgBoss> {
   await ensureBucket();
+  await warmParsePool();
   const boss = createBoss();
   boss.on('error', () => undefined);
   await boss.start();
@@ -49,7 +51,8 @@ export function sendFile(browser: Browser, orgId: string, testId: string, bytes:
 }
 
 /** Polls GET /jobs/:jobId until the job has finished. */
-export async function finishedJob(browser: Browser, orgId: string, jobId: string, timeoutMs = 15_000): Promise<JobRun> {
+/** Generous: on a loaded two-core machine a parse thread takes seconds to start from the sources. */
+export async function finishedJob(browser: Browser, orgId: string, jobId: string, timeoutMs = 60_000): Promise<JobRun> {
   const deadline = Date.now() + timeoutMs;
   for (;;) {
     const res = await browser.get(`/api/orgs/${orgId}/jobs/${jobId}`).expect(200);

@@ -15,12 +15,8 @@ describe('navItemsFor(roles)', () => {
     expect(navItemsFor(['lab_manager']).map((item) => item.label)).toEqual(['Home', 'Projects', 'Tests', 'Review queue', 'Soil records']);
   });
 
-  it('gives designers the projects they work on and the soil records', () => {
-    expect(navItemsFor(['designer']).map((item) => item.label)).toEqual(['Home', 'Projects', 'Soil records']);
-  });
-
-  it('gives a client the soil records only', () => {
-    expect(navItemsFor(['client']).map((item) => item.label)).toEqual(['Home', 'Soil records']);
+  it.each(['designer', 'client'] as const)('gives a %s their projects and the soil records', (role) => {
+    expect(navItemsFor([role]).map((item) => item.label)).toEqual(['Home', 'Projects', 'Soil records']);
   });
 
   it('gives an administrator who is also lab manager every page, each once, in order', () => {

@@ -20,8 +20,9 @@ export const NAV_ITEMS = [
   { id: 'home', label: 'Home', to: paths.org.home.to, roles: ROLES, end: true },
   { id: 'members', label: 'Members', to: paths.org.members.to, roles: ROLE_ACCESS.admins },
   { id: 'activity', label: 'Activity', to: paths.org.activity.to, roles: ROLE_ACCESS.admins },
-  // The lab's working pages; designers also open the projects they are on (the API scopes the list) for their design work.
-  { id: 'projects', label: 'Projects', to: paths.org.projects.to, roles: [...LAB_STAFF_ROLES, 'designer'] },
+  // Designers and clients see the projects they are on (the API scopes the list).
+  { id: 'projects', label: 'Projects', to: paths.org.projects.to, roles: ROLE_ACCESS.projectReaders },
+  // The lab's own working pages; designers reach a test from a project or a soil record instead.
   { id: 'tests', label: 'Tests', to: paths.org.tests.to, roles: LAB_STAFF_ROLES },
   // Reviewing is the lab manager's (the API refuses an administrator who is not also lab manager).
   { id: 'review-queue', label: 'Review queue', to: paths.org.reviewQueue.to, roles: ROLE_ACCESS.reviewers },

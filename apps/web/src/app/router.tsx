@@ -77,6 +77,7 @@ export const routes: RouteObject[] = [
           ...labRoute(paths.org.reviewQueue.pattern, () => import('./routes/review-queue-route').then((m) => ({ Component: m.ReviewQueueRoute }))),
           ...labRoute(paths.org.soilRecords.pattern, () => import('./routes/soil-records-route').then((m) => ({ Component: m.SoilRecordsRoute }))),
           ...labRoute(paths.org.soilRecord.pattern, () => import('./routes/soil-record-route').then((m) => ({ Component: m.SoilRecordRoute }))),
+          ...labRoute(paths.org.issuedTest.pattern, () => import('./routes/issued-test-route').then((m) => ({ Component: m.IssuedTestRoute }))),
           { path: '*', lazy: () => import('./routes/not-found-route').then((m) => ({ Component: m.NotFoundRoute })), ErrorBoundary: RouteErrorBoundary },
         ],
       },

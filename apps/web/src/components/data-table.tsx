@@ -1,4 +1,4 @@
-import { flexRender, type Table } from '@tanstack/react-table';
+import { flexRender, type Header, type Table } from '@tanstack/react-table';
 
 type DataTableProps<Row> = {
   table: Table<Row>;
@@ -8,9 +8,37 @@ type DataTableProps<Row> = {
   framed?: boolean;
 };
 
+const SORT_MARK = { asc: '▲', desc: '▼' } as const;
+
+/** A column heading; a button that sorts by the column when the table sorts. */
+function HeaderCell<Row>({ header, sortable }: { header: Header<Row, unknown>; sortable: boolean }) {
+  const content = header.isPlaceholder ? null : flexRender(header.column.columnDef.header, header.getContext());
+  const canSort = sortable && !header.isPlaceholder && header.column.getCanSort();
+  const sorted = header.column.getIsSorted();
+  return (
+    <th
+      scope="col"
+      aria-sort={!canSort ? undefined : sorted === 'asc' ? 'ascending' : sorted === 'desc' ? 'descending' : 'none'}
+      className="whitespace-nowrap border-b border-slate-200 px-3 py-2 font-medium"
+    >
+      {canSort ? (
+        <button type="button" onClick={header.column.getToggleSortingHandler()} className="inline-flex items-center gap-1 uppercase tracking-wide hover:text-slate-800">
+          {content}
+          <span aria-hidden="true" className={sorted ? 'text-accent-700' : 'text-slate-300'}>
+            {sorted ? SORT_MARK[sorted] : '↕'}
+          </span>
+        </button>
+      ) : (
+        content
+      )}
+    </th>
+  );
+}
+
 /**
  * Dense, readable table markup for a TanStack table instance; scrolls sideways on narrow screens.
  * Cells do not wrap: a column of long text opts in with a `whitespace-normal` span in its cell.
+ * When the table has a sorted row model, each sortable heading becomes a button (aria-sort tells which way).
  */
 export function DataTable<Row>({ table, caption, framed = true }: DataTableProps<Row>) {
   return (
@@ -21,9 +49,7 @@ export function DataTable<Row>({ table, caption, framed = true }: DataTableProps
           {table.getHeaderGroups().map((group) => (
             <tr key={group.id}>
               {group.headers.map((header) => (
-                <th key={header.id} scope="col" className="whitespace-nowrap border-b border-slate-200 px-3 py-2 font-medium">
-                  {header.isPlaceholder ? null : flexRender(header.column.columnDef.header, header.getContext())}
-                </th>
+                <HeaderCell key={header.id} header={header} sortable={table.options.getSortedRowModel !== undefined} />
               ))}
             </tr>
           ))}

@@ -39,6 +39,11 @@ export const paths = {
     soilRecords: { pattern: 'soil-records', to: (orgId: string) => `/orgs/${orgId}/soil-records` },
     /** `?version=n` opens one version; without it, the current one. */
     soilRecord: { pattern: 'soil-records/:recordId', to: (orgId: string, recordId: string) => `/orgs/${orgId}/soil-records/${recordId}` },
+    /** One approved version as issued: the test summary every reader of the project may open. */
+    issuedTest: {
+      pattern: 'soil-records/:recordId/versions/:version',
+      to: (orgId: string, recordId: string, version: number) => `/orgs/${orgId}/soil-records/${recordId}/versions/${version}`,
+    },
   },
 } as const;
 
@@ -111,4 +116,17 @@ export const apiPaths = {
   checkCompare: (orgId: string, projectId: string, checkId: string, a: number, b: number) => `/api/orgs/${orgId}/projects/${projectId}/settlement-checks/${checkId}/compare?a=${a}&b=${b}`,
   checkSizing: (orgId: string, projectId: string, checkId: string) => `/api/orgs/${orgId}/projects/${projectId}/settlement-checks/${checkId}/sizing`,
   checkSizingApply: (orgId: string, projectId: string, checkId: string) => `/api/orgs/${orgId}/projects/${projectId}/settlement-checks/${checkId}/sizing/apply`,
+  issuedTestSummary: (orgId: string, recordId: string, version: number) => `/api/orgs/${orgId}/soil-records/${recordId}/versions/${version}/summary`,
+  projectResults: (orgId: string, projectId: string) => `/api/orgs/${orgId}/projects/${projectId}/results`,
+  projectClients: (orgId: string, projectId: string) => `/api/orgs/${orgId}/projects/${projectId}/clients`,
+  projectClient: (orgId: string, projectId: string, userId: string) => `/api/orgs/${orgId}/projects/${projectId}/clients/${userId}`,
+  projectClientInvitation: (orgId: string, projectId: string, invitationId: string) => `/api/orgs/${orgId}/projects/${projectId}/client-invitations/${invitationId}`,
+  home: (orgId: string) => `/api/orgs/${orgId}/home`,
+  reportSettings: (orgId: string) => `/api/orgs/${orgId}/report-settings`,
+  versionReport: (orgId: string, recordId: string, version: number) => `/api/orgs/${orgId}/soil-records/${recordId}/versions/${version}/report`,
+  versionReportPdf: (orgId: string, recordId: string, version: number) => `/api/orgs/${orgId}/soil-records/${recordId}/versions/${version}/report/pdf`,
+  versionReportRetry: (orgId: string, recordId: string, version: number) => `/api/orgs/${orgId}/soil-records/${recordId}/versions/${version}/report/retry`,
+  versionDataXlsx: (orgId: string, recordId: string, version: number) => `/api/orgs/${orgId}/soil-records/${recordId}/versions/${version}/data.xlsx`,
+  testDataXlsx: (orgId: string, testId: string) => `/api/orgs/${orgId}/tests/${testId}/data.xlsx`,
+  projectParametersXlsx: (orgId: string, projectId: string) => `/api/orgs/${orgId}/projects/${projectId}/parameters.xlsx`,
 } as const;

@@ -72,7 +72,8 @@ export const SoilRecordSummarySchema = z.object({
   id: z.uuid(),
   testId: z.uuid(),
   testReference: z.string(),
-  testStatus: TestStatusSchema,
+  /** Where the test stands in the lab now; null for a client, who follows approved versions only. */
+  testStatus: TestStatusSchema.nullable(),
   projectId: z.uuid(),
   projectName: z.string(),
   boreholeName: z.string(),

@@ -5,8 +5,10 @@ import { dataSource } from '../../data-source.js';
 import { InvitationEntity } from '../../modules/invitations/invitation.entity.js';
 import { openBrowser, signedInBrowser, signUpAdmin, createMember, uniqueEmail, type Browser } from '../../testing/browser.js';
 import { listRoutes, type Access } from '../routes.js';
+import { jobRuns } from '../../modules/job-runs/job-runs.service.js';
 import { approveTest } from '../../modules/reviews/reviews.service.js';
-import { analysedTest, draftTest, submittedTest, uploadKnownReadings, type LabFixture } from '../../testing/lab-fixtures.js';
+import { generateReport } from '../../jobs/generate-report.job.js';
+import { analysedTest, draftTest, placeOnProject, submittedTest, type LabFixture } from '../../testing/lab-fixtures.js';
 import { canonicalCsvTemplate, LOGGER_MAPPING } from '../../modules/readings-import/demo-files.js';
 import { DESIGN_READERS, DESIGN_WRITERS } from '../../modules/projects/design-roles.js';
 import { designContext, type DesignContext } from '../../testing/design-policy-context.js';
@@ -32,8 +34,16 @@ interface Context {
     technicianId: string;
     draft: LabFixture;
     analysed: LabFixture;
-    jobId: string;
+    /** A job the designer started: designers follow only their own jobs. */
+    designerJobId: string;
     recordId: string;
+    /** The approved test: designers open a test only as approved. */
+    approvedTestId: string;
+    approvedProjectId: string;
+    /** Prints the approved record's report once (no worker runs in this file). */
+    issueReport: () => Promise<void>;
+    /** A newly approved record whose report generation failed (the printer could not start). */
+    newFailedReportRecordId: () => Promise<string>;
     newAnalysedTestId: () => Promise<string>;
     newSubmittedTestId: () => Promise<string>;
   };
@@ -47,6 +57,7 @@ const PROJECT_EDITORS: readonly Role[] = ['admin', 'lab_manager'];
 const LAB_WORKERS: readonly Role[] = ['technician', 'lab_manager'];
 const REVIEWERS: readonly Role[] = ['lab_manager'];
 const RECORD_READERS: readonly Role[] = ['admin', 'technician', 'lab_manager', 'designer', 'client'];
+const PROJECT_READERS: readonly Role[] = ['admin', 'technician', 'lab_manager', 'designer', 'client'];
 const IMPORTERS: readonly Role[] = ['technician'];
 const UPLOAD_READERS: readonly Role[] = ['technician', 'lab_manager', 'admin'];
 const PROFILE_EDITORS: readonly Role[] = ['technician', 'lab_manager'];
@@ -89,20 +100,26 @@ const SPEC: Record<string, { access: Access; sample: (ctx: Context) => Promise<S
     access: ADMIN,
     sample: async (c) => ({ path: `/api/orgs/${c.orgId}/members/${await c.newMemberId()}` }),
   },
+  'GET /api/orgs/:orgId/home': { access: ROLES, sample: (c) => ({ path: `/api/orgs/${c.orgId}/home` }) },
   'GET /api/orgs/:orgId/audit': { access: ADMIN, sample: (c) => ({ path: `/api/orgs/${c.orgId}/audit` }) },
+  'GET /api/orgs/:orgId/report-settings': { access: ['admin', 'lab_manager'], sample: (c) => ({ path: `/api/orgs/${c.orgId}/report-settings` }) },
+  'PUT /api/orgs/:orgId/report-settings': {
+    access: ['admin'],
+    sample: (c) => ({ path: `/api/orgs/${c.orgId}/report-settings`, body: { address: '1 Invented Road, Nowhere', testMethodStatement: null } }),
+  },
   'GET /api/orgs/:orgId/designers': { access: PROJECT_EDITORS, sample: (c) => ({ path: `/api/orgs/${c.orgId}/designers` }) },
-  'GET /api/orgs/:orgId/projects': { access: LAB_READERS, sample: (c) => ({ path: `/api/orgs/${c.orgId}/projects` }) },
+  'GET /api/orgs/:orgId/projects': { access: PROJECT_READERS, sample: (c) => ({ path: `/api/orgs/${c.orgId}/projects` }) },
   'POST /api/orgs/:orgId/projects': {
     access: PROJECT_EDITORS,
     sample: (c) => ({ path: `/api/orgs/${c.orgId}/projects`, body: { name: 'Policy project', reference: `PP-${Math.random()}`, clientName: 'Policy client' } }),
   },
-  'GET /api/orgs/:orgId/projects/:projectId': { access: LAB_READERS, sample: (c) => ({ path: `/api/orgs/${c.orgId}/projects/${c.lab.draft.projectId}` }) },
+  'GET /api/orgs/:orgId/projects/:projectId': { access: PROJECT_READERS, sample: (c) => ({ path: `/api/orgs/${c.orgId}/projects/${c.lab.draft.projectId}` }) },
   'PATCH /api/orgs/:orgId/projects/:projectId': {
     access: PROJECT_EDITORS,
     sample: (c) => ({ path: `/api/orgs/${c.orgId}/projects/${c.lab.draft.projectId}`, body: { siteName: 'Renamed site' } }),
   },
   'GET /api/orgs/:orgId/projects/:projectId/boreholes': {
-    access: LAB_READERS,
+    access: PROJECT_READERS,
     sample: (c) => ({ path: `/api/orgs/${c.orgId}/projects/${c.lab.draft.projectId}/boreholes` }),
   },
   'POST /api/orgs/:orgId/projects/:projectId/boreholes': {
@@ -110,7 +127,7 @@ const SPEC: Record<string, { access: Access; sample: (ctx: Context) => Promise<S
     sample: (c) => ({ path: `/api/orgs/${c.orgId}/projects/${c.lab.draft.projectId}/boreholes`, body: { name: `BH-${Math.random()}` } }),
   },
   'GET /api/orgs/:orgId/boreholes/:boreholeId/samples': {
-    access: LAB_READERS,
+    access: PROJECT_READERS,
     sample: (c) => ({ path: `/api/orgs/${c.orgId}/boreholes/${c.lab.draft.boreholeId}/samples` }),
   },
   'POST /api/orgs/:orgId/boreholes/:boreholeId/samples': {
@@ -122,12 +139,12 @@ const SPEC: Record<string, { access: Access; sample: (ctx: Context) => Promise<S
     sample: (c) => ({ path: `/api/orgs/${c.orgId}/samples/${c.lab.draft.sampleId}/tests`, body: { reference: `T-${Math.random()}`, technicianId: c.lab.technicianId } }),
   },
   'GET /api/orgs/:orgId/tests': { access: LAB_READERS, sample: (c) => ({ path: `/api/orgs/${c.orgId}/tests?status=draft` }) },
-  'GET /api/orgs/:orgId/tests/:testId': { access: LAB_READERS, sample: (c) => ({ path: `/api/orgs/${c.orgId}/tests/${c.lab.draft.testId}` }) },
+  'GET /api/orgs/:orgId/tests/:testId': { access: LAB_READERS, sample: (c) => ({ path: `/api/orgs/${c.orgId}/tests/${c.lab.approvedTestId}` }) },
   'PATCH /api/orgs/:orgId/tests/:testId': {
     access: LAB_WORKERS,
     sample: (c) => ({ path: `/api/orgs/${c.orgId}/tests/${c.lab.draft.testId}`, body: { apparatusName: 'Frame 3' } }),
   },
-  'GET /api/orgs/:orgId/tests/:testId/analysis': { access: LAB_READERS, sample: (c) => ({ path: `/api/orgs/${c.orgId}/tests/${c.lab.analysed.testId}/analysis` }) },
+  'GET /api/orgs/:orgId/tests/:testId/analysis': { access: LAB_READERS, sample: (c) => ({ path: `/api/orgs/${c.orgId}/tests/${c.lab.approvedTestId}/analysis` }) },
   'POST /api/orgs/:orgId/tests/:testId/analysis': { access: LAB_WORKERS, sample: (c) => ({ path: `/api/orgs/${c.orgId}/tests/${c.lab.analysed.testId}/analysis` }) },
   'PUT /api/orgs/:orgId/tests/:testId/picks': {
     access: LAB_WORKERS,
@@ -146,14 +163,46 @@ const SPEC: Record<string, { access: Access; sample: (ctx: Context) => Promise<S
     access: REVIEWERS,
     sample: async (c) => ({ path: `/api/orgs/${c.orgId}/tests/${await c.lab.newSubmittedTestId()}/request-changes`, body: { comment: 'Please check.' } }),
   },
-  'GET /api/orgs/:orgId/tests/:testId/reviews': { access: LAB_READERS, sample: (c) => ({ path: `/api/orgs/${c.orgId}/tests/${c.lab.analysed.testId}/reviews` }) },
+  'GET /api/orgs/:orgId/tests/:testId/reviews': { access: LAB_READERS, sample: (c) => ({ path: `/api/orgs/${c.orgId}/tests/${c.lab.approvedTestId}/reviews` }) },
   'GET /api/orgs/:orgId/soil-records': { access: RECORD_READERS, sample: (c) => ({ path: `/api/orgs/${c.orgId}/soil-records` }) },
   'GET /api/orgs/:orgId/soil-records/:recordId': { access: RECORD_READERS, sample: (c) => ({ path: `/api/orgs/${c.orgId}/soil-records/${c.lab.recordId}` }) },
   'GET /api/orgs/:orgId/soil-records/:recordId/versions/:version': {
     access: RECORD_READERS,
     sample: (c) => ({ path: `/api/orgs/${c.orgId}/soil-records/${c.lab.recordId}/versions/1` }),
   },
-  'GET /api/orgs/:orgId/jobs/:jobId': { access: LAB_READERS, sample: (c) => ({ path: `/api/orgs/${c.orgId}/jobs/${c.lab.jobId}` }) },
+  'GET /api/orgs/:orgId/jobs/:jobId': { access: LAB_READERS, sample: (c) => ({ path: `/api/orgs/${c.orgId}/jobs/${c.lab.designerJobId}` }) },
+  'GET /api/orgs/:orgId/projects/:projectId/results': {
+    access: RECORD_READERS,
+    sample: (c) => ({ path: `/api/orgs/${c.orgId}/projects/${c.lab.draft.projectId}/results` }),
+  },
+  'GET /api/orgs/:orgId/soil-records/:recordId/versions/:version/summary': {
+    access: RECORD_READERS,
+    sample: (c) => ({ path: `/api/orgs/${c.orgId}/soil-records/${c.lab.recordId}/versions/1/summary` }),
+  },
+  'GET /api/orgs/:orgId/projects/:projectId/clients': {
+    access: PROJECT_EDITORS,
+    sample: (c) => ({ path: `/api/orgs/${c.orgId}/projects/${c.lab.draft.projectId}/clients` }),
+  },
+  'POST /api/orgs/:orgId/projects/:projectId/clients': {
+    access: PROJECT_EDITORS,
+    sample: (c) => ({ path: `/api/orgs/${c.orgId}/projects/${c.lab.draft.projectId}/clients`, body: { email: uniqueEmail('shared') } }),
+  },
+  'DELETE /api/orgs/:orgId/projects/:projectId/clients/:userId': {
+    access: PROJECT_EDITORS,
+    sample: async (c) => {
+      const client = await createMember(c.orgId, 'client', 'withdrawn');
+      await placeOnProject(c.orgId, c.lab.draft.projectId, client.userId, 'client');
+      return { path: `/api/orgs/${c.orgId}/projects/${c.lab.draft.projectId}/clients/${client.userId}` };
+    },
+  },
+  'DELETE /api/orgs/:orgId/projects/:projectId/client-invitations/:invitationId': {
+    access: PROJECT_EDITORS,
+    sample: async (c) => {
+      const invitationId = await c.newInvitationId();
+      await dataSource.query('INSERT INTO invitation_projects (organisation_id, invitation_id, project_id) VALUES ($1, $2, $3)', [c.orgId, invitationId, c.lab.draft.projectId]);
+      return { path: `/api/orgs/${c.orgId}/projects/${c.lab.draft.projectId}/client-invitations/${invitationId}` };
+    },
+  },
   'POST /api/orgs/:orgId/tests/:testId/uploads': {
     access: IMPORTERS,
     sample: (c) => ({ path: `/api/orgs/${c.orgId}/tests/${c.lab.draft.testId}/uploads`, file: { bytes: Buffer.from(canonicalCsvTemplate()), name: 'policy.csv' } }),
@@ -177,7 +226,7 @@ const SPEC: Record<string, { access: Access; sample: (ctx: Context) => Promise<S
     access: PROFILE_EDITORS,
     sample: (c) => ({ path: `/api/orgs/${c.orgId}/import-profiles`, body: { name: `Policy ${Math.random()}`, mapping: LOGGER_MAPPING } }),
   },
-  'GET /api/orgs/:orgId/tests/:testId/readings': { access: LAB_READERS, sample: (c) => ({ path: `/api/orgs/${c.orgId}/tests/${c.lab.analysed.testId}/readings` }) },
+  'GET /api/orgs/:orgId/tests/:testId/readings': { access: LAB_READERS, sample: (c) => ({ path: `/api/orgs/${c.orgId}/tests/${c.lab.approvedTestId}/readings` }) },
   'GET /api/orgs/:orgId/templates/readings.csv': { access: UPLOAD_READERS, sample: (c) => ({ path: `/api/orgs/${c.orgId}/templates/readings.csv` }) },
   'GET /api/orgs/:orgId/templates/readings.xlsx': { access: UPLOAD_READERS, sample: (c) => ({ path: `/api/orgs/${c.orgId}/templates/readings.xlsx` }) },
   'GET /api/orgs/:orgId/settlement-checks': { access: DESIGN_READERS, sample: (c) => ({ path: `/api/orgs/${c.orgId}/settlement-checks?newerParametersApproved=true` }) },
@@ -245,6 +294,34 @@ const SPEC: Record<string, { access: Access; sample: (ctx: Context) => Promise<S
     access: DESIGN_WRITERS,
     sample: (c) => ({ path: `${c.design.checkPath}/sizing/apply`, body: { footingId: 'F1', widthM: 2.2 } }),
   },
+  // Issued reports and exports: everyone who reads soil records (within their project scope), retry by lab managers only.
+  'GET /api/orgs/:orgId/soil-records/:recordId/versions/:version/report': {
+    access: ['admin', 'technician', 'lab_manager', 'designer', 'client'],
+    sample: (c) => ({ path: `/api/orgs/${c.orgId}/soil-records/${c.lab.recordId}/versions/1/report` }),
+  },
+  'GET /api/orgs/:orgId/soil-records/:recordId/versions/:version/report/pdf': {
+    access: ['admin', 'technician', 'lab_manager', 'designer', 'client'],
+    sample: async (c) => {
+      await c.lab.issueReport();
+      return { path: `/api/orgs/${c.orgId}/soil-records/${c.lab.recordId}/versions/1/report/pdf` };
+    },
+  },
+  'POST /api/orgs/:orgId/soil-records/:recordId/versions/:version/report/retry': {
+    access: ['lab_manager'],
+    sample: async (c) => ({ path: `/api/orgs/${c.orgId}/soil-records/${await c.lab.newFailedReportRecordId()}/versions/1/report/retry` }),
+  },
+  'GET /api/orgs/:orgId/projects/:projectId/parameters.xlsx': {
+    access: ['admin', 'technician', 'lab_manager', 'designer', 'client'],
+    sample: (c) => ({ path: `/api/orgs/${c.orgId}/projects/${c.lab.approvedProjectId}/parameters.xlsx` }),
+  },
+  'GET /api/orgs/:orgId/soil-records/:recordId/versions/:version/data.xlsx': {
+    access: ['admin', 'technician', 'lab_manager', 'designer', 'client'],
+    sample: (c) => ({ path: `/api/orgs/${c.orgId}/soil-records/${c.lab.recordId}/versions/1/data.xlsx` }),
+  },
+  'GET /api/orgs/:orgId/tests/:testId/data.xlsx': {
+    access: ['admin', 'technician', 'lab_manager', 'designer'],
+    sample: (c) => ({ path: `/api/orgs/${c.orgId}/tests/${c.lab.approvedTestId}/data.xlsx` }),
+  },
 };
 
 /** The upload behind a fixture test's readings. */
@@ -300,20 +377,40 @@ async function userIdOf(email: string): Promise<string> {
 async function labContext(orgId: string, emails: Record<Persona, string>): Promise<Context['lab']> {
   const technicianId = await userIdOf(emails.technician);
   const managerId = await userIdOf(emails.lab_manager);
-  // The designer is on every fixture project: the policy is about roles; scope has its own tests.
-  const onProject = { designerIds: [await userIdOf(emails.designer)] };
-  const draft = await draftTest(orgId, technicianId, onProject);
-  const analysed = await analysedTest(orgId, technicianId, onProject);
-  const withJob = await draftTest(orgId, technicianId, onProject);
-  const { analysisJobId } = await uploadKnownReadings(orgId, withJob.testId, technicianId);
-  const approved = await submittedTest(orgId, technicianId, onProject);
+  // The designer and the client are on every fixture project: the policy is about roles; scope has its own tests.
+  const designerId = await userIdOf(emails.designer);
+  const clientId = await userIdOf(emails.client);
+  const onProject = { designerIds: [designerId] };
+  const shared = async <T extends LabFixture>(fixture: T): Promise<T> => {
+    await placeOnProject(orgId, fixture.projectId, clientId, 'client');
+    return fixture;
+  };
+  const draft = await shared(await draftTest(orgId, technicianId, onProject));
+  const analysed = await shared(await analysedTest(orgId, technicianId, onProject));
+  const approved = await shared(await submittedTest(orgId, technicianId, onProject));
   const { recordId } = await approveTest(orgId, approved.testId, { id: managerId, name: 'Policy manager' }, null);
+  const designerJob = await jobRuns.create({ organisationId: orgId, kind: 'policy-check', createdById: designerId });
+  const generate = async (testId: string, options: { executablePath?: string } = {}) => {
+    const [report] = (await dataSource.query('SELECT id, job_run_id FROM issued_reports WHERE organisation_id = $1 AND test_id = $2', [orgId, testId])) as Array<{ id: string; job_run_id: string }>;
+    if (!report) throw new Error(`no report queued for test ${testId}`);
+    await generateReport({ orgId, reportId: report.id, jobRunId: report.job_run_id }, options);
+  };
+  let issued: Promise<void> | undefined;
   return {
     technicianId,
     draft,
     analysed,
-    jobId: analysisJobId,
+    designerJobId: designerJob.id,
     recordId,
+    approvedTestId: approved.testId,
+    approvedProjectId: approved.projectId,
+    issueReport: () => (issued ??= generate(approved.testId)),
+    newFailedReportRecordId: async () => {
+      const { testId } = await submittedTest(orgId, technicianId, onProject);
+      const outcome = await approveTest(orgId, testId, { id: managerId, name: 'Policy manager' }, null);
+      await generate(testId, { executablePath: '/nonexistent/chromium' });
+      return outcome.recordId;
+    },
     newAnalysedTestId: async () => (await analysedTest(orgId, technicianId, onProject)).testId,
     newSubmittedTestId: async () => (await submittedTest(orgId, technicianId, onProject)).testId,
   };

@@ -8,6 +8,7 @@ import type { ConsolidationTestEntity } from '../consolidation-tests/consolidati
 import { specimenIncomplete } from '../consolidation-tests/consolidation-test.exception.js';
 import { findTestOrThrow } from '../consolidation-tests/consolidation-tests.service.js';
 import { lockTest, moveTest } from '../consolidation-tests/test-transition.js';
+import { assertTestOpenable, type Viewer } from '../projects/project-scope.js';
 import { inSituStress } from '../samples/in-situ-stress.js';
 import { SampleEntity } from '../samples/sample.entity.js';
 import { analysisRejected, noAnalysis, noReadings, readingsChanged } from './analysis.exception.js';
@@ -155,8 +156,10 @@ export function toAnalysis(row: AnalysisEntity): Analysis {
   };
 }
 
-/** The test's current analysis (of its current readings and picks). */
-export async function currentAnalysis(orgId: string, testId: string): Promise<AnalysisEntity> {
+/** The test's current analysis (of its current readings and picks); 404 when the viewer may not open the test. */
+export async function currentAnalysis(viewer: Viewer, testId: string): Promise<AnalysisEntity> {
+  await assertTestOpenable(viewer, testId);
+  const orgId = viewer.orgId;
   const test = await findTestOrThrow(orgId, testId);
   if (!test.latestAnalysisId) throw noAnalysis();
   const row = await dataSource.getRepository(AnalysisEntity).findOneBy({ organisationId: orgId, id: test.latestAnalysisId });

@@ -4,9 +4,13 @@ import { DomainError, NotFoundError } from '../../errors/domain-error.js';
 import { audit } from '../audit/audit.service.js';
 import type { Actor } from '../consolidation-tests/consolidation-tests.service.js';
 import { ProjectEntity } from '../projects/project.entity.js';
+import { assertProjectVisible, labViewer, type Viewer } from '../projects/project-scope.js';
 import { BoreholeEntity } from './borehole.entity.js';
 
-export async function listBoreholes(orgId: string, projectId: string): Promise<Borehole[]> {
+/** The project's boreholes; 404 when the project is missing or outside the viewer's scope. */
+export async function listBoreholes(viewer: Viewer, projectId: string): Promise<Borehole[]> {
+  const orgId = viewer.orgId;
+  assertProjectVisible(viewer, projectId);
   if (!(await dataSource.getRepository(ProjectEntity).existsBy({ organisationId: orgId, id: projectId }))) throw new NotFoundError('project');
   const rows = (await dataSource.query(
     `SELECT b.*, (SELECT count(*)::int FROM samples s WHERE s.borehole_id = b.id) AS sample_count
@@ -35,7 +39,7 @@ export async function createBorehole(orgId: string, projectId: string, input: Bo
     await audit.record({ organisationId: orgId, actorUserId: actor.id, action: 'borehole.created', objectType: 'borehole', objectId: saved.id, details: { projectId, name: input.name } }, manager);
     return saved.id;
   });
-  const created = (await listBoreholes(orgId, projectId)).find((b) => b.id === id);
+  const created = (await listBoreholes(labViewer(orgId, actor.id), projectId)).find((b) => b.id === id);
   if (!created) throw new NotFoundError('borehole');
   return created;
 }

@@ -8,8 +8,9 @@ import { currentAnalysis, toAnalysis } from '../analyses/analyses.service.js';
 import { requestAnalysis, setPicks } from '../analyses/picks.service.js';
 import { jobRuns } from '../job-runs/job-runs.service.js';
 import { LAB_READERS, LAB_WORKERS } from '../projects/lab-roles.js';
+import { viewerFor } from '../projects/project-scope.js';
 import { createTest, updateTest } from './consolidation-tests.service.js';
-import { getTestDetail, listTests } from './tests-query.service.js';
+import { getTestDetail, listTests, readTestDetail } from './tests-query.service.js';
 
 export function consolidationTestsRouter(): Router {
   return defineRoutes('/api/orgs/:orgId', [
@@ -27,13 +28,13 @@ export function consolidationTestsRouter(): Router {
       method: 'get',
       path: '/tests',
       access: LAB_READERS,
-      handler: async (req, res) => res.json(await listTests(currentTenant(req).orgId, parse(TestListQuerySchema, req.query))),
+      handler: async (req, res) => res.json(await listTests(await viewerFor(req), parse(TestListQuerySchema, req.query))),
     },
     {
       method: 'get',
       path: '/tests/:testId',
       access: LAB_READERS,
-      handler: async (req, res) => res.json(await getTestDetail(currentTenant(req).orgId, uuidParam(req, 'testId', 'test'))),
+      handler: async (req, res) => res.json(await readTestDetail(await viewerFor(req), uuidParam(req, 'testId', 'test'))),
     },
     {
       method: 'patch',
@@ -50,7 +51,7 @@ export function consolidationTestsRouter(): Router {
       method: 'get',
       path: '/tests/:testId/analysis',
       access: LAB_READERS,
-      handler: async (req, res) => res.json(toAnalysis(await currentAnalysis(currentTenant(req).orgId, uuidParam(req, 'testId', 'test')))),
+      handler: async (req, res) => res.json(toAnalysis(await currentAnalysis(await viewerFor(req), uuidParam(req, 'testId', 'test')))),
     },
     {
       method: 'post',

@@ -4,6 +4,7 @@ import { dataSource } from '../../data-source.js';
 import { NotFoundError } from '../../errors/domain-error.js';
 import { enqueueAnalysis } from '../../jobs/analyse-test-queue.js';
 import { audit } from '../audit/audit.service.js';
+import { fieldChanges, type FieldChange } from '../audit/field-changes.js';
 import { MembershipEntity } from '../organisations/membership.entity.js';
 import { SampleEntity } from '../samples/sample.entity.js';
 import { ConsolidationTestEntity } from './consolidation-test.entity.js';
@@ -49,6 +50,13 @@ export async function markReadingsUploaded(
     return { analysisJobId: await enqueueAnalysis(orgId, testId, actor.id, manager) };
   };
   return options.manager ? work(options.manager) : dataSource.transaction(work);
+}
+
+/** The activity log names the technician rather than quoting user ids. */
+async function withTechnicianNames(manager: EntityManager, changes: FieldChange[]): Promise<FieldChange[]> {
+  const nameOf = async (id: unknown) =>
+    typeof id === 'string' ? (((await manager.query('SELECT name FROM users WHERE id = $1', [id])) as Array<{ name: string }>)[0]?.name ?? null) : null;
+  return Promise.all(changes.map(async (c) => (c.field === 'technicianId' ? { field: 'technician', from: await nameOf(c.from), to: await nameOf(c.to) } : c)));
 }
 
 /** The test's technician must be a member holding the technician role (not, say, a client). */
@@ -127,7 +135,14 @@ export async function updateTest(orgId: string, testId: string, input: TestUpdat
     await manager.getRepository(ConsolidationTestEntity).update({ organisationId: orgId, id: testId }, changes);
     if (Object.keys(changes).length > 0) await recordContribution(manager, test, actor.id, 'set-up');
     await audit.record(
-      { organisationId: orgId, actorUserId: actor.id, action: 'test.updated', objectType: 'consolidation_test', objectId: testId, details: { fields: Object.keys(changes) } },
+      {
+        organisationId: orgId,
+        actorUserId: actor.id,
+        action: 'test.updated',
+        objectType: 'consolidation_test',
+        objectId: testId,
+        details: { reference: test.reference, changes: await withTechnicianNames(manager, fieldChanges(test as unknown as Record<string, unknown>, changes as Record<string, unknown>)) },
+      },
       manager,
     );
     const hasReadings = test.status !== 'draft';

@@ -5,6 +5,7 @@ import { ANALYSE_TEST_QUEUE } from '../../jobs/analyse-test-queue.js';
 import { AnalysisEntity } from '../analyses/analysis.entity.js';
 import { toAnalysisSummary } from '../analyses/analyses.service.js';
 import { jobRuns } from '../job-runs/job-runs.service.js';
+import { assertProjectVisible, assertTestOpenable, openableTestsSql, type Viewer } from '../projects/project-scope.js';
 import { inSituStress } from '../samples/in-situ-stress.js';
 import { ConsolidationTestEntity } from './consolidation-test.entity.js';
 
@@ -40,9 +41,11 @@ function toSummary(row: Row): TestSummary {
   };
 }
 
-export async function listTests(orgId: string, filter: TestListQuery): Promise<TestSummary[]> {
-  const values: unknown[] = [orgId];
-  const clauses: string[] = [];
+/** The tests the viewer may open (project-scope.ts: a designer, their projects' tests as approved), filtered. */
+export async function listTests(viewer: Viewer, filter: TestListQuery): Promise<TestSummary[]> {
+  if (filter.projectId) assertProjectVisible(viewer, filter.projectId);
+  const values: unknown[] = [viewer.orgId];
+  const clauses: string[] = [openableTestsSql(viewer, 'p.id', 't.status', values)];
   const add = (column: string, value: string | undefined) => {
     if (value === undefined) return;
     values.push(value);
@@ -57,6 +60,18 @@ export async function listTests(orgId: string, filter: TestListQuery): Promise<T
   return ((await dataSource.query(sql, values)) as Row[]).map(toSummary);
 }
 
+/**
+ * A test as the viewer may read it: the lab's whole detail; for a designer (only while the test
+ * stands approved) without the lab's working state — job messages and the upload to download.
+ */
+export async function readTestDetail(viewer: Viewer, testId: string): Promise<TestDetail> {
+  const view = await assertTestOpenable(viewer, testId);
+  const detail = await getTestDetail(viewer.orgId, testId);
+  if (view === 'lab') return detail;
+  return { ...detail, latestUploadId: null, pendingJobId: null, latestAnalysisJob: null, changesRequestedComment: null };
+}
+
+/** The lab's whole detail of a test of the organisation; for lab routes and after the lab's own changes. */
 export async function getTestDetail(orgId: string, testId: string): Promise<TestDetail> {
   const [row] = (await dataSource.query(`${SUMMARY_SQL} AND t.id = $2`, [orgId, testId])) as Row[];
   const test = await dataSource.getRepository(ConsolidationTestEntity).findOneBy({ organisationId: orgId, id: testId });

@@ -24,10 +24,13 @@ import {
   passwordTooShort,
 } from './invitation.exception.js';
 import { InvitationEntity } from './invitation.entity.js';
+import { InvitationProjectEntity } from './invitation-project.entity.js';
 
 export const INVITATION_DAYS = 7;
 
-function toDto(row: InvitationEntity): Invitation {
+type SharedProject = { id: string; name: string; reference: string };
+
+function toDto(row: InvitationEntity, projects: SharedProject[]): Invitation {
   return {
     id: row.id,
     email: row.email,
@@ -35,7 +38,21 @@ function toDto(row: InvitationEntity): Invitation {
     invitedBy: row.invitedBy.name,
     createdAt: row.createdAt.toISOString(),
     expiresAt: row.expiresAt.toISOString(),
+    projects,
   };
+}
+
+/** The projects shared through each invitation, by invitation id. */
+async function sharedProjects(manager: EntityManager, invitationIds: string[]): Promise<Map<string, SharedProject[]>> {
+  const byInvitation = new Map<string, SharedProject[]>();
+  if (invitationIds.length === 0) return byInvitation;
+  const rows = (await manager.query(
+    `SELECT ip.invitation_id, p.id, p.name, p.reference FROM invitation_projects ip JOIN projects p ON p.id = ip.project_id
+      WHERE ip.invitation_id = ANY($1::uuid[]) ORDER BY p.name`,
+    [invitationIds],
+  )) as Array<SharedProject & { invitation_id: string }>;
+  for (const { invitation_id: invitationId, ...project } of rows) byInvitation.set(invitationId, [...(byInvitation.get(invitationId) ?? []), project]);
+  return byInvitation;
 }
 
 async function isMember(manager: EntityManager, orgId: string, email: string): Promise<boolean> {
@@ -47,12 +64,20 @@ async function isMember(manager: EntityManager, orgId: string, email: string): P
     .getExists();
 }
 
-/** Invites by e-mail; a new invitation to the same address replaces the pending one. */
-export async function createInvitation(orgId: string, actor: UserEntity, input: InvitationCreate): Promise<Invitation> {
+/**
+ * Invites by e-mail; a new invitation to the same address replaces the pending one. With
+ * `projectIds` (a client invitation made by sharing projects) the invitee joins those projects
+ * as a client on accepting; the projects of a replaced pending client invitation are kept too.
+ */
+export async function createInvitation(orgId: string, actor: UserEntity, input: InvitationCreate, projectIds: readonly string[] = []): Promise<Invitation> {
+  const asClient = input.roles.includes('client');
+  if (projectIds.length > 0 && !asClient) throw new Error('createInvitation: projects are shared with clients only');
   const { token, tokenHash } = createOneTimeToken();
-  const { row } = await dataSource.transaction(async (manager) => {
+  const { row, projects } = await dataSource.transaction(async (manager) => {
     if (await isMember(manager, orgId, input.email)) throw alreadyMember(input.email);
     const invitations = manager.getRepository(InvitationEntity);
+    const pending = await invitations.findBy({ organisationId: orgId, email: input.email, acceptedAt: IsNull(), revokedAt: IsNull(), expiresAt: MoreThan(new Date()) });
+    const carried = asClient ? [...(await sharedProjects(manager, pending.filter((p) => p.roles.includes('client')).map((p) => p.id))).values()].flat().map((p) => p.id) : [];
     await invitations.update(
       { organisationId: orgId, email: input.email, acceptedAt: IsNull(), revokedAt: IsNull() },
       { revokedAt: new Date() },
@@ -67,6 +92,11 @@ export async function createInvitation(orgId: string, actor: UserEntity, input: 
         expiresAt: new Date(Date.now() + INVITATION_DAYS * 24 * 3600_000),
       }),
     );
+    const allProjectIds = [...new Set([...carried, ...projectIds])];
+    if (allProjectIds.length > 0) {
+      await manager.getRepository(InvitationProjectEntity).insert(allProjectIds.map((projectId) => ({ organisationId: orgId, invitationId: saved.id, projectId })));
+    }
+    const shared = (await sharedProjects(manager, [saved.id])).get(saved.id) ?? [];
     await audit.record(
       {
         organisationId: orgId,
@@ -74,10 +104,16 @@ export async function createInvitation(orgId: string, actor: UserEntity, input: 
         action: 'invitation.created',
         objectType: 'invitation',
         objectId: saved.id,
-        details: { email: input.email, roles: input.roles },
+        details: { email: input.email, roles: input.roles, ...(shared.length > 0 ? { projects: shared.map((p) => p.reference) } : {}) },
       },
       manager,
     );
+    for (const project of shared.filter((p) => projectIds.includes(p.id))) {
+      await audit.record(
+        { organisationId: orgId, actorUserId: actor.id, action: 'project.shared', objectType: 'project', objectId: project.id, details: { email: input.email, reference: project.reference, by: 'invitation' } },
+        manager,
+      );
+    }
     const organisation = await manager.getRepository(OrganisationEntity).findOneByOrFail({ id: orgId });
     // Sent before the commit: an invitation nobody was told about would only wait to expire,
     // so when the mail cannot go out, nothing is kept and the admin is told to try again.
@@ -90,15 +126,16 @@ export async function createInvitation(orgId: string, actor: UserEntity, input: 
           roles: input.roles,
           url: publicLink(`/invitations/${encodeURIComponent(token)}`),
           validDays: INVITATION_DAYS,
+          projectNames: shared.map((p) => p.name),
         }),
       );
     } catch (error) {
       logger.warn({ err: error, invitationId: saved.id }, 'invitation e-mail could not be sent');
       throw invitationMailFailed();
     }
-    return { row: Object.assign(saved, { invitedBy: actor }) };
+    return { row: Object.assign(saved, { invitedBy: actor }), projects: shared };
   });
-  return toDto(row);
+  return toDto(row, projects);
 }
 
 /** Invitations neither accepted, withdrawn nor expired, newest first. */
@@ -108,7 +145,8 @@ export async function listPendingInvitations(orgId: string): Promise<Invitation[
     relations: { invitedBy: true },
     order: { createdAt: 'DESC' },
   });
-  return rows.map(toDto);
+  const projects = await sharedProjects(dataSource.manager, rows.map((row) => row.id));
+  return rows.map((row) => toDto(row, projects.get(row.id) ?? []));
 }
 
 export async function revokeInvitation(orgId: string, invitationId: string, actor: UserEntity): Promise<void> {
@@ -156,6 +194,7 @@ export async function previewInvitation(token: string): Promise<InvitationPrevie
     invitedBy: row.invitedBy.name,
     accountExists,
     expiresAt: row.expiresAt.toISOString(),
+    projectNames: ((await sharedProjects(dataSource.manager, [row.id])).get(row.id) ?? []).map((p) => p.name),
   };
 }
 
@@ -182,6 +221,15 @@ export async function acceptInvitation(token: string, input: InvitationAccept): 
       );
     }
     await manager.getRepository(MembershipEntity).insert({ organisationId: row.organisationId, userId: user.id, roles: row.roles });
+    if (row.roles.includes('client')) {
+      // The projects shared through the invitation: the new client's places.
+      await manager.query(
+        `INSERT INTO project_members (organisation_id, project_id, user_id, role, added_by_id)
+         SELECT ip.organisation_id, ip.project_id, $2, 'client', $3 FROM invitation_projects ip WHERE ip.invitation_id = $1
+         ON CONFLICT (project_id, user_id) DO NOTHING`,
+        [row.id, user.id, row.invitedById],
+      );
+    }
     await manager.getRepository(InvitationEntity).update({ organisationId: row.organisationId, id: row.id }, { acceptedAt: new Date() });
     await audit.record(
       {

@@ -1,8 +1,8 @@
 import type { Router } from 'express';
 import { uuidParam } from '../../http/params.js';
-import { currentTenant } from '../../http/request-context.js';
 import { defineRoutes } from '../../http/routes.js';
 import { LAB_READERS } from '../projects/lab-roles.js';
+import { viewerFor } from '../projects/project-scope.js';
 import { jobRuns } from './job-runs.service.js';
 
 export function jobRunsRouter(): Router {
@@ -12,7 +12,7 @@ export function jobRunsRouter(): Router {
       path: '/:jobId',
       access: LAB_READERS,
       handler: async (req, res) => {
-        res.json(await jobRuns.find(currentTenant(req).orgId, uuidParam(req, 'jobId', 'job')));
+        res.json(await jobRuns.findFor(await viewerFor(req), uuidParam(req, 'jobId', 'job')));
       },
     },
   ]);

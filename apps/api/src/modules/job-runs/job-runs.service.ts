@@ -1,8 +1,9 @@
 import type { JobRun, JobState } from '@porestack/types';
-import type { EntityManager } from 'typeorm';
+import { In, type EntityManager } from 'typeorm';
 import type { QueryDeepPartialEntity } from 'typeorm/query-builder/QueryPartialEntity.js';
 import { dataSource } from '../../data-source.js';
 import { NotFoundError } from '../../errors/domain-error.js';
+import { jobVisible, type Viewer } from '../projects/project-scope.js';
 import { JobRunEntity } from './job-run.entity.js';
 
 export interface NewJobRun {
@@ -60,7 +61,16 @@ export const jobRuns = {
     // jsonb: TypeORM's deep-partial type does not see that a record is one value.
     if (change.result !== undefined) patch.result = change.result as QueryDeepPartialEntity<Record<string, unknown>>;
     if (change.bossJobId !== undefined) patch.bossJobId = change.bossJobId;
-    await manager.getRepository(JobRunEntity).update({ id }, patch);
+    // Progress alone never touches a finished job: a late progress write must not overwrite its outcome.
+    const where = change.state === undefined ? { id, state: In(['queued', 'running'] satisfies JobState[]) } : { id };
+    await manager.getRepository(JobRunEntity).update(where, patch);
+  },
+
+  /** A job as the viewer may follow it (project-scope.ts: lab staff every job, anyone else their own); 404 otherwise. */
+  async findFor(viewer: Viewer, id: string): Promise<JobRun> {
+    const row = await dataSource.getRepository(JobRunEntity).findOneBy({ organisationId: viewer.orgId, id });
+    if (!row || !jobVisible(viewer, row)) throw new NotFoundError('job');
+    return toJobRun(row);
   },
 
   async find(orgId: string, id: string): Promise<JobRun> {

@@ -67,6 +67,8 @@ export async function removeMember(orgId: string, userId: string, actor: UserEnt
     const { target, adminCount } = await lockForChange(manager, orgId, userId);
     if (target.roles.includes('admin') && adminCount <= 1) throw lastAdmin('remove');
     await manager.getRepository(MembershipEntity).delete({ organisationId: orgId, id: target.id });
+    // Their places on projects go with the membership, so an invitation later starts from nothing.
+    await manager.query('DELETE FROM project_members WHERE organisation_id = $1 AND user_id = $2', [orgId, userId]);
     await audit.record(
       { organisationId: orgId, actorUserId: actor.id, action: 'member.removed', objectType: 'user', objectId: userId, details: { roles: target.roles } },
       manager,

@@ -7,3 +7,4 @@ export const PROJECT_EDITORS = ROLE_ACCESS.projectEditors;
 export const LAB_WORKERS = ROLE_ACCESS.labWorkers;
 export const REVIEWERS = ROLE_ACCESS.reviewers;
 export const RECORD_READERS = ROLE_ACCESS.recordReaders;
+export const PROJECT_READERS = ROLE_ACCESS.projectReaders;

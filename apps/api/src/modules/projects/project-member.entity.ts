@@ -2,7 +2,11 @@ import { Column, CreateDateColumn, Entity, Index, JoinColumn, ManyToOne, Primary
 import { UserEntity } from '../users/user.entity.js';
 import { ProjectEntity } from './project.entity.js';
 
-/** A designer attached to a project: told when a soil record version of it is approved. */
+/**
+ * A person's place on a project, which project-scope.ts reads: a designer on the project's
+ * designers list (told when a soil record version of it is approved), or a client the project
+ * is shared with (reads its approved results).
+ */
 @Entity({ name: 'project_members' })
 @Index('project_members_organisation_id_idx', ['organisationId'])
 @Index('project_members_project_user_key', ['projectId', 'userId'], { unique: true })
@@ -27,9 +31,17 @@ export class ProjectMemberEntity {
   @JoinColumn({ name: 'user_id', foreignKeyConstraintName: 'project_members_user_id_fkey' })
   user!: Relation<UserEntity>;
 
-  /** 'designer' for now; text so other project roles need no type migration. */
+  /** 'designer' or 'client'; text so other project roles need no type migration. */
   @Column('text', { default: 'designer' })
   role!: string;
+
+  /** Who put them on the project (null for places made before this was kept, or by a removed user). */
+  @Column('uuid', { name: 'added_by_id', nullable: true })
+  addedById!: string | null;
+
+  @ManyToOne(() => UserEntity, { onDelete: 'SET NULL' })
+  @JoinColumn({ name: 'added_by_id', foreignKeyConstraintName: 'project_members_added_by_id_fkey' })
+  addedBy!: Relation<UserEntity> | null;
 
   @CreateDateColumn({ name: 'created_at', type: 'timestamptz' })
   createdAt!: Date;

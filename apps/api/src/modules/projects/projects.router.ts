@@ -6,11 +6,11 @@ import { currentTenant, currentUser } from '../../http/request-context.js';
 import { defineRoutes } from '../../http/routes.js';
 import { createBorehole, listBoreholes } from '../boreholes/boreholes.service.js';
 import { createSample, listSamples } from '../samples/samples.service.js';
-import { LAB_READERS, LAB_WORKERS, PROJECT_EDITORS } from './lab-roles.js';
-import { assertProjectInScope, projectScope } from './project-scope.js';
+import { LAB_WORKERS, PROJECT_EDITORS, PROJECT_READERS } from './lab-roles.js';
+import { viewerFor } from './project-scope.js';
 import { createProject, getProject, listDesignerCandidates, listProjects, updateProject } from './projects.service.js';
 
-/** Projects, their boreholes and the boreholes' samples. */
+/** Projects, their boreholes and the boreholes' samples; reads are limited to the caller's project scope by the services. */
 export function projectsRouter(): Router {
   return defineRoutes('/api/orgs/:orgId', [
     {
@@ -22,11 +22,8 @@ export function projectsRouter(): Router {
     {
       method: 'get',
       path: '/projects',
-      access: LAB_READERS,
-      handler: async (req, res) => {
-        const tenant = currentTenant(req);
-        res.json(await listProjects(tenant.orgId, await projectScope(tenant, currentUser(req).id)));
-      },
+      access: PROJECT_READERS,
+      handler: async (req, res) => res.json(await listProjects(await viewerFor(req))),
     },
     {
       method: 'post',
@@ -39,13 +36,8 @@ export function projectsRouter(): Router {
     {
       method: 'get',
       path: '/projects/:projectId',
-      access: LAB_READERS,
-      handler: async (req, res) => {
-        const tenant = currentTenant(req);
-        const projectId = uuidParam(req, 'projectId', 'project');
-        await assertProjectInScope(tenant, currentUser(req).id, projectId);
-        res.json(await getProject(tenant.orgId, projectId));
-      },
+      access: PROJECT_READERS,
+      handler: async (req, res) => res.json(await getProject(await viewerFor(req), uuidParam(req, 'projectId', 'project'))),
     },
     {
       method: 'patch',
@@ -59,13 +51,8 @@ export function projectsRouter(): Router {
     {
       method: 'get',
       path: '/projects/:projectId/boreholes',
-      access: LAB_READERS,
-      handler: async (req, res) => {
-        const tenant = currentTenant(req);
-        const projectId = uuidParam(req, 'projectId', 'project');
-        await assertProjectInScope(tenant, currentUser(req).id, projectId);
-        res.json(await listBoreholes(tenant.orgId, projectId));
-      },
+      access: PROJECT_READERS,
+      handler: async (req, res) => res.json(await listBoreholes(await viewerFor(req), uuidParam(req, 'projectId', 'project'))),
     },
     {
       method: 'post',
@@ -79,8 +66,8 @@ export function projectsRouter(): Router {
     {
       method: 'get',
       path: '/boreholes/:boreholeId/samples',
-      access: LAB_READERS,
-      handler: async (req, res) => res.json(await listSamples(currentTenant(req).orgId, uuidParam(req, 'boreholeId', 'borehole'))),
+      access: PROJECT_READERS,
+      handler: async (req, res) => res.json(await listSamples(await viewerFor(req), uuidParam(req, 'boreholeId', 'borehole'))),
     },
     {
       method: 'post',

@@ -95,6 +95,14 @@ function isAbort(error: unknown): boolean {
   return name === 'AbortError' || name === 'TimeoutError';
 }
 
+/**
+ * Starts the pool's first thread now (the worker at start-up), so the first import does not
+ * wait for a thread to load — slow when running from TypeScript sources on a busy machine.
+ */
+export async function warmParsePool(): Promise<void> {
+  await parseOffThread({ kind: 'preview', bytes: Buffer.from('warm,up\n1,2\n'), type: 'csv', limits: { maxFileBytes: 1024, maxRows: 10 }, delimiter: ',', previewRows: 2 }, THREAD_WAIT_MS);
+}
+
 /** Stops the parse threads (at shutdown, and between test files). */
 export async function closeParsePool(): Promise<void> {
   const running = pool;

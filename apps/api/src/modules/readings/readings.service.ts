@@ -1,6 +1,7 @@
 import type { ConsolidationIncrementInput } from '@porestack/geo-core';
 import type { ReadingsPage, ReadingsPageQuery } from '@porestack/types';
 import { dataSource } from '../../data-source.js';
+import { assertTestOpenable, type Viewer } from '../projects/project-scope.js';
 import { UploadEntity } from '../uploads/upload.entity.js';
 import { ReadingEntity } from './reading.entity.js';
 
@@ -57,4 +58,26 @@ export async function listReadings(orgId: string, testId: string, page: Readings
       deformationMm: row.deformationMm,
     })),
   };
+}
+
+async function listIncrementReadings(orgId: string, testId: string, incrementIndex: number, offset: number, limit: number): Promise<ReadingsPage> {
+  const repo = dataSource.getRepository(ReadingEntity);
+  const where = { organisationId: orgId, testId, incrementIndex };
+  const [rows, total] = await Promise.all([repo.find({ where, order: { rowNumber: 'ASC' }, skip: offset, take: limit }), repo.countBy(where)]);
+  return {
+    total,
+    offset,
+    limit,
+    readings: rows.map((r) => ({ rowNumber: r.rowNumber, incrementIndex: r.incrementIndex, stressKpa: r.stressKpa, elapsedMin: r.elapsedMin, deformationMm: r.deformationMm })),
+  };
+}
+
+/**
+ * A page of the test's readings for whoever may open the test (project-scope.ts), all of them or
+ * one increment's (for its time plots); 404 like a missing test otherwise.
+ */
+export async function readReadings(viewer: Viewer, testId: string, query: ReadingsPageQuery & { increment?: number | undefined }): Promise<ReadingsPage> {
+  await assertTestOpenable(viewer, testId);
+  const { increment, ...page } = query;
+  return increment === undefined ? listReadings(viewer.orgId, testId, page) : listIncrementReadings(viewer.orgId, testId, increment, page.offset, page.limit);
 }

@@ -6,6 +6,7 @@ import { currentTenant, currentUser } from '../../http/request-context.js';
 import { defineRoutes } from '../../http/routes.js';
 import { getTestDetail } from '../consolidation-tests/tests-query.service.js';
 import { LAB_READERS, LAB_WORKERS, REVIEWERS } from '../projects/lab-roles.js';
+import { viewerFor } from '../projects/project-scope.js';
 import { approveTest, listReviewEvents, requestChanges, reviewQueue, submitTest } from './reviews.service.js';
 
 export function reviewsRouter(): Router {
@@ -49,7 +50,7 @@ export function reviewsRouter(): Router {
       method: 'get',
       path: '/tests/:testId/reviews',
       access: LAB_READERS,
-      handler: async (req, res) => res.json(await listReviewEvents(currentTenant(req).orgId, uuidParam(req, 'testId', 'test'))),
+      handler: async (req, res) => res.json(await listReviewEvents(await viewerFor(req), uuidParam(req, 'testId', 'test'))),
     },
   ]);
 }

@@ -9,8 +9,9 @@ import type { ConsolidationTestEntity } from '../consolidation-tests/consolidati
 import { ownChanges, ownTest } from '../consolidation-tests/consolidation-test.exception.js';
 import { contributionsThisRound } from '../consolidation-tests/test-contributions.js';
 import type { Actor } from '../consolidation-tests/consolidation-tests.service.js';
-import { findTestOrThrow } from '../consolidation-tests/consolidation-tests.service.js';
 import { lockTest, moveTest } from '../consolidation-tests/test-transition.js';
+import { assertTestOpenable, type Viewer } from '../projects/project-scope.js';
+import { queueReport } from '../reports/reports.service.js';
 import { createVersion } from '../soil-records/soil-records.service.js';
 import { notifyApproved, notifyChangesRequested, notifySubmitted, testContext } from './lab-notifications.js';
 import { ReviewEventEntity } from './review-event.entity.js';
@@ -66,7 +67,10 @@ export async function approveTest(orgId: string, testId: string, actor: Actor & 
       'SELECT b.project_id FROM samples s JOIN boreholes b ON b.id = s.borehole_id WHERE s.id = $1',
       [test.sampleId],
     )) as Array<{ project_id: string }>;
-    return createVersion(manager, test, analysis, projectId, actor.id);
+    const created = await createVersion(manager, test, analysis, projectId, actor.id);
+    // The test report is printed once, by a job queued in this transaction.
+    await queueReport(manager, { orgId, kind: 'test-report', subjectId: created.version.id, testId, requestedById: actor.id });
+    return created;
   });
   await notifyApproved(await testContext(orgId, testId), actor.name, comment, outcome.record.id, outcome.version, outcome.supersededVersion);
   return { recordId: outcome.record.id, version: outcome.version.version };
@@ -82,14 +86,20 @@ export async function requestChanges(orgId: string, testId: string, actor: Actor
   await notifyChangesRequested(await testContext(orgId, testId), actor.name, comment);
 }
 
-export async function listReviewEvents(orgId: string, testId: string): Promise<ReviewEvent[]> {
-  await findTestOrThrow(orgId, testId);
+/**
+ * The test's review history. Lab staff read all of it; a designer (who opens the test only while it
+ * stands approved) reads the approvals, not the lab's submissions and change requests.
+ */
+export async function listReviewEvents(viewer: Viewer, testId: string): Promise<ReviewEvent[]> {
+  const view = await assertTestOpenable(viewer, testId);
+  const orgId = viewer.orgId;
   const { entities, raw } = await dataSource
     .getRepository(ReviewEventEntity)
     .createQueryBuilder('e')
     .leftJoin('users', 'u', 'u.id = e.actor_id')
     .addSelect('u.name', 'actor_name')
     .where('e.organisation_id = :orgId AND e.test_id = :testId', { orgId, testId })
+    .andWhere(view === 'lab' ? 'TRUE' : "e.decision = 'approved'")
     .orderBy('e.at', 'ASC')
     .getRawAndEntities();
   return entities.map((e, index) => ({

@@ -3,6 +3,7 @@ import { dataSource } from '../../data-source.js';
 import { DomainError, NotFoundError } from '../../errors/domain-error.js';
 import { audit } from '../audit/audit.service.js';
 import { BoreholeEntity } from '../boreholes/borehole.entity.js';
+import { assertBoreholeVisible, type Viewer } from '../projects/project-scope.js';
 import type { Actor } from '../consolidation-tests/consolidation-tests.service.js';
 import { inSituStress } from './in-situ-stress.js';
 import { SampleEntity } from './sample.entity.js';
@@ -31,7 +32,10 @@ async function boreholeOrThrow(orgId: string, boreholeId: string): Promise<Boreh
   return borehole;
 }
 
-export async function listSamples(orgId: string, boreholeId: string): Promise<Sample[]> {
+/** The borehole's samples, shallowest first; 404 when the borehole is missing or outside the viewer's scope. */
+export async function listSamples(viewer: Viewer, boreholeId: string): Promise<Sample[]> {
+  const orgId = viewer.orgId;
+  await assertBoreholeVisible(viewer, boreholeId);
   const borehole = await boreholeOrThrow(orgId, boreholeId);
   const rows = await dataSource.getRepository(SampleEntity).find({ where: { organisationId: orgId, boreholeId }, order: { topDepthM: 'ASC' } });
   return rows.map((row) => toSample(row, borehole));

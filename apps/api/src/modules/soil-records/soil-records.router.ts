@@ -1,11 +1,10 @@
 import { SoilRecordListQuerySchema } from '@porestack/types';
 import type { Router } from 'express';
-import { NotFoundError } from '../../errors/domain-error.js';
-import { uuidParam } from '../../http/params.js';
+import { uuidParam, versionParam } from '../../http/params.js';
 import { parse } from '../../http/parse.js';
-import { currentTenant } from '../../http/request-context.js';
 import { defineRoutes } from '../../http/routes.js';
 import { RECORD_READERS } from '../projects/lab-roles.js';
+import { viewerFor } from '../projects/project-scope.js';
 import { getSoilRecord, getSoilRecordVersion, listSoilRecords } from './soil-records.service.js';
 
 export function soilRecordsRouter(): Router {
@@ -14,22 +13,21 @@ export function soilRecordsRouter(): Router {
       method: 'get',
       path: '/',
       access: RECORD_READERS,
-      handler: async (req, res) => res.json(await listSoilRecords(currentTenant(req).orgId, parse(SoilRecordListQuerySchema, req.query).projectId)),
+      handler: async (req, res) => res.json(await listSoilRecords(await viewerFor(req), parse(SoilRecordListQuerySchema, req.query).projectId)),
     },
     {
       method: 'get',
       path: '/:recordId',
       access: RECORD_READERS,
-      handler: async (req, res) => res.json(await getSoilRecord(currentTenant(req).orgId, uuidParam(req, 'recordId', 'soil record'))),
+      handler: async (req, res) => res.json(await getSoilRecord(await viewerFor(req), uuidParam(req, 'recordId', 'soil record'))),
     },
     {
       method: 'get',
       path: '/:recordId/versions/:version',
       access: RECORD_READERS,
       handler: async (req, res) => {
-        const version = Number(req.params['version']);
-        if (!Number.isInteger(version) || version < 1) throw new NotFoundError('soil record version');
-        res.json(await getSoilRecordVersion(currentTenant(req).orgId, uuidParam(req, 'recordId', 'soil record'), version));
+        const version = versionParam(req);
+        res.json(await getSoilRecordVersion(await viewerFor(req), uuidParam(req, 'recordId', 'soil record'), version));
       },
     },
   ]);

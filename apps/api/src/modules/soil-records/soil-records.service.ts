@@ -6,6 +6,7 @@ import type { AnalysisEntity } from '../analyses/analysis.entity.js';
 import { cvRange, representativeSecondaryIndex } from '../analyses/key-parameters.js';
 import { audit } from '../audit/audit.service.js';
 import type { ConsolidationTestEntity } from '../consolidation-tests/consolidation-test.entity.js';
+import { assertProjectVisible, projectView, type Viewer } from '../projects/project-scope.js';
 import { uploadSha256 } from './upload-hash.js';
 import { SoilRecordSupersessionEntity } from './soil-record-supersession.entity.js';
 import { SoilRecordVersionEntity } from './soil-record-version.entity.js';
@@ -149,7 +150,8 @@ interface RecordHead {
   current_version: number;
 }
 
-async function heads(orgId: string, filter: { projectId?: string | undefined; recordId?: string }): Promise<RecordHead[]> {
+async function heads(viewer: Viewer, filter: { projectId?: string | undefined; recordId?: string }): Promise<RecordHead[]> {
+  const orgId = viewer.orgId;
   const query = dataSource
     .createQueryBuilder()
     .select(['r.id AS id', 'r.test_id AS test_id', 't.reference AS test_reference', 't.status AS test_status', 'p.id AS project_id', 'p.name AS project_name'])
@@ -163,19 +165,21 @@ async function heads(orgId: string, filter: { projectId?: string | undefined; re
     .orderBy('p.name')
     .addOrderBy('b.name')
     .addOrderBy('s.top_depth_m');
+  if (viewer.scope.kind === 'projects') query.andWhere('r.project_id = ANY(:scopeProjectIds::uuid[])', { scopeProjectIds: viewer.scope.projectIds });
   if (filter.projectId) query.andWhere('r.project_id = :projectId', { projectId: filter.projectId });
   if (filter.recordId) query.andWhere('r.id = :recordId', { recordId: filter.recordId });
   return query.getRawMany<RecordHead>();
 }
 
-function toSummary(head: RecordHead, versions: SoilRecordVersion[]): SoilRecordSummary {
+function toSummary(viewer: Viewer, head: RecordHead, versions: SoilRecordVersion[]): SoilRecordSummary {
   const current = versions.find((v) => v.version === head.current_version);
   if (!current) throw new Error(`soil record ${head.id} has no version ${head.current_version}`);
   return {
     id: head.id,
     testId: head.test_id,
     testReference: head.test_reference,
-    testStatus: head.test_status,
+    // Where the lab's re-work stands is not the client's to follow: they read approved versions only.
+    testStatus: projectView(viewer, head.project_id) === 'client' ? null : head.test_status,
     projectId: head.project_id,
     projectName: head.project_name,
     boreholeName: head.borehole_name,
@@ -186,21 +190,29 @@ function toSummary(head: RecordHead, versions: SoilRecordVersion[]): SoilRecordS
   };
 }
 
-export async function listSoilRecords(orgId: string, projectId?: string): Promise<SoilRecordSummary[]> {
-  const rows = await heads(orgId, { projectId });
-  const versions = (await versionRows(orgId, rows.map((r) => r.id))).map(toVersion);
-  return rows.map((head) => toSummary(head, versions.filter((v) => v.recordId === head.id)));
+/** The soil records of the viewer's projects (of one project when asked; 404 when it is outside the scope). */
+/** Every approved version of these records (of the viewer's organisation), newest first. */
+export async function loadVersions(orgId: string, recordIds: string[]): Promise<SoilRecordVersion[]> {
+  return (await versionRows(orgId, recordIds)).map(toVersion);
 }
 
-export async function getSoilRecord(orgId: string, recordId: string): Promise<SoilRecordDetail> {
-  const [head] = await heads(orgId, { recordId });
+export async function listSoilRecords(viewer: Viewer, projectId?: string): Promise<SoilRecordSummary[]> {
+  if (projectId) assertProjectVisible(viewer, projectId);
+  const rows = await heads(viewer, { projectId });
+  const versions = (await versionRows(viewer.orgId, rows.map((r) => r.id))).map(toVersion);
+  return rows.map((head) => toSummary(viewer, head, versions.filter((v) => v.recordId === head.id)));
+}
+
+/** One record with every approved version; 404 when missing or outside the viewer's scope. */
+export async function getSoilRecord(viewer: Viewer, recordId: string): Promise<SoilRecordDetail> {
+  const [head] = await heads(viewer, { recordId });
   if (!head) throw new NotFoundError('soil record');
-  const versions = (await versionRows(orgId, [head.id])).map(toVersion);
-  return { ...toSummary(head, versions), versions };
+  const versions = (await versionRows(viewer.orgId, [head.id])).map(toVersion);
+  return { ...toSummary(viewer, head, versions), versions };
 }
 
-export async function getSoilRecordVersion(orgId: string, recordId: string, version: number): Promise<SoilRecordVersion> {
-  const found = (await getSoilRecord(orgId, recordId)).versions.find((v) => v.version === version);
+export async function getSoilRecordVersion(viewer: Viewer, recordId: string, version: number): Promise<SoilRecordVersion> {
+  const found = (await getSoilRecord(viewer, recordId)).versions.find((v) => v.version === version);
   if (!found) throw new NotFoundError('soil record version');
   return found;
 }

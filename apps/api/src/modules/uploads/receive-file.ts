@@ -1,7 +1,7 @@
 import multer from 'multer';
 import type { RequestHandler } from 'express';
 import { importLimits } from '../readings-import/import-limits.js';
-import { fileTooLarge } from './upload.exception.js';
+import { fileTooLarge, malformedUpload } from './upload.exception.js';
 
 /**
  * multer in memory for the one `file` field, stopped at the size limit: the bytes are held
@@ -21,7 +21,10 @@ export function receiveFile(): RequestHandler {
         next(fileTooLarge(limits.maxFileBytes / 1024 / 1024));
         return;
       }
-      next(error);
+      // Anything else multer or busboy refuses is a body the client sent wrong (a cut-off or
+      // malformed form, a file name with control characters such as NUL, which busboy refuses
+      // as a malformed part header): 400 saying how to send it, never a 500.
+      next(error ? malformedUpload() : undefined);
     });
   };
 }

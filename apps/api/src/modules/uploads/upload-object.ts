@@ -1,5 +1,5 @@
 import type { Readable } from 'node:stream';
-import { bucketName, storage } from '../../storage/storage.js';
+import { bucketName, objectBytes, storage } from '../../storage/storage.js';
 
 /** orgs/<orgId>/tests/<testId>/uploads/<uploadId>/<safe file name>: the tenant first, so a prefix policy can fence it. */
 export function uploadObjectKey(orgId: string, testId: string, uploadId: string, originalName: string): string {
@@ -18,11 +18,8 @@ export async function putUploadObject(key: string, bytes: Buffer, contentType: s
   await storage().putObject(bucketName(), key, bytes, bytes.length, { 'Content-Type': contentType, 'x-amz-meta-sha256': sha256 });
 }
 
-export async function getUploadObject(key: string): Promise<Buffer> {
-  const stream = await storage().getObject(bucketName(), key);
-  const chunks: Buffer[] = [];
-  for await (const chunk of stream) chunks.push(chunk as Buffer);
-  return Buffer.concat(chunks);
+export function getUploadObject(key: string): Promise<Buffer> {
+  return objectBytes(key);
 }
 
 /** The first `length` bytes of the object (all of it when it is shorter). */

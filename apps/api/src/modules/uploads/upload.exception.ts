@@ -8,6 +8,13 @@ export const fileTooLarge = (maxMb: number) =>
     `The file is larger than ${maxMb} MB, the most one upload may be, so it was not stored. Split the readings into smaller files (or thin out the logger's fastest readings) and upload again.`,
   );
 
+export const malformedUpload = () =>
+  new DomainError(
+    'validation_failed',
+    'The upload did not arrive as a well-formed form: the form was cut off on the way, or the file name holds control characters (such as NUL). Give the file a plain name and send it again from the test\'s Readings tab (one file, in the form field "file").',
+    [{ path: 'file', message: 'Send one file, with a plain name, in the field "file".' }],
+  );
+
 export const fileMissing = () =>
   new DomainError('validation_failed', 'No file arrived. Choose a CSV or XLSX file of readings (form field "file") and upload again.', [
     { path: 'file', message: 'Choose a file.' },

@@ -9,6 +9,8 @@ import { useMembers } from '../../features/organisations/api/get-members';
 import { InvitationsTable } from '../../features/organisations/components/invitations-table';
 import { InviteForm } from '../../features/organisations/components/invite-form';
 import { MembersTable } from '../../features/organisations/components/members-table';
+import { useReportSettings } from '../../features/organisations/api/report-settings';
+import { ReportSettingsForm } from '../../features/organisations/components/report-settings-form';
 import { rolesFor } from '../nav-config';
 import { useCurrentOrg } from '../org-context';
 import { RoleGate } from '../role-gate';
@@ -66,6 +68,7 @@ function MembersPage() {
             <MembersTable orgId={orgId} members={members.data} currentUserId={user.id} />
           )}
         </Panel>
+        <ReportSettingsPanel orgId={orgId} />
       </div>
     </>
   );
@@ -74,4 +77,19 @@ function MembersPage() {
 /** States shown inside a flush panel still need the panel's padding. */
 function Padded({ children }: { children: ReactNode }) {
   return <div className="p-5">{children}</div>;
+}
+
+function ReportSettingsPanel({ orgId }: { orgId: string }) {
+  const settings = useReportSettings(orgId);
+  return (
+    <Panel title="What reports print" description="How the laboratory appears on the test reports it issues.">
+      {settings.isPending ? (
+        <LoadingBlock label="Loading the report settings…" />
+      ) : settings.error ? (
+        <ErrorMessage error={settings.error} title="The report settings could not be loaded" onRetry={() => void settings.refetch()} />
+      ) : (
+        <ReportSettingsForm orgId={orgId} settings={settings.data} />
+      )}
+    </Panel>
+  );
 }

@@ -1,71 +1,96 @@
-import { ROLE_LABELS, roleList } from '@porestack/types';
-import { Link } from 'react-router-dom';
+import { roleList, type HomeOverview } from '@porestack/types';
+import { EmptyState } from '../../components/empty-state';
+import { ErrorMessage } from '../../components/error-message';
 import { PageHeader } from '../../components/page-header';
 import { Panel } from '../../components/panel';
-import { navItemsFor } from '../nav-config';
+import { LoadingBlock } from '../../components/spinner';
+import { paths } from '../../config/paths';
+import { useHome } from '../../features/home/api/get-home';
+import { AdminMembersPanel } from '../../features/home/components/admin-home';
+import { MoreLink } from '../../features/home/components/home-list';
+import { LabManagerHome } from '../../features/home/components/lab-manager-home';
+import { IssuedResultsPanel, ProjectsPanel } from '../../features/home/components/project-home-lists';
+import { TechnicianHome } from '../../features/home/components/technician-home';
+import { AuditLogTable } from '../../features/organisations/components/audit-log-table';
 import { useCurrentOrg } from '../org-context';
-import { ROLE_GUIDES } from '../role-guides';
+import { ROLE_SUMMARIES } from '../role-guides';
+
+/** One section per role the member holds, in the order the work flows. */
+function Sections({ orgId, home }: { orgId: string; home: HomeOverview }) {
+  return (
+    <div className="space-y-8">
+      {home.technician ? <TechnicianHome orgId={orgId} section={home.technician} /> : null}
+      {home.labManager ? <LabManagerHome orgId={orgId} section={home.labManager} /> : null}
+      {home.designer ? (
+        <div className="grid grid-cols-1 items-start gap-6 lg:grid-cols-2">
+          <ProjectsPanel
+            orgId={orgId}
+            title="Your projects"
+            projects={home.designer.projects}
+            countWord="tests"
+            empty="You are not on any project yet. A lab manager adds designers to a project’s designers list."
+          />
+          <Panel title="Checks to look at again" description="Settlement checks whose soil parameters have a newer approved version.">
+            <p className="text-sm text-slate-600" data-testid="flagged-checks-slot">
+              Each of your settlement checks that used a soil record version since superseded will be listed here with what changed, so you can re-run it.
+            </p>
+          </Panel>
+        </div>
+      ) : null}
+      {home.client ? (
+        <div className="grid grid-cols-1 items-start gap-6 lg:grid-cols-[minmax(0,3fr)_minmax(0,2fr)]">
+          <IssuedResultsPanel orgId={orgId} results={home.client.recentResults} />
+          <ProjectsPanel
+            orgId={orgId}
+            title="Projects shared with you"
+            projects={home.client.projects}
+            countWord="approved tests"
+            empty="No project is shared with you yet. The laboratory shares each project by e-mail."
+          />
+        </div>
+      ) : null}
+      {home.admin ? (
+        <div className="grid grid-cols-1 items-start gap-6 lg:grid-cols-[minmax(0,2fr)_minmax(0,3fr)]">
+          <AdminMembersPanel orgId={orgId} section={home.admin} />
+          <Panel title="Recent activity" flush>
+            {home.admin.recentActivity.length === 0 ? (
+              <div className="p-5">
+                <EmptyState title="Nothing recorded yet" />
+              </div>
+            ) : (
+              <AuditLogTable entries={home.admin.recentActivity} caption="The latest activity in this organisation" />
+            )}
+            <div className="px-5 pb-4">
+              <MoreLink to={paths.org.activity.to(orgId)}>All activity</MoreLink>
+            </div>
+          </Panel>
+        </div>
+      ) : null}
+    </div>
+  );
+}
 
 export function OrgHomeRoute() {
   const { orgId, membership } = useCurrentOrg();
-  const { roles } = membership;
-  const several = roles.length > 1;
-  const pages = navItemsFor(roles).filter((item) => item.id !== 'home');
-
+  const home = useHome(orgId);
   return (
     <>
       <PageHeader
         title={membership.organisationName}
         description={
           <>
-            You are <strong className="font-medium text-slate-800">{roleList(roles).toLowerCase()}</strong> here.{' '}
-            {roles.map((role) => ROLE_GUIDES[role].summary).join(' ')}
+            You are <strong className="font-medium text-slate-800">{roleList(membership.roles).toLowerCase()}</strong> here.{' '}
+            {membership.roles.map((role) => ROLE_SUMMARIES[role]).join(' ')}
           </>
         }
       />
-      <div className="grid items-start gap-6 lg:grid-cols-[minmax(0,2fr)_minmax(0,1fr)]">
-        <Panel title={several ? 'What your roles cover' : 'What your role covers'}>
-          <div className="space-y-4">
-            {roles.map((role) => (
-              <section key={role} aria-label={several ? `As ${ROLE_LABELS[role].toLowerCase()}` : undefined}>
-                {several ? <h3 className="mb-1 text-xs font-semibold uppercase tracking-wide text-slate-500">As {ROLE_LABELS[role].toLowerCase()}</h3> : null}
-                <ul className="divide-y divide-slate-100">
-                  {ROLE_GUIDES[role].tasks.map((task) => (
-                    <li key={task.text} className="flex items-start justify-between gap-4 py-2.5 first:pt-0 last:pb-0">
-                      <span className="text-sm text-slate-800">{task.text}</span>
-                      <span
-                        className={`shrink-0 rounded-full px-2 py-0.5 text-xs font-medium ${
-                          task.available ? 'bg-accent-50 text-accent-800' : 'bg-slate-100 text-slate-600'
-                        }`}
-                      >
-                        {task.available ? 'Available' : 'Not yet in Porestack'}
-                      </span>
-                    </li>
-                  ))}
-                </ul>
-              </section>
-            ))}
-          </div>
-        </Panel>
-        <Panel title="Go to">
-          {pages.length > 0 ? (
-            <ul className="space-y-2">
-              {pages.map((item) => (
-                <li key={item.id}>
-                  <Link to={item.to(orgId)} className="text-sm font-medium text-accent-700 hover:underline">
-                    {item.label}
-                  </Link>
-                </li>
-              ))}
-            </ul>
-          ) : (
-            <p className="text-sm text-slate-600">
-              No pages for your {several ? 'roles' : 'role'} yet. This version sets up accounts and organisations; the laboratory work arrives in
-              the next versions.
-            </p>
-          )}
-        </Panel>
-      </div>
+      {home.isPending ? (
+        <LoadingBlock label="Loading your home page…" />
+      ) : home.error ? (
+        <ErrorMessage error={home.error} title="Your home page could not be loaded" onRetry={() => void home.refetch()} />
+      ) : (
+        <Sections orgId={orgId} home={home.data} />
+      )}
     </>
   );
 }

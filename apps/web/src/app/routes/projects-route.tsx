@@ -23,28 +23,49 @@ export function ProjectsRoute() {
   );
 }
 
+/** What the list holds for each kind of reader: the lab's whole book, or the projects someone is on. */
+const WORDING = {
+  lab: {
+    description: 'Each project is a job for a client: its boreholes, the samples taken from them and the tests run on those samples.',
+    title: 'All projects',
+    empty: 'A lab manager creates each project; then its boreholes and samples are set up here.',
+  },
+  designer: {
+    description: 'The projects you are a designer on: their boreholes, samples and approved tests.',
+    title: 'Your projects',
+    empty: 'The laboratory puts designers on a project’s designers list; the projects you are on appear here.',
+  },
+  client: {
+    description: 'The projects the laboratory has shared with you: their approved test results and reports.',
+    title: 'Projects shared with you',
+    empty: 'When the laboratory shares a project with you, it appears here and you get an e-mail.',
+  },
+} as const;
+
 function ProjectsPage() {
   const { orgId, membership } = useCurrentOrg();
   const projects = useProjects(orgId);
   const navigate = useNavigate();
+  const may = labPermissions(membership.roles);
+  const words = WORDING[may.readsLabWork ? 'lab' : membership.roles.includes('designer') ? 'designer' : 'client'];
   return (
     <>
-      <PageHeader title="Projects" description="Each project is a job for a client: its boreholes, the samples taken from them and the tests run on those samples." />
+      <PageHeader title="Projects" description={words.description} />
       <div className="flex flex-col gap-6">
         {labPermissions(membership.roles).editProjects ? (
           <DisclosureForm openLabel="New project" size="md">
             {(close) => <ProjectCreateForm orgId={orgId} onCancel={close} onCreated={(project) => navigate(paths.org.project.to(orgId, project.id))} />}
           </DisclosureForm>
         ) : null}
-        <Panel title="All projects" flush>
+        <Panel title={words.title} flush>
           {projects.isPending ? (
             <Padded><LoadingBlock label="Loading projects…" /></Padded>
           ) : projects.error ? (
             <Padded><ErrorMessage error={projects.error} title="The projects could not be loaded" onRetry={() => void projects.refetch()} /></Padded>
           ) : projects.data.length === 0 ? (
-            <Padded><EmptyState title="No projects yet">A lab manager creates each project; then its boreholes and samples are set up here.</EmptyState></Padded>
+            <Padded><EmptyState title="No projects yet">{words.empty}</EmptyState></Padded>
           ) : (
-            <ProjectsTable orgId={orgId} projects={projects.data} />
+            <ProjectsTable orgId={orgId} projects={projects.data} {...(words === WORDING.client ? { testsHeader: 'Approved tests' } : {})} />
           )}
         </Panel>
       </div>

@@ -8,6 +8,8 @@ import { paths } from '../../config/paths';
 import { formatDate } from '../../lib/format';
 import { useSoilRecord } from '../../features/soil-records/api/get-soil-record';
 import { VersionView } from '../../features/soil-records/components/version-view';
+import { VersionDownloads } from '../../features/reports/components/version-downloads';
+import { labPermissions } from '../lab-permissions';
 import { rolesFor } from '../nav-config';
 import { useCurrentOrg } from '../org-context';
 import { RoleGate } from '../role-gate';
@@ -21,7 +23,7 @@ export function SoilRecordRoute() {
 }
 
 function SoilRecordPage() {
-  const { orgId } = useCurrentOrg();
+  const { orgId, membership } = useCurrentOrg();
   const { recordId = '' } = useParams();
   const [search, setSearch] = useSearchParams();
   const record = useSoilRecord(orgId, recordId);
@@ -38,7 +40,7 @@ function SoilRecordPage() {
         title={`${r.boreholeName} / ${r.sampleReference} at ${r.topDepthM.toFixed(2)} m`}
         description={`${r.projectName} · from test ${r.testReference} · current version v${r.currentVersion}`}
       />
-      <div className="grid items-start gap-6 lg:grid-cols-[14rem_minmax(0,1fr)]">
+      <div className="grid grid-cols-1 items-start gap-6 lg:grid-cols-[14rem_minmax(0,1fr)]">
         <nav aria-label="Versions" className="rounded-lg border border-slate-200 bg-white">
           <h2 className="border-b border-slate-200 px-4 py-2 text-sm font-semibold text-slate-900">Versions</h2>
           <ul>
@@ -61,7 +63,12 @@ function SoilRecordPage() {
           <EngineeringCaution />
           {shown ? (
             <Panel title={`Version ${shown.version}`}>
-              <VersionView orgId={orgId} version={shown} isCurrent={shown.supersededAt === null} />
+              <VersionView orgId={orgId} version={shown} isCurrent={shown.supersededAt === null} labTestLink={labPermissions(membership.roles).readsLabWork} />
+            </Panel>
+          ) : null}
+          {shown ? (
+            <Panel title="Report and data" description="The issued test report of this version, the same file on every download, and its reduced data.">
+              <VersionDownloads key={shown.version} orgId={orgId} recordId={r.id} version={shown.version} canRetry={labPermissions(membership.roles).retryReports} />
             </Panel>
           ) : null}
         </div>

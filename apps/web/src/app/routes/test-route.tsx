@@ -9,7 +9,7 @@ import { PageHeader } from '../../components/page-header';
 import { Panel } from '../../components/panel';
 import { LoadingBlock } from '../../components/spinner';
 import { TestStatusBadge } from '../../components/test-status-badge';
-import { paths } from '../../config/paths';
+import { apiPaths, paths } from '../../config/paths';
 import { useJob } from '../../lib/jobs';
 import { useAnalysis } from '../../features/analysis/api/get-analysis';
 import { useRerunAnalysis } from '../../features/analysis/api/rerun-analysis';
@@ -24,6 +24,7 @@ import { SpecimenForm } from '../../features/tests/components/specimen-form';
 import { SpecimenSummary } from '../../features/tests/components/specimen-summary';
 import { ReadingsTable } from '../../features/uploads/components/readings-table';
 import { UploadPanel } from '../../features/uploads/components/upload-panel';
+import { DownloadLink } from '../../features/reports/components/download-link';
 import { labPermissions, TEST_PAGE_ROLES } from '../lab-permissions';
 import { useCurrentOrg } from '../org-context';
 import { RoleGate } from '../role-gate';
@@ -64,7 +65,11 @@ function TestPage() {
       <p className="mb-2 text-sm">
         <Link to={paths.org.project.to(orgId, t.projectId)} className="text-accent-700 hover:underline">← {t.projectName}</Link>
       </p>
-      <PageHeader title={`Test ${t.reference}`} description={<>{t.boreholeName} / {t.sampleReference} at {t.topDepthM.toFixed(2)} m · <TestStatusBadge status={t.status} /></>} />
+      <PageHeader
+        title={`Test ${t.reference}`}
+        description={<>{t.boreholeName} / {t.sampleReference} at {t.topDepthM.toFixed(2)} m · <TestStatusBadge status={t.status} /></>}
+        actions={t.latestAnalysis ? <DownloadLink href={apiPaths.testDataXlsx(orgId, t.id)}>Reduced data (XLSX)</DownloadLink> : null}
+      />
       {t.status === 'changes_requested' && t.changesRequestedComment ? (
         <Alert tone="warning" title="The lab manager asked for changes" className="mb-4">
           <p className="whitespace-pre-line">{t.changesRequestedComment}</p>

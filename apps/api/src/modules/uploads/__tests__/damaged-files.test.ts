@@ -132,6 +132,6 @@ describe('imports of several organisations', () => {
       [sent.job.id],
     )) as Array<{ seconds: number }>;
     expect(row?.seconds).toBe(importExpirySeconds(sent.upload.sizeBytes));
-    expect(row?.seconds).toBeLessThan(120);
+    expect(row?.seconds).toBeLessThan(60);
   }, 60_000);
 });

@@ -92,7 +92,7 @@ describe('uploading the canonical layout', () => {
   it('when the readings table pages through a test, then rows come in file order with their row numbers', async () => {
     const { testId } = await draftTest(orgId, technicianId);
     await uploadAndWait(technician, orgId, testId, fixture('canonical.csv'), 'readings.csv');
-    const page = (await designer.get(`/api/orgs/${orgId}/tests/${testId}/readings?offset=15&limit=2`).expect(200)).body as ReadingsPage;
+    const page = (await manager.get(`/api/orgs/${orgId}/tests/${testId}/readings?offset=15&limit=2`).expect(200)).body as ReadingsPage;
     expect(page).toEqual({
       total: 150,
       offset: 15,

@@ -37,8 +37,10 @@ const ends = (l: StressVoidRatioLine): StressVoidRatioPoint[] => [l.start, l.end
 /**
  * The e–log σ′ (or ε–log σ′) curve with both preconsolidation constructions drawn from the
  * geometry the analysis returned, never re-derived here, so the plot shows what was computed.
+ * `summary`: for a reader of the issued result — the curve, where each method put σ′p, and the
+ * adopted σ′p always drawn as a line, without the construction lines.
  */
-export function compressionTraces(result: ConsolidationTestResult, axis: CompressionAxis): PlotData[] {
+export function compressionTraces(result: ConsolidationTestResult, axis: CompressionAxis, { summary = false }: { summary?: boolean } = {}): PlotData[] {
   const e0 = result.initialVoidRatio;
   const toY = axis === 'voidRatio' ? (e: number) => e : (e: number) => strainPercentAt(e, e0);
   const traces: PlotData[] = [];
@@ -56,7 +58,9 @@ export function compressionTraces(result: ConsolidationTestResult, axis: Compres
   });
 
   const casagrande = result.preconsolidation.casagrande;
-  if (casagrande) {
+  if (casagrande && summary) {
+    traces.push(methodMark(`σ′p Casagrande ${casagrande.preconsolidationStressKpa.toFixed(0)} kPa`, casagrande.intersection, toY, PLOT_COLOURS.casagrande, 'diamond'));
+  } else if (casagrande) {
     const group = 'casagrande';
     traces.push(line('Casagrande construction', casagrande.interpolant, toY, PLOT_COLOURS.casagrande, 'dot', true, group));
     traces.push(line('Casagrande: horizontal', ends(casagrande.horizontalLine), toY, PLOT_COLOURS.casagrande, 'dash', false, group));
@@ -76,7 +80,9 @@ export function compressionTraces(result: ConsolidationTestResult, axis: Compres
   }
 
   const pacheco = result.preconsolidation.pachecoSilva;
-  if (pacheco) {
+  if (pacheco && summary) {
+    traces.push(methodMark(`σ′p Pacheco Silva ${pacheco.preconsolidationStressKpa.toFixed(0)} kPa`, pacheco.pointC, toY, PLOT_COLOURS.pachecoSilva, 'square'));
+  } else if (pacheco) {
     const group = 'pacheco';
     traces.push(line('Pacheco Silva construction', ends(pacheco.initialVoidRatioLine), toY, PLOT_COLOURS.pachecoSilva, 'dash', true, group));
     traces.push(line('Pacheco Silva: virgin line', ends(pacheco.virginLine), toY, PLOT_COLOURS.pachecoSilva, 'solid', false, group));
@@ -95,21 +101,34 @@ export function compressionTraces(result: ConsolidationTestResult, axis: Compres
   }
 
   const adopted = result.preconsolidation.adoptedKpa;
-  if (adopted !== null && result.preconsolidation.adoptedFrom === 'pick') {
+  if (adopted !== null && (summary || result.preconsolidation.adoptedFrom === 'pick')) {
     const ys = increments.map((i) => (axis === 'voidRatio' ? i.voidRatioEnd : i.strainEnd * 100));
     const low = Math.min(...ys);
     const high = Math.max(...ys);
     traces.push({
       type: 'scatter',
       mode: 'lines',
-      name: `σ′p picked ${adopted.toFixed(0)} kPa`,
+      name: result.preconsolidation.adoptedFrom === 'pick' ? `σ′p picked ${adopted.toFixed(0)} kPa` : `σ′p adopted ${adopted.toFixed(0)} kPa`,
       x: [adopted, adopted],
       y: [low, high],
-      line: { color: PLOT_COLOURS.pick, width: 2 },
+      line: { color: result.preconsolidation.adoptedFrom === 'pick' ? PLOT_COLOURS.pick : PLOT_COLOURS.adopted, width: 2 },
       hoverinfo: 'skip',
     });
   }
   return traces;
+}
+
+/** Where one method put σ′p, as a single marker (the summary plot's stand-in for its construction). */
+function methodMark(name: string, point: StressVoidRatioPoint, toY: (e: number) => number, colour: string, symbol: 'diamond' | 'square'): PlotData {
+  return {
+    type: 'scatter',
+    mode: 'markers',
+    name,
+    x: [point.stressKpa],
+    y: [toY(point.voidRatio)],
+    marker: { size: 11, symbol, color: colour },
+    hovertemplate: '%{x:.1f} kPa<extra></extra>',
+  };
 }
 
 /** Readings of one increment at t > 0 (t = 0 cannot sit on a log axis; √0 is fine). */

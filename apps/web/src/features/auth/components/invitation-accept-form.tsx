@@ -40,6 +40,12 @@ export function InvitationAcceptForm({ token, invitation, onAccepted }: Invitati
         <dd className="break-all text-slate-900">{invitation.email}</dd>
         <dt className="text-slate-500">Invited by</dt>
         <dd className="text-slate-900">{invitation.invitedBy}</dd>
+        {invitation.projectNames.length > 0 ? (
+          <>
+            <dt className="text-slate-500">Shared with you</dt>
+            <dd className="text-slate-900">{invitation.projectNames.join(', ')}</dd>
+          </>
+        ) : null}
       </dl>
       {accept.error ? <ErrorMessage error={accept.error} hideIssuesFor={['name', 'password']} /> : null}
       {isNewAccount ? (

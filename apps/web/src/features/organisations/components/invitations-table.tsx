@@ -17,7 +17,15 @@ export function InvitationsTable({ orgId, invitations }: { orgId: string; invita
   const columns = useMemo(
     () => [
       column.accessor('email', { header: 'E-mail', cell: (info) => <span className="font-medium text-slate-900">{info.getValue()}</span> }),
-      column.accessor('roles', { header: 'Roles', cell: (info) => roleList(info.getValue()) }),
+      column.accessor('roles', {
+        header: 'Roles',
+        cell: (info) => (
+          <>
+            {roleList(info.getValue())}
+            {info.row.original.projects.length > 0 ? <span className="block text-xs text-slate-500">with {info.row.original.projects.map((p) => p.reference).join(', ')}</span> : null}
+          </>
+        ),
+      }),
       column.accessor('invitedBy', { header: 'Invited by' }),
       column.accessor('expiresAt', { header: 'Link expires', cell: (info) => formatDateTime(info.getValue()) }),
       column.display({

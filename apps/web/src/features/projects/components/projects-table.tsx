@@ -8,7 +8,8 @@ import { formatDate } from '../../../lib/format';
 
 const column = createColumnHelper<ProjectSummary>();
 
-export function ProjectsTable({ orgId, projects }: { orgId: string; projects: readonly ProjectSummary[] }) {
+/** `testsHeader`: a client counts the tests issued to them, so their column says so. */
+export function ProjectsTable({ orgId, projects, testsHeader = 'Tests' }: { orgId: string; projects: readonly ProjectSummary[]; testsHeader?: string }) {
   const columns = useMemo(
     () => [
       column.accessor('reference', { header: 'Reference', cell: (info) => <span className="font-medium text-slate-900">{info.getValue()}</span> }),
@@ -23,10 +24,10 @@ export function ProjectsTable({ orgId, projects }: { orgId: string; projects: re
       column.accessor('clientName', { header: 'Client' }),
       column.accessor('siteName', { header: 'Site', cell: (info) => info.getValue() || '—' }),
       column.accessor('boreholeCount', { header: 'Boreholes' }),
-      column.accessor('testCount', { header: 'Tests' }),
+      column.accessor('testCount', { header: testsHeader }),
       column.accessor('createdAt', { header: 'Created', cell: (info) => formatDate(info.getValue()) }),
     ],
-    [orgId],
+    [orgId, testsHeader],
   );
   const table = useReactTable({ data: projects as ProjectSummary[], columns, getCoreRowModel: getCoreRowModel(), getRowId: (row) => row.id });
   return <DataTable table={table} caption="Projects" framed={false} />;

@@ -16,8 +16,11 @@ function Row({ label, children }: { label: string; children: ReactNode }) {
   );
 }
 
-/** One version exactly as approved: its parameters and where each came from. Versions never change. */
-export function VersionView({ orgId, version, isCurrent }: { orgId: string; version: SoilRecordVersion; isCurrent: boolean }) {
+/**
+ * One version exactly as approved: its parameters and where each came from. Versions never change.
+ * `labTestLink`: also link the lab's working page of the test (for lab staff).
+ */
+export function VersionView({ orgId, version, isCurrent, labTestLink }: { orgId: string; version: SoilRecordVersion; isCurrent: boolean; labTestLink: boolean }) {
   const adoptedFrom = version.preconsolidationAdoptedFrom === 'pick' ? ' (picked)' : version.preconsolidationAdoptedFrom ? ` (${version.preconsolidationAdoptedFrom})` : '';
   return (
     <div className="space-y-4">
@@ -46,7 +49,10 @@ export function VersionView({ orgId, version, isCurrent }: { orgId: string; vers
       <dl className="grid gap-3 text-sm sm:grid-cols-2">
         <div>
           <dt className="text-xs uppercase tracking-wide text-slate-500">Source test</dt>
-          <dd><Link to={paths.org.test.to(orgId, version.testId)} className="text-accent-700 hover:underline">Open the test and its curves</Link></dd>
+          <dd className="flex flex-col gap-0.5">
+            <Link to={paths.org.issuedTest.to(orgId, version.recordId, version.version)} className="text-accent-700 hover:underline">Test summary and curves of this version</Link>
+            {labTestLink ? <Link to={paths.org.test.to(orgId, version.testId)} className="text-accent-700 hover:underline">The test in the laboratory</Link> : null}
+          </dd>
         </div>
         <div>
           <dt className="text-xs uppercase tracking-wide text-slate-500">Approved</dt>
