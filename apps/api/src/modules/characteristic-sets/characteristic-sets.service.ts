@@ -1,5 +1,5 @@
-import type { CharacteristicSetDetail, CharacteristicSetInput, CharacteristicSetRevision, CharacteristicSetSummary, SetRevisionTrace, SetStatistics } from '@porestack/types';
-import { CharacteristicSetInputSchema } from '@porestack/types';
+import type { CharacteristicSetDetail, CharacteristicSetRevision, CharacteristicSetSummary, SetRevisionTrace, SetStatistics } from '@porestack/types';
+import { type CharacteristicSetInputSchema } from '@porestack/types';
 import type { EntityManager } from 'typeorm';
 import type { z } from 'zod';
 import { dataSource } from '../../data-source.js';

@@ -1,4 +1,4 @@
-import { GroundModelCreateSchema, type GroundModelContentInputSchema, type GroundModelDetail, type GroundModelRevision, type GroundModelSummary, type SetMember, type StressProfile } from '@porestack/types';
+import { type GroundModelCreateSchema, type GroundModelContentInputSchema, type GroundModelDetail, type GroundModelRevision, type GroundModelSummary, type SetMember, type StressProfile } from '@porestack/types';
 import type { EntityManager } from 'typeorm';
 import type { z } from 'zod';
 import { dataSource } from '../../data-source.js';

@@ -1,4 +1,4 @@
-import { CompressibleParametersInputSchema, GroundModelContentInputSchema, type GroundModelContent, type GroundModelLayer, type ResolvedCompressibleParameters } from '@porestack/types';
+import { CompressibleParametersInputSchema, type GroundModelContentInputSchema, type GroundModelContent, type GroundModelLayer, type ResolvedCompressibleParameters } from '@porestack/types';
 import type { z } from 'zod';
 import type { FieldIssue } from '../../errors/domain-error.js';
 import { setRevisionsByIds, type StoredSetRevision } from '../characteristic-sets/characteristic-sets.service.js';

@@ -4,6 +4,7 @@ import type {
   CheckRevision,
   DesignRecord,
   GroundModelDetail,
+  GroundModelLayer,
   RecordVersionTrace,
   RevisionComparison,
   RunCheckAnswer,
@@ -19,6 +20,14 @@ import { dataSource } from '../../../data-source.js';
 import { createMember } from '../../../testing/browser.js';
 import { approvedRecord, approveNewVersion, type LabPeople } from '../../../testing/design-lab-fixtures.js';
 import { createCheck, createGroundModel, designWorld, type DesignWorld } from '../../../testing/design-fixtures.js';
+
+/** A compressible layer as stored: its parameters resolved. */
+type CompressibleLayer = GroundModelLayer & { parameters: NonNullable<GroundModelLayer['parameters']> };
+
+function stored(value: number | null, what: string): number {
+  if (value === null) throw new Error(`the stored ground model has no ${what}`);
+  return value;
+}
 
 const app = createApp();
 
@@ -143,7 +152,7 @@ describe('a designer takes approved records into a settlement check, traceable t
     expect(answer).toMatchObject({ kind: 'done', revision: 1 });
     first = (await world.designer.get(`${world.base}/settlement-checks/${check.id}/revisions/1/result`).expect(200)).body as CheckRevision;
     // The same ground typed in by hand from the stored values, the same footings, straight into geo-core.
-    const [fill, upper, lower, gravel] = model.current.content.layers as [any, any, any, any];
+    const [fill, upper, lower, gravel] = model.current.content.layers as [GroundModelLayer, CompressibleLayer, CompressibleLayer, GroundModelLayer];
     const upperSigmaV0 = 1.5 * 18 + (3.2 - 1.5) * (17.5 - 9.81);
     const profile: SoilProfile = {
       groundLevelM: 0,
@@ -155,16 +164,16 @@ describe('a designer takes approved records into a settlement check, traceable t
           thicknessM: 3,
           unitWeightKnPerM3: 17.5,
           saturatedUnitWeightKnPerM3: 17.5,
-          e0: upper.parameters.e0.value,
-          cc: upper.parameters.cc.value,
-          cs: upper.parameters.recompressionIndex.value,
-          ocr: upper.parameters.preconsolidationKpa.value / upperSigmaV0,
-          cvM2PerYr: upper.parameters.cvM2PerYr.value,
+          e0: stored(upper.parameters.e0.value, 'e0'),
+          cc: stored(upper.parameters.cc.value, 'cc'),
+          cs: stored(upper.parameters.recompressionIndex.value, 'recompressionIndex'),
+          ocr: stored(upper.parameters.preconsolidationKpa.value, 'σ′p') / upperSigmaV0,
+          cvM2PerYr: stored(upper.parameters.cvM2PerYr.value, 'cvM2PerYr'),
           cAlpha: 0.02,
           drainageTop: 'free',
           drainageBottom: 'free',
         },
-        { name: lower.name, thicknessM: 4, unitWeightKnPerM3: 17.8, saturatedUnitWeightKnPerM3: 17.8, e0: 1.05, cc: lower.parameters.cc.value, cs: 0.05, ocr: 1.3, cvM2PerYr: 1.5, cAlpha: 0.018, drainageTop: 'free', drainageBottom: 'free' },
+        { name: lower.name, thicknessM: 4, unitWeightKnPerM3: 17.8, saturatedUnitWeightKnPerM3: 17.8, e0: 1.05, cc: stored(lower.parameters.cc.value, 'cc'), cs: 0.05, ocr: 1.3, cvM2PerYr: 1.5, cAlpha: 0.018, drainageTop: 'free', drainageBottom: 'free' },
         { name: gravel.name, thicknessM: 3, unitWeightKnPerM3: 20, saturatedUnitWeightKnPerM3: 21, elasticModulusKpa: 80_000, poissonRatio: 0.3 },
       ],
     };
