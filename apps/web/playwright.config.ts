@@ -7,7 +7,7 @@ export default defineConfig({
   testDir: 'e2e',
   // The screenshot walk only serves a person's visual check: it runs with SCREENSHOTS=1, and
   // the ordinary e2e run leaves it out instead of reporting it as skipped.
-  testIgnore: process.env['SCREENSHOTS'] ? [] : ['**/screenshots.spec.ts'],
+  testIgnore: process.env['SCREENSHOTS'] ? [] : ['**/*screenshots.spec.ts'],
   // One browser at a time: the tests share one API, one database and one mail inbox.
   workers: 1,
   fullyParallel: false,

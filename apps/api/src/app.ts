@@ -31,6 +31,10 @@ import { importProfilesRouter } from './modules/import-profiles/import-profiles.
 import { readingsRouter } from './modules/readings/readings.router.js';
 import { templatesRouter } from './modules/readings-import/templates.router.js';
 import { uploadsRouter } from './modules/uploads/uploads.router.js';
+import { characteristicSetsRouter } from './modules/characteristic-sets/characteristic-sets.router.js';
+import { designRecordsRouter } from './modules/design-records/design-records.router.js';
+import { groundModelsRouter } from './modules/ground-models/ground-models.router.js';
+import { settlementChecksRouter } from './modules/settlement-checks/settlement-checks.router.js';
 
 /**
  * apps/web/dist, found from the API package's root: this file runs as src/app.ts under tsx and
@@ -118,6 +122,10 @@ export function createApp(options: AppOptions = {}): Express {
   app.use(importProfilesRouter());
   app.use(readingsRouter());
   app.use(templatesRouter());
+  app.use(designRecordsRouter());
+  app.use(groundModelsRouter());
+  app.use(characteristicSetsRouter());
+  app.use(settlementChecksRouter());
   app.use('/api', apiNotFound);
 
   const webDist = options.webDist ?? (config.NODE_ENV === 'production' ? (config.WEB_DIST ?? defaultWebDist()) : undefined);

@@ -27,6 +27,13 @@ import { IssuedReportEntity } from './modules/reports/issued-report.entity.js';
 import { SessionEntity } from './modules/sessions/session.entity.js';
 import { SignUpRequestEntity } from './modules/auth/sign-up-request.entity.js';
 import { TestContributionEntity } from './modules/consolidation-tests/test-contribution.entity.js';
+import { CharacteristicSetRevisionEntity } from './modules/characteristic-sets/characteristic-set-revision.entity.js';
+import { CharacteristicSetEntity } from './modules/characteristic-sets/characteristic-set.entity.js';
+import { GroundModelRevisionEntity } from './modules/ground-models/ground-model-revision.entity.js';
+import { GroundModelEntity } from './modules/ground-models/ground-model.entity.js';
+import { CheckRevisionEntity } from './modules/settlement-checks/check-revision.entity.js';
+import { FootingResultEntity } from './modules/settlement-checks/footing-result.entity.js';
+import { SettlementCheckEntity } from './modules/settlement-checks/settlement-check.entity.js';
 import { Init1796179339734 } from './migrations/1796179339734-init.js';
 import { LabRecords1796180920952 } from './migrations/1796180920952-lab-records.js';
 import { ReadingsImport1796181181337 } from './migrations/1796181181337-readings-import.js';
@@ -37,6 +44,7 @@ import { SessionsAndRateLimits1796317586769 } from './migrations/1796317586769-s
 import { SignUpRequests1796318744210 } from './migrations/1796318744210-sign-up-requests.js';
 import { TestContributions1796320068018 } from './migrations/1796320068018-test-contributions.js';
 import { ClientSharing1796322759129 } from './migrations/1796322759129-client-sharing.js';
+import { Design1796323725979 } from './migrations/1796323725979-design.js';
 import { ImportNotesAndSheets1796323849735 } from './migrations/1796323849735-import-notes-and-sheets.js';
 import { RowLevelSecurity1796324847360 } from './migrations/1796324847360-row-level-security.js';
 
@@ -53,10 +61,12 @@ export const dataSource = new DataSource({
   entities: [UserEntity, OrganisationEntity, MembershipEntity, InvitationEntity, PasswordResetTokenEntity, AuditEntryEntity,
     ProjectEntity, ProjectMemberEntity, BoreholeEntity, SampleEntity, ConsolidationTestEntity, AnalysisEntity, ReviewEventEntity,
     SoilRecordEntity, SoilRecordVersionEntity, SoilRecordSupersessionEntity, JobRunEntity,
-    UploadEntity, ReadingEntity, ImportProfileEntity, IssuedReportEntity, SessionEntity, SignUpRequestEntity, TestContributionEntity, InvitationProjectEntity],
+    UploadEntity, ReadingEntity, ImportProfileEntity, IssuedReportEntity, SessionEntity, SignUpRequestEntity, TestContributionEntity, InvitationProjectEntity,
+    GroundModelEntity, GroundModelRevisionEntity, CharacteristicSetEntity, CharacteristicSetRevisionEntity,
+    SettlementCheckEntity, CheckRevisionEntity, FootingResultEntity],
   migrations: [Init1796179339734, LabRecords1796180920952, ReadingsImport1796181181337, ReadingsOneForeignKey1796181664432, MembershipRoles1796313749156,
     IssuedReports1796313882857, SessionsAndRateLimits1796317586769, SignUpRequests1796318744210, TestContributions1796320068018,
-    ClientSharing1796322759129, ImportNotesAndSheets1796323849735, RowLevelSecurity1796324847360],
+    ClientSharing1796322759129, Design1796323725979, ImportNotesAndSheets1796323849735, RowLevelSecurity1796324847360],
   // gen_random_uuid() is built into PostgreSQL 13+, so no extension is needed on a managed server.
   uuidExtension: 'pgcrypto',
   synchronize: false,

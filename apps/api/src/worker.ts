@@ -6,6 +6,7 @@ import { JOBS } from './jobs/index.js';
 import { registerJobs } from './jobs/register-jobs.js';
 import { closeMailer } from './mail/mailer.js';
 import { closeParsePool, warmParsePool } from './modules/readings-import/parse-pool.js';
+import { closeEnginePool } from './modules/settlement-checks/engine-pool.js';
 import { ensureBucket } from './storage/storage.js';
 
 await dataSource.initialize();
@@ -26,6 +27,7 @@ async function shutdown(signal: string): Promise<void> {
   // Let jobs in progress finish before the pool closes.
   await boss.stop({ graceful: true, wait: true });
   await closeParsePool();
+  await closeEnginePool();
   closeMailer();
   await dataSource.destroy();
   process.exit(0);

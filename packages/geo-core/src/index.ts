@@ -118,6 +118,9 @@ export type { ConsolidationCase, PrimaryConsolidationSettlementInput, PrimaryCon
 export { primaryConsolidationSettlementMv } from './settlement/primary-consolidation-settlement-mv.js';
 export type { PrimaryConsolidationSettlementMvInput } from './settlement/primary-consolidation-settlement-mv.js';
 export { runSettlementCheck } from './settlement/run-settlement-check.js';
+export { SETTLEMENT_CAUTION } from './settlement/settlement-caution.js';
+export { settlementUnderUniformLoad } from './settlement/settlement-under-uniform-load.js';
+export type { UniformLoadSettlementInput, UniformLoadSettlementResult } from './settlement/settlement-under-uniform-load.js';
 export { secondaryCompressionSettlement } from './settlement/secondary-compression-settlement.js';
 export type { SecondaryCompressionSettlementInput } from './settlement/secondary-compression-settlement.js';
 export type {

@@ -27,6 +27,8 @@ export const API_ERROR_CODES = [
   'token_used',
   'token_expired',
   'service_unavailable',
+  /** Saved only once the person has read the warnings listed in `issues` and sends the request again with acceptWarnings. */
+  'confirmation_needed',
   'internal',
 ] as const;
 export type ApiErrorCode = (typeof API_ERROR_CODES)[number];

@@ -32,6 +32,10 @@ export const ROLE_ACCESS = {
    * for traceability, not the lab's raw working files.
    */
   uploadReaders: ['technician', 'lab_manager', 'admin'],
+  /** Who reads a project's design work (ground models, characteristic sets, checks): its designers, and the lab's managers and administrators. */
+  designReaders: ['admin', 'lab_manager', 'designer'],
+  /** Who builds ground models, characteristic sets and checks and runs them: the project's designers. */
+  designWriters: ['designer'],
   /** Who keeps the organisation's import profiles. */
   profileEditors: ['technician', 'lab_manager'],
 } as const satisfies Record<string, readonly Role[]>;

@@ -27,6 +27,7 @@ const STATUS_BY_CODE: Record<ErrorCode, number> = {
   token_used: 410,
   token_expired: 410,
   service_unavailable: 503,
+  confirmation_needed: 409,
   internal: 500,
 };
 

@@ -1,8 +1,8 @@
 import type { PreparedFooting } from '../stress/prepared-footing.js';
 import type { StressMethod } from '../stress/footing.types.js';
-import type { ConsolidatingLayer } from '../time-rate/consolidating-layer.types.js';
 import { settlementTimeCurve } from '../time-rate/settlement-time-curve.js';
 import { timeForPrimaryShare } from '../time-rate/time-for-primary-share.js';
+import { consolidatingLayersOf } from './consolidating-layers-of.js';
 import type { SettlementModel } from './prepare-settlement-model.js';
 import { settlementAtPoint } from './settlement-at-point.js';
 import type { EvaluationPointLabel, FootingSettlementResult, PointSettlement, SettlementCheckOptions } from './settlement-check.types.js';
@@ -45,18 +45,7 @@ export function footingSettlementResult(input: FootingSettlementResultInput): Fo
       return { label, xM: footing.xM + dx, yM: footing.yM + dy, immediateM: point.immediateM, primaryM: point.primaryM, secondaryM: point.secondaryM, totalM: point.totalM };
     }),
   ];
-  const consolidating: ConsolidatingLayer[] = [];
-  for (const [layerIndex, primarySettlementM] of centre.primaryByLayer) {
-    const layer = model.layers[layerIndex];
-    if (layer === undefined || layer.cvM2PerYr === null || layer.drainageTop === null || layer.drainageBottom === null || !(primarySettlementM > 0)) continue;
-    consolidating.push({
-      primarySettlementM,
-      thicknessM: layer.bottomDepthM - layer.topDepthM,
-      cvM2PerYr: layer.cvM2PerYr,
-      drainageTop: layer.drainageTop,
-      drainageBottom: layer.drainageBottom,
-    });
-  }
+  const consolidating = consolidatingLayersOf(model, centre.primaryByLayer);
   const timeCurve = settlementTimeCurve(consolidating, centre.immediateM, options.timesYears).map((point) => ({ timeYears: point.timeYears, settlementM: point.settlementM }));
   const shareTime = (share: number) => (consolidating.length === 0 ? null : timeForPrimaryShare(consolidating, share).timeYears);
   return {

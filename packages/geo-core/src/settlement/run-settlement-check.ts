@@ -8,15 +8,13 @@ import { footingPairResults } from './footing-pair-results.js';
 import { foxDepthFactor } from './fox-depth-factor.js';
 import { footingSettlementResult } from './footing-settlement-result.js';
 import { prepareSettlementModel, type SettlementModel } from './prepare-settlement-model.js';
+import { SETTLEMENT_CAUTION } from './settlement-caution.js';
 import type { SettlementCheckInput, SettlementCheckResult } from './settlement-check.types.js';
 
 const DEFAULT_SUBLAYER_MAX_THICKNESS_M = 0.5;
 const DEFAULT_DESIGN_LIFE_YEARS = 50;
 const DEFAULT_END_OF_PRIMARY_SHARE = 0.95;
 const DEFAULT_DESIGN_ANGULAR_DISTORTION = 1 / 500;
-
-const CAUTION =
-  'These are engineering calculations for review by a qualified geotechnical engineer. They depend on sample quality, test procedure and the ground model, and do not replace site-specific judgement, local codes or licensed sign-off.';
 
 /**
  * The settlement check of a group of shallow footings on a layered profile:
@@ -79,7 +77,7 @@ export function runSettlementCheck(input: SettlementCheckInput): SettlementCheck
     footings,
     pairs,
     warnings: [...model.warnings, ...footingWarnings, ...overlapWarnings(input.footings)],
-    caution: CAUTION,
+    caution: SETTLEMENT_CAUTION,
   };
 }
 

@@ -117,7 +117,8 @@ export function settlementAtPoint(input: SettlementAtPointInput): SettlementAtPo
   return { immediateM, primaryM, secondaryM, totalM: immediateM + primaryM + secondaryM, primaryByLayer, sublayers: rows };
 }
 
-function primaryForSublayer(
+/** Primary settlement of one prepared sublayer under a stress increase, with the branch used. */
+export function primaryForSublayer(
   sublayer: SettlementModel['sublayers'][number],
   stressIncreaseKpa: number,
 ): { readonly settlementM: number; readonly consolidationCase: SublayerConsolidationCase } {
@@ -136,7 +137,8 @@ function primaryForSublayer(
   });
 }
 
-function secondaryForSublayer(
+/** Secondary compression of one prepared sublayer over the design life; null where it cannot be dated. */
+export function secondaryForSublayer(
   sublayer: SettlementModel['sublayers'][number],
   primarySettlementM: number,
   staysOverconsolidated: boolean,

@@ -10,6 +10,8 @@ import { approveTest } from '../../modules/reviews/reviews.service.js';
 import { generateReport } from '../../jobs/generate-report.job.js';
 import { analysedTest, draftTest, placeOnProject, submittedTest, type LabFixture } from '../../testing/lab-fixtures.js';
 import { canonicalCsvTemplate, LOGGER_MAPPING } from '../../modules/readings-import/demo-files.js';
+import { DESIGN_READERS, DESIGN_WRITERS } from '../../modules/projects/design-roles.js';
+import { designContext, type DesignContext } from '../../testing/design-policy-context.js';
 
 const app = createApp();
 
@@ -45,6 +47,7 @@ interface Context {
     newAnalysedTestId: () => Promise<string>;
     newSubmittedTestId: () => Promise<string>;
   };
+  design: DesignContext;
 }
 // The expected access, written out here rather than imported from the routers' lists, so a
 // changed list in the code fails this test instead of changing what it expects.
@@ -231,6 +234,71 @@ const SPEC: Record<string, { access: Access; sample: (ctx: Context) => Promise<S
   'GET /api/orgs/:orgId/tests/:testId/readings': { access: LAB_READERS, sample: (c) => ({ path: `/api/orgs/${c.orgId}/tests/${c.lab.approvedTestId}/readings` }) },
   'GET /api/orgs/:orgId/templates/readings.csv': { access: UPLOAD_READERS, sample: (c) => ({ path: `/api/orgs/${c.orgId}/templates/readings.csv` }) },
   'GET /api/orgs/:orgId/templates/readings.xlsx': { access: UPLOAD_READERS, sample: (c) => ({ path: `/api/orgs/${c.orgId}/templates/readings.xlsx` }) },
+  'GET /api/orgs/:orgId/settlement-checks': { access: DESIGN_READERS, sample: (c) => ({ path: `/api/orgs/${c.orgId}/settlement-checks?newerParametersApproved=true` }) },
+  'GET /api/orgs/:orgId/projects/:projectId/design/records': { access: DESIGN_READERS, sample: (c) => ({ path: `${c.design.base}/design/records?borehole=BH` }) },
+  'GET /api/orgs/:orgId/projects/:projectId/design/record-versions/:versionId/trace': {
+    access: DESIGN_READERS,
+    sample: (c) => ({ path: `${c.design.base}/design/record-versions/${c.design.versionId}/trace` }),
+  },
+  'GET /api/orgs/:orgId/projects/:projectId/design/set-revisions/:revisionId/trace': {
+    access: DESIGN_READERS,
+    sample: (c) => ({ path: `${c.design.base}/design/set-revisions/${c.design.setRevisionId}/trace` }),
+  },
+  'GET /api/orgs/:orgId/projects/:projectId/ground-models': { access: DESIGN_READERS, sample: (c) => ({ path: `${c.design.base}/ground-models` }) },
+  'POST /api/orgs/:orgId/projects/:projectId/ground-models': { access: DESIGN_WRITERS, sample: (c) => ({ path: `${c.design.base}/ground-models`, body: c.design.groundModelBody }) },
+  'POST /api/orgs/:orgId/projects/:projectId/ground-models/preview': { access: DESIGN_WRITERS, sample: (c) => ({ path: `${c.design.base}/ground-models/preview`, body: c.design.groundModelBody }) },
+  'GET /api/orgs/:orgId/projects/:projectId/ground-models/:modelId': { access: DESIGN_READERS, sample: (c) => ({ path: `${c.design.base}/ground-models/${c.design.groundModelId}` }) },
+  'POST /api/orgs/:orgId/projects/:projectId/ground-models/:modelId/revisions': {
+    access: DESIGN_WRITERS,
+    sample: (c) => ({ path: `${c.design.base}/ground-models/${c.design.groundModelId}/revisions`, body: c.design.groundModelBody }),
+  },
+  'GET /api/orgs/:orgId/projects/:projectId/characteristic-sets': { access: DESIGN_READERS, sample: (c) => ({ path: `${c.design.base}/characteristic-sets` }) },
+  'POST /api/orgs/:orgId/projects/:projectId/characteristic-sets': { access: DESIGN_WRITERS, sample: (c) => ({ path: `${c.design.base}/characteristic-sets`, body: c.design.setBody }) },
+  'POST /api/orgs/:orgId/projects/:projectId/characteristic-sets/statistics': {
+    access: DESIGN_READERS,
+    sample: (c) => ({ path: `${c.design.base}/characteristic-sets/statistics`, body: { versionIds: c.design.setBody.versionIds } }),
+  },
+  'GET /api/orgs/:orgId/projects/:projectId/characteristic-sets/:setId': { access: DESIGN_READERS, sample: (c) => ({ path: `${c.design.base}/characteristic-sets/${c.design.setId}` }) },
+  'POST /api/orgs/:orgId/projects/:projectId/characteristic-sets/:setId/revisions': {
+    access: DESIGN_WRITERS,
+    sample: (c) => ({ path: `${c.design.base}/characteristic-sets/${c.design.setId}/revisions`, body: c.design.setBody }),
+  },
+  'GET /api/orgs/:orgId/projects/:projectId/settlement-checks': { access: DESIGN_READERS, sample: (c) => ({ path: `${c.design.base}/settlement-checks` }) },
+  'POST /api/orgs/:orgId/projects/:projectId/settlement-checks': { access: DESIGN_WRITERS, sample: (c) => ({ path: `${c.design.base}/settlement-checks`, body: c.design.checkBody }) },
+  'POST /api/orgs/:orgId/projects/:projectId/settlement-checks/footings/import': {
+    access: DESIGN_WRITERS,
+    sample: (c) => ({ path: `${c.design.base}/settlement-checks/footings/import`, file: { bytes: Buffer.from('mark,B (m),depth (m),load,x,y\nF1,2,1,500,0,0\n'), name: 'schedule.csv' } }),
+  },
+  'POST /api/orgs/:orgId/projects/:projectId/settlement-checks/footings/paste': {
+    access: DESIGN_WRITERS,
+    sample: (c) => ({ path: `${c.design.base}/settlement-checks/footings/paste`, body: { text: 'F1\tsquare\t2\t\t1\tload\t500\tnet\t0\t0' } }),
+  },
+  'GET /api/orgs/:orgId/projects/:projectId/settlement-checks/:checkId': { access: DESIGN_READERS, sample: (c) => ({ path: `${c.design.checkPath}` }) },
+  'PATCH /api/orgs/:orgId/projects/:projectId/settlement-checks/:checkId': { access: DESIGN_WRITERS, sample: (c) => ({ path: `${c.design.checkPath}`, body: { name: 'Renamed check' } }) },
+  'POST /api/orgs/:orgId/projects/:projectId/settlement-checks/:checkId/runs': { access: DESIGN_WRITERS, sample: (c) => ({ path: `${c.design.checkPath}/runs` }) },
+  'POST /api/orgs/:orgId/projects/:projectId/settlement-checks/:checkId/rerun-with-newer-parameters': {
+    access: DESIGN_WRITERS,
+    sample: async (c) => ({ path: `${await c.design.newFlaggedCheckPath()}/rerun-with-newer-parameters` }),
+  },
+  'GET /api/orgs/:orgId/projects/:projectId/settlement-checks/:checkId/revisions/:revision': { access: DESIGN_READERS, sample: (c) => ({ path: `${c.design.checkPath}/revisions/1` }) },
+  'GET /api/orgs/:orgId/projects/:projectId/settlement-checks/:checkId/revisions/:revision/result': { access: DESIGN_READERS, sample: (c) => ({ path: `${c.design.checkPath}/revisions/1/result` }) },
+  'GET /api/orgs/:orgId/projects/:projectId/settlement-checks/:checkId/revisions/:revision/footings/:footingId': {
+    access: DESIGN_READERS,
+    sample: (c) => ({ path: `${c.design.checkPath}/revisions/1/footings/F1` }),
+  },
+  'GET /api/orgs/:orgId/projects/:projectId/settlement-checks/:checkId/revisions/:revision/workbook.xlsx': {
+    access: DESIGN_READERS,
+    sample: (c) => ({ path: `${c.design.checkPath}/revisions/1/workbook.xlsx` }),
+  },
+  'GET /api/orgs/:orgId/projects/:projectId/settlement-checks/:checkId/compare': { access: DESIGN_READERS, sample: (c) => ({ path: `${c.design.checkPath}/compare?a=1&b=1` }) },
+  'POST /api/orgs/:orgId/projects/:projectId/settlement-checks/:checkId/sizing': {
+    access: DESIGN_WRITERS,
+    sample: (c) => ({ path: `${c.design.checkPath}/sizing`, body: { footingId: 'F1', target: 'settlement', targetTotalMm: 25 } }),
+  },
+  'POST /api/orgs/:orgId/projects/:projectId/settlement-checks/:checkId/sizing/apply': {
+    access: DESIGN_WRITERS,
+    sample: (c) => ({ path: `${c.design.checkPath}/sizing/apply`, body: { footingId: 'F1', widthM: 2.2 } }),
+  },
   // Issued reports and exports: everyone who reads soil records (within their project scope), retry by lab managers only.
   'GET /api/orgs/:orgId/soil-records/:recordId/versions/:version/report': {
     access: ['admin', 'technician', 'lab_manager', 'designer', 'client'],
@@ -408,7 +476,15 @@ describe('every role on every route', () => {
         return row.id;
       },
       lab: await labContext(admin.orgId, emails),
+      design: undefined as unknown as DesignContext,
     };
+    ctx.design = await designContext(app, admin.orgId, {
+      designerId: await userIdOf(emails.designer),
+      designerEmail: emails.designer,
+      technicianId: await userIdOf(emails.technician),
+      managerId: await userIdOf(emails.lab_manager),
+      managerEmail: emails.lab_manager,
+    });
   });
 
   const cases = Object.entries(SPEC).flatMap(([key, row]) => PERSONAS.map((persona) => ({ key, row, persona })));

@@ -12,6 +12,8 @@ import { useProjectTests } from '../../features/projects/api/get-project-tests';
 import { BoreholesSection } from '../../features/projects/components/boreholes-section';
 import { ProjectClientsPanel } from '../../features/projects/components/project-clients-panel';
 import { ProjectEditForm } from '../../features/projects/components/project-edit-form';
+import { DesignOverview } from '../../features/design/components/design-overview';
+import { designPermissions } from '../design-permissions';
 import { useProjectResults } from '../../features/results/api/get-project-results';
 import { BoreholesAndSamples } from '../../features/results/components/boreholes-and-samples';
 import { ResultsTable } from '../../features/results/components/results-table';
@@ -142,6 +144,11 @@ function LabProjectPage() {
         </div>
       ) : null}
       <div className="space-y-6">
+        {designPermissions(membership.roles).read ? (
+          <Panel title="Design" description="Ground models built from the approved soil records, characteristic sets of each stratum, and settlement checks of footings.">
+            <DesignOverview orgId={orgId} projectId={projectId} canEdit={designPermissions(membership.roles).edit} />
+          </Panel>
+        ) : null}
         <Panel
           title="Boreholes, samples and tests"
           description={may.benchWork ? 'Open a test to upload its readings, check the curves and send it for review.' : 'The approved tests of this project; each opens with its curves.'}
