@@ -42,6 +42,8 @@ const WIDTH = 680;
 const PLOT_HEIGHT_MAX = 520;
 const MARGIN = 34;
 const LEGEND_HEIGHT = 62;
+/** Room under the footings for the scale bar and the plan axes, so they never sit on a footing. */
+const SCALE_STRIP = 30;
 const FONT = 'font-family="IBM Plex Sans, DejaVu Sans, sans-serif"';
 const fmt = (n: number) => (Math.round(n * 100) / 100).toString();
 
@@ -58,6 +60,39 @@ function scaleBarMetres(spanM: number): number {
   return [5, 2, 1].map((m) => m * power).find((m) => m <= target) ?? power;
 }
 
+interface Point {
+  x: number;
+  y: number;
+}
+
+/** Distance from p to the segment ab, px. */
+function distanceToSegment(p: Point, a: Point, b: Point): number {
+  const dx = b.x - a.x;
+  const dy = b.y - a.y;
+  const t = Math.max(0, Math.min(1, ((p.x - a.x) * dx + (p.y - a.y) * dy) / (dx * dx + dy * dy || 1)));
+  return Math.hypot(p.x - (a.x + t * dx), p.y - (a.y + t * dy));
+}
+
+/**
+ * The dashed line of a pair: straight, unless it would run through a third footing's centre
+ * (a pair along a row that skips a footing), when it bows out so the two lines and their
+ * labels stay apart.
+ */
+function pairPath(a: Point, b: Point, centres: readonly Point[]): { path: string; labelAt: Point } {
+  const middle = { x: (a.x + b.x) / 2, y: (a.y + b.y) / 2 };
+  const passesOver = centres.some((c) => c !== a && c !== b && distanceToSegment(c, a, b) < 6);
+  if (!passesOver) return { path: `M${fmt(a.x)} ${fmt(a.y)}L${fmt(b.x)} ${fmt(b.y)}`, labelAt: middle };
+  const length = Math.hypot(b.x - a.x, b.y - a.y);
+  // Bow towards the top of the drawing (or to the left for a vertical pair).
+  let nx = (a.y - b.y) / length;
+  let ny = (b.x - a.x) / length;
+  if (ny > 0 || (ny === 0 && nx > 0)) [nx, ny] = [-nx, -ny];
+  const bow = Math.max(18, length * 0.22);
+  const control = { x: middle.x + nx * bow * 2, y: middle.y + ny * bow * 2 };
+  // A quadratic curve reaches half its control point's offset at its middle.
+  return { path: `M${fmt(a.x)} ${fmt(a.y)}Q${fmt(control.x)} ${fmt(control.y)} ${fmt(b.x)} ${fmt(b.y)}`, labelAt: { x: middle.x + nx * bow, y: middle.y + ny * bow } };
+}
+
 export function renderPlanView(spec: PlanViewSpec): string {
   const boxes = spec.footings.map((f) => ({ f, ...halfSizes(f) }));
   const minX = Math.min(...boxes.map((b) => b.f.xM - b.hx));
@@ -68,7 +103,7 @@ export function renderPlanView(spec: PlanViewSpec): string {
   const spanY = Math.max(maxY - minY, 1);
   // One scale for both directions: the plan is to scale, not stretched to fill the box.
   const scale = Math.min((WIDTH - 2 * MARGIN) / spanX, (PLOT_HEIGHT_MAX - 2 * MARGIN) / spanY);
-  const plotHeight = spanY * scale + 2 * MARGIN;
+  const plotHeight = spanY * scale + 2 * MARGIN + SCALE_STRIP;
   const height = plotHeight + LEGEND_HEIGHT;
   const offsetX = (WIDTH - spanX * scale) / 2;
   const px = (x: number) => offsetX + (x - minX) * scale;
@@ -88,13 +123,15 @@ export function renderPlanView(spec: PlanViewSpec): string {
     else parts.push(`<rect x="${fmt(px(f.xM - hx))}" y="${fmt(py(f.yM + hy))}" width="${fmt(2 * hx * scale)}" height="${fmt(2 * hy * scale)}" fill="${fill}" ${stroke}/>`);
     parts.push(`<circle cx="${fmt(px(f.xM))}" cy="${fmt(py(f.yM))}" r="1.4" fill="#111827"/>`);
   }
+  const points = [...centres.values()];
   for (const pair of spec.pairsOverLimit) {
     const a = centres.get(pair.from);
     const b = centres.get(pair.to);
     if (!a || !b) continue;
-    parts.push(`<line x1="${fmt(a.x)}" y1="${fmt(a.y)}" x2="${fmt(b.x)}" y2="${fmt(b.y)}" stroke="#111827" stroke-width="1.4" stroke-dasharray="6 3"/>`);
+    const { path, labelAt } = pairPath(a, b, points);
+    parts.push(`<path d="${path}" fill="none" stroke="#111827" stroke-width="1.4" stroke-dasharray="6 3"/>`);
     parts.push(
-      `<text x="${fmt((a.x + b.x) / 2)}" y="${fmt((a.y + b.y) / 2 - 3)}" text-anchor="middle" font-size="8.5" font-style="italic" ${FONT} fill="#111827" stroke="#ffffff" stroke-width="2.6" paint-order="stroke">${escapeHtml(pair.label)}</text>`,
+      `<text x="${fmt(labelAt.x)}" y="${fmt(labelAt.y - 3)}" text-anchor="middle" font-size="8.5" font-style="italic" ${FONT} fill="#111827" stroke="#ffffff" stroke-width="2.6" paint-order="stroke">${escapeHtml(pair.label)}</text>`,
     );
   }
   if (labelled) {
