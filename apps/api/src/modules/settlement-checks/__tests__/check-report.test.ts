@@ -224,4 +224,35 @@ describe('the PDF summary of an issued settlement check revision', () => {
     )) as unknown[];
     expect(rows).toEqual([]);
   });
+
+  it('when the printer cannot start, then the issued revision says failed in words for the designer, the download answers 409, and the designer (not a client) retries it to a ready file', async () => {
+    await boss.offWork(GENERATE_REPORT_QUEUE);
+    await registerJobs(boss, [generateReportJob({ executablePath: '/nonexistent/chromium' })]);
+    await world.designer.post(`${checkPath}/revisions/2/issue`, {}).expect(202);
+    const failed = await settled(world.designer, `${checkPath}/revisions/2/report`);
+    expect(failed.report.state).toBe('failed');
+    expect(failed.report.message).toMatch(/A designer of the project can try again from the check’s results/);
+    const refused = await client.get(`${checkPath}/revisions/2/report/pdf`);
+    expect(refused.status).toBe(409);
+    expect((await client.post(`${checkPath}/revisions/2/report/retry`, {})).status).toBe(403);
+    await boss.offWork(GENERATE_REPORT_QUEUE);
+    await registerJobs(boss, [generateReportJob()]);
+    expect((await world.designer.post(`${checkPath}/revisions/2/report/retry`, {})).status).toBe(202);
+    const ready = await settled(world.designer, `${checkPath}/revisions/2/report`);
+    expect(ready.report.state).toBe('ready');
+    expect((await download(client, `${checkPath}/revisions/2/report/pdf`)).headers['x-content-sha256']).toBe(ready.report.sha256);
+  }, PRINTING_MS);
+
+  it('when the designer asks twice at once to issue the same revision, then it is issued once: one 202, one 409', async () => {
+    await world.designer.post(`${checkPath}/runs`, { reason: 'Third look' }).expect(201);
+    const answers = await Promise.all([world.designer.post(`${checkPath}/revisions/3/issue`, {}), world.designer.post(`${checkPath}/revisions/3/issue`, {})]);
+    expect(answers.map((res) => res.status).sort()).toEqual([202, 409]);
+    const rows = (await dataSource.query(
+      `SELECT ir.id FROM issued_reports ir JOIN settlement_check_revisions r ON r.id = ir.subject_id WHERE r.check_id = $1 AND r.revision = 3`,
+      [stored.checkId],
+    )) as unknown[];
+    expect(rows).toHaveLength(1);
+    await settled(world.designer, `${checkPath}/revisions/3/report`);
+  }, PRINTING_MS);
 });
+
