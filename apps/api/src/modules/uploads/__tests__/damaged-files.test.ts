@@ -108,9 +108,17 @@ describe('imports of several organisations', () => {
     expect(await readingCount(good.testId)).toBe(150);
     // The other organisation was served while the damaged files still held their slots.
     for (const sent of stuck) expect((await jobState(slow, sent.job.id)).state).toBe('running');
-    const queued = await jobState(slow, waiting.job.id);
+    // The third slot served the other organisation first (its first import ranks higher); once
+    // free, it tries the waiting file, finds the organisation's slots full and puts it back, saying why.
+    const why = `Waiting: your organisation already has ${IMPORTS_PER_ORGANISATION} imports running; this one starts when one of them ends.`;
+    let queued = await jobState(slow, waiting.job.id);
+    for (let polls = 0; queued.message !== why; polls += 1) {
+      expect(polls, `the waiting import still says "${queued.message}"`).toBeLessThan(300);
+      await new Promise((resolve) => setTimeout(resolve, 50));
+      queued = await jobState(slow, waiting.job.id);
+    }
     expect(queued.state).toBe('queued');
-    expect(queued.message).toBe(`Waiting: your organisation already has ${IMPORTS_PER_ORGANISATION} imports running; this one starts when one of them ends.`);
+    for (const sent of stuck) expect((await jobState(slow, sent.job.id)).state).toBe('running');
 
     // Once a slot frees, the waiting file goes through under the same job the page follows.
     expect((await finishedJob(slow.technician, slow.orgId, waiting.job.id, 90_000)).state).toBe('succeeded');
