@@ -1,7 +1,7 @@
 import type { Role } from '@porestack/types';
 import { Router, type Express, type NextFunction, type Request, type RequestHandler, type Response } from 'express';
 import { runInTenant } from '../db/tenant-wall.js';
-import { authenticate, resolveTenant } from './authenticate.js';
+import { authenticate, authenticateInOrg } from './authenticate.js';
 
 /**
  * Route policies — the one place where who may call a route is declared.
@@ -58,14 +58,15 @@ type Guard = RequestHandler & { [ACCESS]: Access };
 function guardFor(access: Access): Guard {
   const guard: RequestHandler = async (req: Request, _res: Response, next: NextFunction) => {
     if (access === 'public') return next();
-    req.user = await authenticate(req);
-    if (access !== 'signed-in') {
-      req.tenant = await resolveTenant(req.user.id, req.params['orgId'] as string | undefined, access);
-      // From here on, every query of this request sees only this organisation's rows.
-      runInTenant(req.tenant.orgId, next);
-      return;
+    if (access === 'signed-in') {
+      req.user = await authenticate(req);
+      return next();
     }
-    next();
+    const { user, tenant } = await authenticateInOrg(req, req.params['orgId'] as string | undefined, access);
+    req.user = user;
+    req.tenant = tenant;
+    // From here on, every query of this request sees only this organisation's rows.
+    runInTenant(tenant.orgId, next);
   };
   return Object.assign(guard, { [ACCESS]: access });
 }
