@@ -34,6 +34,7 @@ import { uploadsRouter } from './modules/uploads/uploads.router.js';
 import { characteristicSetsRouter } from './modules/characteristic-sets/characteristic-sets.router.js';
 import { designRecordsRouter } from './modules/design-records/design-records.router.js';
 import { groundModelsRouter } from './modules/ground-models/ground-models.router.js';
+import { checkReportsRouter } from './modules/settlement-checks/check-reports.router.js';
 import { settlementChecksRouter } from './modules/settlement-checks/settlement-checks.router.js';
 
 /**
@@ -126,6 +127,7 @@ export function createApp(options: AppOptions = {}): Express {
   app.use(groundModelsRouter());
   app.use(characteristicSetsRouter());
   app.use(settlementChecksRouter());
+  app.use(checkReportsRouter());
   app.use('/api', apiNotFound);
 
   const webDist = options.webDist ?? (config.NODE_ENV === 'production' ? (config.WEB_DIST ?? defaultWebDist()) : undefined);

@@ -426,5 +426,7 @@ export {
   HomeOverviewSchema,
 } from './home.js';
 export type { WaitingReason, HomeTest, WaitingTest, HomeApproval, StuckTest, HomeOverview } from './home.js';
+export { IssuedCheckSchema } from './design/issued-check.js';
+export type { IssuedCheck } from './design/issued-check.js';
 export { REPORT_KINDS, ReportKindSchema, REPORT_STATES, ReportStateSchema, IssuedReportSchema, ReportSettingsSchema, ReportSettingsViewSchema } from './lab/reports.js';
 export type { ReportKind, ReportState, IssuedReport, ReportSettings, ReportSettingsView } from './lab/reports.js';

@@ -36,6 +36,8 @@ export const ROLE_ACCESS = {
   designReaders: ['admin', 'lab_manager', 'designer'],
   /** Who builds ground models, characteristic sets and checks and runs them: the project's designers. */
   designWriters: ['designer'],
+  /** Who reads issued settlement checks and downloads their PDF summaries: the design readers, and the clients the project is shared with. */
+  issuedCheckReaders: ['admin', 'lab_manager', 'designer', 'client'],
   /** Who keeps the organisation's import profiles. */
   profileEditors: ['technician', 'lab_manager'],
 } as const satisfies Record<string, readonly Role[]>;

@@ -7,6 +7,7 @@ import { jobRuns } from '../modules/job-runs/job-runs.service.js';
 import { IssuedReportEntity } from '../modules/reports/issued-report.entity.js';
 import { printPdf } from '../modules/reports/pdf/print-pdf.js';
 import { REPORT_KIND_DEFINITIONS } from '../modules/reports/report-kinds.js';
+import { REPORT_RETRY_HINT } from '../modules/reports/report.exception.js';
 import { bucketName, storage } from '../storage/storage.js';
 import { GENERATE_REPORT_QUEUE, type GenerateReportJobData } from './generate-report-queue.js';
 import type { JobDefinition } from './job-definition.js';
@@ -53,8 +54,7 @@ export async function generateReport(data: GenerateReportJobData, options: Repor
     await jobRuns.update(data.jobRunId, { state: 'succeeded', progress: 1, message: `Report issued (${Math.round(pdf.length / 1024)} kB).`, result: { reportId: report.id, sha256 } });
   } catch (error) {
     logger.error({ err: error, job: GENERATE_REPORT_QUEUE, reportId: report.id }, 'report generation failed');
-    const message =
-      'The report could not be printed because of a problem on our side. A lab manager can try again from the soil record page; if it fails again, tell your administrator.';
+    const message = `The report could not be printed because of a problem on our side. ${REPORT_RETRY_HINT[report.kind]} If it fails again, tell your administrator.`;
     await reports.update({ id: report.id, sha256: IsNull() }, { state: 'failed', message });
     await jobRuns.update(data.jobRunId, { state: 'failed', message, result: { reportId: report.id } });
   }

@@ -1,7 +1,10 @@
 import type { CharacteristicSetDetail, CharacteristicSetInput, GroundModelCreate, GroundModelDetail, ProjectDetail, SettlementCheckCreate, SettlementCheckDetail } from '@porestack/types';
 import type { Express } from 'express';
+import { dataSource } from '../data-source.js';
+import { generateReport } from '../jobs/generate-report.job.js';
 import { signedInBrowser, type Browser } from './browser.js';
 import { approvedRecord, approveNewVersion, type LabPeople } from './design-lab-fixtures.js';
+import { placeOnProject } from './lab-fixtures.js';
 
 /** What the route-policy test needs to call every design route once as each persona. */
 export interface DesignContext {
@@ -17,6 +20,12 @@ export interface DesignContext {
   checkPath: string;
   /** A fresh check whose pinned record has since had a newer version approved. */
   newFlaggedCheckPath: () => Promise<string>;
+  /** A new revision of the check, not yet issued (…/revisions/n). */
+  newRevisionPath: () => Promise<string>;
+  /** A revision issued by the designer with its PDF printed (the same one on every call). */
+  issuedRevisionPath: () => Promise<string>;
+  /** A new revision issued by the designer whose PDF failed to print. */
+  newFailedIssuedRevisionPath: () => Promise<string>;
 }
 
 async function send<T>(browser: Browser, path: string, body: object): Promise<T> {
@@ -29,13 +38,15 @@ async function send<T>(browser: Browser, path: string, body: object): Promise<T>
 export async function designContext(
   app: Express,
   orgId: string,
-  people: { designerId: string; designerEmail: string; technicianId: string; managerId: string; managerEmail: string },
+  people: { designerId: string; designerEmail: string; technicianId: string; managerId: string; managerEmail: string; clientId: string },
 ): Promise<DesignContext> {
   const { designerId, technicianId, managerId } = people;
   const designer = await signedInBrowser(app, people.designerEmail);
   const manager = await signedInBrowser(app, people.managerEmail);
   const project = await send<ProjectDetail>(manager, `/api/orgs/${orgId}/projects`, { name: 'Policy design', reference: `PD-${Date.now().toString(36)}`, clientName: 'Invented', designerIds: [designerId] });
   const base = `/api/orgs/${orgId}/projects/${project.id}`;
+  // The client reads the project's issued checks: the policy is about roles; scope has its own tests.
+  await placeOnProject(orgId, project.id, people.clientId, 'client');
   const lab: LabPeople = { orgId, technicianId, managerId };
   const record = await approvedRecord(lab, project.id, { borehole: 'BH', topDepthM: 3, soil: {} });
   const setBody: CharacteristicSetInput = { name: 'Policy stratum', versionIds: [record.versionId], adopted: { cc: { value: 0.4, basis: 'chosen', note: '' } } };
@@ -52,6 +63,21 @@ export async function designContext(
   const checkBody: SettlementCheckCreate = { name: 'Policy check', groundModelId: model.id, footings: [{ id: 'F1', shape: 'square', widthM: 2, depthM: 1, load: 500, xM: 0, yM: 0 }] };
   const check = await send<SettlementCheckDetail>(designer, `${base}/settlement-checks`, checkBody);
   await send(designer, `${base}/settlement-checks/${check.id}/runs`, {});
+  const checkPath = `${base}/settlement-checks/${check.id}`;
+  const newRevisionPath = async () => `${checkPath}/revisions/${(await send<{ revision: number }>(designer, `${checkPath}/runs`, {})).revision}`;
+  const issueAndPrint = async (executablePath?: string) => {
+    const path = await newRevisionPath();
+    await send(designer, `${path}/issue`, {});
+    const revision = Number(path.split('/').pop());
+    const [report] = (await dataSource.query(
+      `SELECT ir.id, ir.job_run_id FROM issued_reports ir JOIN settlement_check_revisions r ON r.id = ir.subject_id WHERE r.check_id = $1 AND r.revision = $2`,
+      [check.id, revision],
+    )) as Array<{ id: string; job_run_id: string }>;
+    if (!report) throw new Error(`no report queued for revision ${revision}`);
+    await generateReport({ orgId, reportId: report.id, jobRunId: report.job_run_id }, executablePath ? { executablePath } : {});
+    return path;
+  };
+  let issued: Promise<string> | undefined;
   return {
     base,
     versionId: record.versionId,
@@ -61,7 +87,10 @@ export async function designContext(
     groundModelBody: groundModelBody(record.versionId),
     setBody,
     checkBody,
-    checkPath: `${base}/settlement-checks/${check.id}`,
+    checkPath,
+    newRevisionPath,
+    issuedRevisionPath: () => (issued ??= issueAndPrint()),
+    newFailedIssuedRevisionPath: () => issueAndPrint('/nonexistent/chromium'),
     newFlaggedCheckPath: async () => {
       const fresh = await approvedRecord(lab, project.id, { borehole: 'BH', topDepthM: 4, soil: {} });
       const freshModel = await send<GroundModelDetail>(designer, `${base}/ground-models`, {

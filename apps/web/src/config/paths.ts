@@ -113,6 +113,11 @@ export const apiPaths = {
   checkRevision: (orgId: string, projectId: string, checkId: string, revision: number) => `/api/orgs/${orgId}/projects/${projectId}/settlement-checks/${checkId}/revisions/${revision}`,
   checkFooting: (orgId: string, projectId: string, checkId: string, revision: number, footingId: string) =>
     `/api/orgs/${orgId}/projects/${projectId}/settlement-checks/${checkId}/revisions/${revision}/footings/${encodeURIComponent(footingId)}`,
+  checkIssue: (orgId: string, projectId: string, checkId: string, revision: number) => `/api/orgs/${orgId}/projects/${projectId}/settlement-checks/${checkId}/revisions/${revision}/issue`,
+  checkReport: (orgId: string, projectId: string, checkId: string, revision: number) => `/api/orgs/${orgId}/projects/${projectId}/settlement-checks/${checkId}/revisions/${revision}/report`,
+  checkReportPdf: (orgId: string, projectId: string, checkId: string, revision: number) => `/api/orgs/${orgId}/projects/${projectId}/settlement-checks/${checkId}/revisions/${revision}/report/pdf`,
+  checkReportRetry: (orgId: string, projectId: string, checkId: string, revision: number) => `/api/orgs/${orgId}/projects/${projectId}/settlement-checks/${checkId}/revisions/${revision}/report/retry`,
+  issuedChecks: (orgId: string, projectId: string) => `/api/orgs/${orgId}/projects/${projectId}/issued-checks`,
   checkWorkbook: (orgId: string, projectId: string, checkId: string, revision: number) => `/api/orgs/${orgId}/projects/${projectId}/settlement-checks/${checkId}/revisions/${revision}/workbook.xlsx`,
   checkCompare: (orgId: string, projectId: string, checkId: string, a: number, b: number) => `/api/orgs/${orgId}/projects/${projectId}/settlement-checks/${checkId}/compare?a=${a}&b=${b}`,
   checkSizing: (orgId: string, projectId: string, checkId: string) => `/api/orgs/${orgId}/projects/${projectId}/settlement-checks/${checkId}/sizing`,

@@ -299,6 +299,28 @@ const SPEC: Record<string, { access: Access; sample: (ctx: Context) => Promise<S
     access: DESIGN_WRITERS,
     sample: (c) => ({ path: `${c.design.checkPath}/sizing/apply`, body: { footingId: 'F1', widthM: 2.2 } }),
   },
+  // Issued settlement checks: a designer of the project issues a revision once (and asks again for a failed print);
+  // design readers and the project's clients read what was issued.
+  'GET /api/orgs/:orgId/projects/:projectId/issued-checks': {
+    access: ['admin', 'lab_manager', 'designer', 'client'],
+    sample: (c) => ({ path: `${c.design.base}/issued-checks` }),
+  },
+  'POST /api/orgs/:orgId/projects/:projectId/settlement-checks/:checkId/revisions/:revision/issue': {
+    access: ['designer'],
+    sample: async (c) => ({ path: `${await c.design.newRevisionPath()}/issue` }),
+  },
+  'GET /api/orgs/:orgId/projects/:projectId/settlement-checks/:checkId/revisions/:revision/report': {
+    access: ['admin', 'lab_manager', 'designer', 'client'],
+    sample: async (c) => ({ path: `${await c.design.issuedRevisionPath()}/report` }),
+  },
+  'GET /api/orgs/:orgId/projects/:projectId/settlement-checks/:checkId/revisions/:revision/report/pdf': {
+    access: ['admin', 'lab_manager', 'designer', 'client'],
+    sample: async (c) => ({ path: `${await c.design.issuedRevisionPath()}/report/pdf` }),
+  },
+  'POST /api/orgs/:orgId/projects/:projectId/settlement-checks/:checkId/revisions/:revision/report/retry': {
+    access: ['designer'],
+    sample: async (c) => ({ path: `${await c.design.newFailedIssuedRevisionPath()}/report/retry` }),
+  },
   // Issued reports and exports: everyone who reads soil records (within their project scope), retry by lab managers only.
   'GET /api/orgs/:orgId/soil-records/:recordId/versions/:version/report': {
     access: ['admin', 'technician', 'lab_manager', 'designer', 'client'],
@@ -484,6 +506,7 @@ describe('every role on every route', () => {
       technicianId: await userIdOf(emails.technician),
       managerId: await userIdOf(emails.lab_manager),
       managerEmail: emails.lab_manager,
+      clientId: await userIdOf(emails.client),
     });
   });
 

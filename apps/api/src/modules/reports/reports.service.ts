@@ -53,7 +53,7 @@ export async function findReport(orgId: string, kind: ReportKind, subjectId: str
  */
 export async function reportFile(orgId: string, kind: ReportKind, subjectId: string): Promise<{ bytes: Buffer; fileName: string; sha256: string }> {
   const row = await findReport(orgId, kind, subjectId);
-  if (row.state !== 'ready' || !row.objectKey || !row.sha256) throw reportNotReady(row.state);
+  if (row.state !== 'ready' || !row.objectKey || !row.sha256) throw reportNotReady(row.state, kind);
   const bytes = await objectBytes(row.objectKey);
   const sha256 = createHash('sha256').update(bytes).digest('hex');
   if (sha256 !== row.sha256) {

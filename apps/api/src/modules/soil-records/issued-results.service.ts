@@ -1,4 +1,3 @@
-import type { ConsolidationTestResult } from '@porestack/geo-core';
 import type { IssuedResult, IssuedTestSummary, ProjectResults, ResultsBorehole, ResultsProject } from '@porestack/types';
 import { dataSource } from '../../data-source.js';
 import { NotFoundError } from '../../errors/domain-error.js';
@@ -122,7 +121,7 @@ export async function issuedTestSummary(viewer: Viewer, recordId: string, versio
     borehole: { name: row['borehole_name'] as string, groundLevelMOd: row['ground_level_m_od'] as number | null, waterTableDepthM: row['water_table_depth_m'] as number | null },
     sample: { reference: row['sample_reference'] as string, topDepthM: row['top_depth_m'] as number, bottomDepthM: row['bottom_depth_m'] as number, description: row['description'] as string },
     test: { id: row['test_id'] as string, reference: row['test_reference'] as string, startedOn: row['started_on'] as string | null, finishedOn: row['finished_on'] as string | null },
-    specimen: issuedSpecimen(analysis.result as unknown as ConsolidationTestResult),
+    specimen: issuedSpecimen(analysis.result),
     overrideReason: analysis.pickReason,
     result: analysis.result,
   };

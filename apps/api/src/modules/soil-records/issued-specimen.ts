@@ -1,5 +1,4 @@
-import type { ConsolidationTestResult } from '@porestack/geo-core';
-import type { IssuedSpecimen } from '@porestack/types';
+import type { ConsolidationTestResult, IssuedSpecimen } from '@porestack/types';
 
 /** Density of water, g/mm³ (1 g/cm³), to turn the solids' volume into a mass. */
 const WATER_DENSITY_G_PER_MM3 = 0.001;

@@ -16,6 +16,7 @@ import { DesignOverview } from '../../features/design/components/design-overview
 import { designPermissions } from '../design-permissions';
 import { useProjectResults } from '../../features/results/api/get-project-results';
 import { BoreholesAndSamples } from '../../features/results/components/boreholes-and-samples';
+import { IssuedChecksList } from '../../features/results/components/issued-checks-list';
 import { ResultsTable } from '../../features/results/components/results-table';
 import { PARAMETER_MEANINGS, resultsInWords } from '../../features/results/components/results-in-words';
 import { DownloadLink } from '../../features/reports/components/download-link';
@@ -103,6 +104,9 @@ function ClientProjectPage() {
         </Panel>
         <EngineeringCaution />
         <ApprovedResultsPanel orgId={orgId} projectId={projectId} description="Each test’s current approved version. Open a test for its summary, curves and report." />
+        <Panel title="Issued settlement checks" description="Settlement checks of footings the project’s designers have issued, each as a PDF summary.">
+          <IssuedChecksList orgId={orgId} projectId={projectId} />
+        </Panel>
         <Panel title="Boreholes and samples">
           <BoreholesAndSamples boreholes={boreholes} />
         </Panel>

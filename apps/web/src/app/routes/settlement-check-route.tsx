@@ -16,6 +16,7 @@ import { CheckOptionsForm } from '../../features/design/components/check-options
 import { CheckResults } from '../../features/design/components/check-results';
 import { formatNumber } from '../../features/design/components/design-format';
 import { FootingScheduleEditor } from '../../features/design/components/footing-schedule-editor';
+import { IssuedCheckReport } from '../../features/design/components/issued-check-report';
 import { NewerParametersBadge } from '../../features/design/components/newer-parameters-badge';
 import { RevisionsPanel } from '../../features/design/components/revisions-panel';
 import { SizingPanel } from '../../features/design/components/sizing-panel';
@@ -180,6 +181,9 @@ function CheckPage({ orgId, projectId, check, canEdit }: { orgId: string; projec
                 </select>
               </div>
             ) : null}
+            <div className="mb-4">
+              <IssuedCheckReport orgId={orgId} projectId={projectId} checkId={check.id} revision={revision} canIssue={canEdit} />
+            </div>
             <CheckResults orgId={orgId} projectId={projectId} checkId={check.id} revision={revision} selectedFooting={footing} onSelectFooting={(id) => go({ footing: id })} />
           </>
         )

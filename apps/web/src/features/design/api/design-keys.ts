@@ -9,6 +9,7 @@ export const designKeys = {
   checks: (orgId: string, projectId: string) => [...designKeys.project(orgId, projectId), 'checks'] as const,
   check: (orgId: string, projectId: string, checkId: string) => [...designKeys.checks(orgId, projectId), checkId] as const,
   revision: (orgId: string, projectId: string, checkId: string, revision: number) => [...designKeys.check(orgId, projectId, checkId), 'revisions', revision] as const,
+  issued: (orgId: string, projectId: string, checkId: string, revision: number) => [...designKeys.revision(orgId, projectId, checkId, revision), 'issued'] as const,
   footing: (orgId: string, projectId: string, checkId: string, revision: number, footingId: string) => [...designKeys.revision(orgId, projectId, checkId, revision), 'footings', footingId] as const,
   trace: (orgId: string, projectId: string, kind: 'record' | 'set', id: string) => [...designKeys.project(orgId, projectId), 'trace', kind, id] as const,
 };
