@@ -23,14 +23,17 @@ if (config.API_PROCESSES > 1 && cluster.isPrimary) {
  */
 function runProcesses(count: number): void {
   let stopping = false;
-  for (let i = 0; i < count; i += 1) cluster.fork();
+  const alive = new Set<number>();
+  const fork = () => alive.add(cluster.fork().id);
+  for (let i = 0; i < count; i += 1) fork();
   cluster.on('exit', (worker, code) => {
+    alive.delete(worker.id);
     if (stopping) {
-      if (Object.keys(cluster.workers ?? {}).length === 0) process.exit(0);
+      if (alive.size === 0) process.exit(0);
       return;
     }
     logger.error({ pid: worker.process.pid, code }, 'an API process ended; starting another');
-    setTimeout(() => cluster.fork(), 1_000);
+    setTimeout(fork, 1_000);
   });
   const stop = (signal: NodeJS.Signals) => {
     stopping = true;
