@@ -35,6 +35,8 @@ const API_ROOT = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '..'
 
 await dataSource.initialize();
 await dataSource.runMigrations({ transaction: 'each' });
+// Counts of an earlier run (its failed sign-ins from this machine) would limit this one's sign-ins.
+await dataSource.query('DELETE FROM rate_limits');
 
 // The lab: one organisation, its tests, and the people who read them.
 const app = createApp();
@@ -68,7 +70,8 @@ function answers(port: number): Promise<boolean> {
 
 const port = await freePort();
 const api = await start(
-  ['dist/src/server.js'],
+  // BENCH_NODE_ARGS, e.g. "--cpu-prof --cpu-prof-dir=/tmp/prof": node options for the API (a profile of the run).
+  [...(process.env['BENCH_NODE_ARGS']?.split(' ').filter(Boolean) ?? []), 'dist/src/server.js'],
   { NODE_ENV: 'production', PORT: String(port), LOG_LEVEL: 'info', API_PROCESSES: process.env['API_PROCESSES'] ?? '1', SIGN_IN_CLIENT_RATE_LIMIT: '100000', RESET_RATE_LIMIT: '100000', RESET_CLIENT_RATE_LIMIT: '100000' },
   port,
 );

@@ -2,6 +2,7 @@ import type { Role } from '@porestack/types';
 import { Router, type Express, type NextFunction, type Request, type RequestHandler, type Response } from 'express';
 import { runInTenant } from '../db/tenant-wall.js';
 import { authenticate, authenticateInOrg } from './authenticate.js';
+import { UUID_PATTERN } from './params.js';
 
 /**
  * Route policies — the one place where who may call a route is declared.
@@ -62,7 +63,11 @@ function guardFor(access: Access): Guard {
       req.user = await authenticate(req);
       return next();
     }
-    const { user, tenant } = await authenticateInOrg(req, req.params['orgId'] as string | undefined, access);
+    const orgId = req.params['orgId'] as string | undefined;
+    // Within the organisation asked for already (its membership row is behind the wall), so the
+    // pooled connection keeps one setting for the whole request instead of switching twice.
+    const check = () => authenticateInOrg(req, orgId, access);
+    const { user, tenant } = orgId !== undefined && UUID_PATTERN.test(orgId) ? await runInTenant(orgId, check) : await check();
     req.user = user;
     req.tenant = tenant;
     // From here on, every query of this request sees only this organisation's rows.
