@@ -1,4 +1,5 @@
 import 'reflect-metadata';
+import cluster from 'node:cluster';
 import { createApp } from './app.js';
 import { env } from './config/env.js';
 import { dataSource } from './data-source.js';
@@ -8,25 +9,63 @@ import { closeParsePool } from './modules/readings-import/parse-pool.js';
 import { ensureBucket } from './storage/storage.js';
 
 const config = env();
-await dataSource.initialize();
-await ensureBucket();
 
-const server = createApp().listen(config.PORT, config.HOST, () => {
-  logger.info({ port: config.PORT, publicUrl: config.PUBLIC_URL }, 'Porestack API listening');
-});
-
-let stopping = false;
-function shutdown(signal: string): void {
-  if (stopping) return;
-  stopping = true;
-  logger.info({ signal }, 'shutting down');
-  // Stop taking connections, let requests in flight finish, then close the pool.
-  server.close(() => {
-    closeMailer();
-    Promise.allSettled([closeParsePool(), dataSource.destroy()]).finally(() => process.exit(0));
-  });
-  server.closeIdleConnections();
-  setTimeout(() => process.exit(1), 10_000).unref();
+if (config.API_PROCESSES > 1 && cluster.isPrimary) {
+  runProcesses(config.API_PROCESSES);
+} else {
+  await serve();
 }
-process.on('SIGTERM', () => shutdown('SIGTERM'));
-process.on('SIGINT', () => shutdown('SIGINT'));
+
+/**
+ * API_PROCESSES > 1: this process only forks the API processes, which share the port
+ * (node:cluster hands them connections in turn); one that dies is started again, and a
+ * signal reaches all of them and ends this one after the last.
+ */
+function runProcesses(count: number): void {
+  let stopping = false;
+  const alive = new Set<number>();
+  const fork = () => alive.add(cluster.fork().id);
+  for (let i = 0; i < count; i += 1) fork();
+  cluster.on('exit', (worker, code) => {
+    alive.delete(worker.id);
+    if (stopping) {
+      if (alive.size === 0) process.exit(0);
+      return;
+    }
+    logger.error({ pid: worker.process.pid, code }, 'an API process ended; starting another');
+    setTimeout(fork, 1_000);
+  });
+  const stop = (signal: NodeJS.Signals) => {
+    stopping = true;
+    for (const worker of Object.values(cluster.workers ?? {})) worker?.process.kill(signal);
+    setTimeout(() => process.exit(1), 12_000).unref();
+  };
+  process.on('SIGTERM', () => stop('SIGTERM'));
+  process.on('SIGINT', () => stop('SIGINT'));
+  logger.info({ processes: count, port: config.PORT }, 'Porestack API processes starting');
+}
+
+async function serve(): Promise<void> {
+  await dataSource.initialize();
+  await ensureBucket();
+
+  const server = createApp().listen(config.PORT, config.HOST, () => {
+    logger.info({ port: config.PORT, publicUrl: config.PUBLIC_URL }, 'Porestack API listening');
+  });
+
+  let stopping = false;
+  function shutdown(signal: string): void {
+    if (stopping) return;
+    stopping = true;
+    logger.info({ signal }, 'shutting down');
+    // Stop taking connections, let requests in flight finish, then close the pool.
+    server.close(() => {
+      closeMailer();
+      Promise.allSettled([closeParsePool(), dataSource.destroy()]).finally(() => process.exit(0));
+    });
+    server.closeIdleConnections();
+    setTimeout(() => process.exit(1), 10_000).unref();
+  }
+  process.on('SIGTERM', () => shutdown('SIGTERM'));
+  process.on('SIGINT', () => shutdown('SIGINT'));
+}

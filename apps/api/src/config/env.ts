@@ -53,6 +53,8 @@ const EnvSchema = z.object({
   IMPORT_PARSE_SECONDS: z.coerce.number().positive().default(20),
   /** Folder of the built web app served in production. */
   WEB_DIST: z.string().optional(),
+  /** API processes sharing the port (node:cluster); each has its own pool and parse threads. */
+  API_PROCESSES: z.coerce.number().int().min(1).max(16).default(1),
 });
 export type Env = z.infer<typeof EnvSchema>;
 

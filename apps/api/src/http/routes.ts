@@ -1,7 +1,8 @@
 import type { Role } from '@porestack/types';
 import { Router, type Express, type NextFunction, type Request, type RequestHandler, type Response } from 'express';
 import { runInTenant } from '../db/tenant-wall.js';
-import { authenticate, resolveTenant } from './authenticate.js';
+import { authenticate, authenticateInOrg } from './authenticate.js';
+import { UUID_PATTERN } from './params.js';
 
 /**
  * Route policies — the one place where who may call a route is declared.
@@ -58,14 +59,19 @@ type Guard = RequestHandler & { [ACCESS]: Access };
 function guardFor(access: Access): Guard {
   const guard: RequestHandler = async (req: Request, _res: Response, next: NextFunction) => {
     if (access === 'public') return next();
-    req.user = await authenticate(req);
-    if (access !== 'signed-in') {
-      req.tenant = await resolveTenant(req.user.id, req.params['orgId'] as string | undefined, access);
-      // From here on, every query of this request sees only this organisation's rows.
-      runInTenant(req.tenant.orgId, next);
-      return;
+    if (access === 'signed-in') {
+      req.user = await authenticate(req);
+      return next();
     }
-    next();
+    const orgId = req.params['orgId'] as string | undefined;
+    // Within the organisation asked for already (its membership row is behind the wall), so the
+    // pooled connection keeps one setting for the whole request instead of switching twice.
+    const check = () => authenticateInOrg(req, orgId, access);
+    const { user, tenant } = orgId !== undefined && UUID_PATTERN.test(orgId) ? await runInTenant(orgId, check) : await check();
+    req.user = user;
+    req.tenant = tenant;
+    // From here on, every query of this request sees only this organisation's rows.
+    runInTenant(tenant.orgId, next);
   };
   return Object.assign(guard, { [ACCESS]: access });
 }

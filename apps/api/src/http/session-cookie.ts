@@ -1,8 +1,17 @@
 import type { Request, Response } from 'express';
+import { createSecretKey, type KeyObject } from 'node:crypto';
 import jwt from 'jsonwebtoken';
 import { env } from '../config/env.js';
 import { startSession } from '../modules/sessions/sessions.service.js';
 import { UUID_PATTERN } from './params.js';
+
+let signingKey: { secret: string; key: KeyObject } | undefined;
+/** JWT_SECRET as a key object, made once (jsonwebtoken otherwise makes one from the string on every verify). */
+function sessionKey(): KeyObject {
+  const secret = env().JWT_SECRET;
+  if (signingKey?.secret !== secret) signingKey = { secret, key: createSecretKey(Buffer.from(secret, 'utf8')) };
+  return signingKey.key;
+}
 
 export const SESSION_COOKIE = 'porestack_session';
 
@@ -27,7 +36,7 @@ function cookieOptions() {
 function setSessionCookie(res: Response, user: { id: string; sessionVersion: number }, sessionId: string): void {
   const config = env();
   const claims: SessionClaims = { sub: user.id, sid: sessionId, ver: user.sessionVersion };
-  const token = jwt.sign(claims, config.JWT_SECRET, { algorithm: 'HS256', expiresIn: `${config.SESSION_DAYS}d` });
+  const token = jwt.sign(claims, sessionKey(), { algorithm: 'HS256', expiresIn: `${config.SESSION_DAYS}d` });
   res.cookie(SESSION_COOKIE, token, { ...cookieOptions(), maxAge: config.SESSION_DAYS * 24 * 3600 * 1000 });
 }
 
@@ -49,7 +58,7 @@ export function readSessionClaims(req: Request): SessionClaims | null {
   const token: unknown = req.cookies?.[SESSION_COOKIE];
   if (typeof token !== 'string' || token === '') return null;
   try {
-    const payload = jwt.verify(token, env().JWT_SECRET, { algorithms: ['HS256'] });
+    const payload = jwt.verify(token, sessionKey(), { algorithms: ['HS256'] });
     if (typeof payload !== 'object' || typeof payload.exp !== 'number') return null;
     const { sub, sid, ver } = payload as { sub?: unknown; sid?: unknown; ver?: unknown };
     if (typeof sub !== 'string' || !UUID_PATTERN.test(sub) || typeof sid !== 'string' || !UUID_PATTERN.test(sid) || !Number.isInteger(ver)) return null;

@@ -37,7 +37,13 @@ export function bucketName(): string {
 export async function ensureBucket(): Promise<void> {
   const s3 = storage();
   const bucket = bucketName();
-  if (!(await s3.bucketExists(bucket))) await s3.makeBucket(bucket, env().S3_REGION);
+  if (await s3.bucketExists(bucket)) return;
+  try {
+    await s3.makeBucket(bucket, env().S3_REGION);
+  } catch (error) {
+    // Another process (API_PROCESSES > 1, or the worker) made it first.
+    if (!(await s3.bucketExists(bucket))) throw error;
+  }
 }
 
 /** The whole object as bytes (uploads and reports are small enough to hold in memory). */

@@ -37,7 +37,9 @@ beforeAll(async () => {
 
 afterAll(async () => {
   await Promise.all(children.map((c) => c.kill()));
-  await dataSource.query(`DELETE FROM pgboss.job WHERE state IN ('created', 'retry') AND data->>'orgId' = $1`, [orgId]);
+  // (pg-boss's schema exists once a worker has started: not when only the processes-behind-one-port test runs.)
+  const [boss] = (await dataSource.query(`SELECT to_regclass('pgboss.job') IS NOT NULL AS exists`)) as Array<{ exists: boolean }>;
+  if (boss?.exists) await dataSource.query(`DELETE FROM pgboss.job WHERE state IN ('created', 'retry') AND data->>'orgId' = $1`, [orgId]);
   await stopJobQueue();
 });
 
@@ -138,4 +140,46 @@ describe('two API processes and two workers on one database and one bucket', () 
     expect(rows).toHaveLength(8);
     for (const row of rows) expect(row).toEqual({ state: 'completed', retry_count: 0 });
   }, 240_000);
+});
+
+describe('API_PROCESSES: several API processes behind one port', () => {
+  /** The pids of the API processes that said they listen, in the order they said it. */
+  const listening = (api: Child): number[] =>
+    api
+      .output()
+      .split('\n')
+      .filter((line) => line.includes('Porestack API listening'))
+      .map((line) => (JSON.parse(line) as { pid: number }).pid);
+
+  it('when API_PROCESSES is 2, then two processes serve the port; one killed is replaced while the other answers', async () => {
+    const port = await freePort();
+    const api = await child('server', { PORT: String(port), API_PROCESSES: '2' });
+    for (let polls = 0; listening(api).length < 2; polls += 1) {
+      expect(polls, api.output()).toBeLessThan(600);
+      await new Promise((resolve) => setTimeout(resolve, 100));
+    }
+    const [victim, survivor] = listening(api) as [number, number];
+    expect(victim).not.toBe(survivor);
+    expect(victim).not.toBe(api.process.pid);
+
+    process.kill(victim, 'SIGKILL');
+    // Once the first process has seen it go (a connection handed to it before then is lost, as in any crash),
+    // the other serves every request.
+    for (let polls = 0; !api.output().includes('an API process ended'); polls += 1) {
+      expect(polls, api.output()).toBeLessThan(200);
+      await new Promise((resolve) => setTimeout(resolve, 50));
+    }
+    const health = () => fetch(`http://127.0.0.1:${port}/api/health`, { signal: AbortSignal.timeout(10_000) });
+    for (let i = 0; i < 10; i += 1) expect((await health()).status).toBe(200);
+    for (let polls = 0; listening(api).length < 3; polls += 1) {
+      expect(polls, api.output()).toBeLessThan(600);
+      await new Promise((resolve) => setTimeout(resolve, 100));
+    }
+    expect((await health()).status).toBe(200);
+
+    // A signal ends every process and then the first.
+    await api.stop();
+    expect(api.process.exitCode).toBe(0);
+    for (const pid of listening(api)) expect(() => process.kill(pid, 0)).toThrow();
+  }, 120_000);
 });

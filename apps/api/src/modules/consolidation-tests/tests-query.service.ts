@@ -1,4 +1,4 @@
-import type { ReviewDecision, TestDetail, TestListQuery, TestSummary } from '@porestack/types';
+import type { AnalysisSummary, ReviewDecision, TestDetail, TestListQuery, TestSummary } from '@porestack/types';
 import { dataSource } from '../../data-source.js';
 import { NotFoundError } from '../../errors/domain-error.js';
 import { ANALYSE_TEST_QUEUE } from '../../jobs/analyse-test-queue.js';
@@ -60,6 +60,27 @@ export async function listTests(viewer: Viewer, filter: TestListQuery): Promise<
   return ((await dataSource.query(sql, values)) as Row[]).map(toSummary);
 }
 
+/** Summaries of analyses already read, by organisation and id; the oldest goes first past the bound. */
+const summaries = new Map<string, AnalysisSummary>();
+const SUMMARIES_KEPT = 5000;
+
+/**
+ * An analysis's summary (its key parameters come out of the whole stored result, tens of kB of
+ * JSON to read and parse). Analyses are never changed once written, so a summary read once
+ * holds for good.
+ */
+async function analysisSummary(orgId: string, analysisId: string): Promise<AnalysisSummary | null> {
+  const key = `${orgId}:${analysisId}`;
+  const kept = summaries.get(key);
+  if (kept) return kept;
+  const analysis = await dataSource.getRepository(AnalysisEntity).findOneBy({ organisationId: orgId, id: analysisId });
+  if (!analysis) return null;
+  const summary = toAnalysisSummary(analysis);
+  summaries.set(key, summary);
+  if (summaries.size > SUMMARIES_KEPT) summaries.delete(summaries.keys().next().value as string);
+  return summary;
+}
+
 /**
  * A test as the viewer may read it: the lab's whole detail; for a designer (only while the test
  * stands approved) without the lab's working state — job messages and the upload to download.
@@ -73,18 +94,23 @@ export async function readTestDetail(viewer: Viewer, testId: string): Promise<Te
 
 /** The lab's whole detail of a test of the organisation; for lab routes and after the lab's own changes. */
 export async function getTestDetail(orgId: string, testId: string): Promise<TestDetail> {
-  const [row] = (await dataSource.query(`${SUMMARY_SQL} AND t.id = $2`, [orgId, testId])) as Row[];
-  const test = await dataSource.getRepository(ConsolidationTestEntity).findOneBy({ organisationId: orgId, id: testId });
+  // Independent reads side by side, each on its own pooled connection.
+  const [[row], test] = await Promise.all([
+    dataSource.query(`${SUMMARY_SQL} AND t.id = $2`, [orgId, testId]) as Promise<Row[]>,
+    dataSource.getRepository(ConsolidationTestEntity).findOneBy({ organisationId: orgId, id: testId }),
+  ]);
   if (!row || !test) throw new NotFoundError('test');
-  const analysis = test.latestAnalysisId ? await dataSource.getRepository(AnalysisEntity).findOneBy({ organisationId: orgId, id: test.latestAnalysisId }) : null;
-  const pending = await jobRuns.pendingFor(orgId, testId, ANALYSE_TEST_QUEUE);
-  const latestJob = await jobRuns.latestFor(orgId, testId, ANALYSE_TEST_QUEUE);
-  const [lastChangeRequest] = test.status === 'changes_requested'
-    ? ((await dataSource.query(
-        'SELECT comment FROM review_events WHERE organisation_id = $1 AND test_id = $2 AND decision = $3 ORDER BY at DESC LIMIT 1',
-        [orgId, testId, 'changes_requested' satisfies ReviewDecision],
-      )) as Array<{ comment: string | null }>)
-    : [];
+  const [analysis, pending, latestJob, [lastChangeRequest]] = await Promise.all([
+    test.latestAnalysisId ? analysisSummary(orgId, test.latestAnalysisId) : null,
+    jobRuns.pendingFor(orgId, testId, ANALYSE_TEST_QUEUE),
+    jobRuns.latestFor(orgId, testId, ANALYSE_TEST_QUEUE),
+    test.status === 'changes_requested'
+      ? (dataSource.query(
+          'SELECT comment FROM review_events WHERE organisation_id = $1 AND test_id = $2 AND decision = $3 ORDER BY at DESC LIMIT 1',
+          [orgId, testId, 'changes_requested' satisfies ReviewDecision],
+        ) as Promise<Array<{ comment: string | null }>>)
+      : [],
+  ]);
   const stress = inSituStress(
     {
       topDepthM: row['top_depth_m'] as number,
@@ -113,7 +139,7 @@ export async function getTestDetail(orgId: string, testId: string): Promise<Test
     inSituStressKpa: stress.kpa,
     latestUploadId: test.latestUploadId,
     picks: test.picks,
-    latestAnalysis: analysis ? toAnalysisSummary(analysis) : null,
+    latestAnalysis: analysis,
     pendingJobId: pending?.id ?? null,
     latestAnalysisJob: latestJob ? { id: latestJob.id, state: latestJob.state, message: latestJob.message, updatedAt: latestJob.updatedAt.toISOString() } : null,
     changesRequestedComment: lastChangeRequest?.comment ?? null,
