@@ -2,7 +2,6 @@ import { holdsAnyRole, ROLE_LABELS, roleList, type Role } from '@porestack/types
 import type { Request } from 'express';
 import { dataSource } from '../data-source.js';
 import { DomainError, NotFoundError } from '../errors/domain-error.js';
-import { userOfSession } from '../modules/sessions/sessions.service.js';
 import { UserEntity } from '../modules/users/user.entity.js';
 import { UUID_PATTERN } from './params.js';
 import type { TenantContext } from './request-context.js';
@@ -11,20 +10,9 @@ import { readSessionClaims } from './session-cookie.js';
 const NOT_SIGNED_IN = 'You are not signed in, or your session has ended. Sign in and try again.';
 
 /**
- * The user of a valid session cookie whose server-side session is live: signed out, expired
- * or issued before a password change (newer session_version) is refused.
- */
-export async function authenticate(req: Request): Promise<UserEntity> {
-  const claims = readSessionClaims(req);
-  const user = claims ? await userOfSession(claims.sid, claims.sub, claims.ver) : null;
-  if (!claims || !user) throw new DomainError('unauthenticated', NOT_SIGNED_IN);
-  return user;
-}
-
-/**
- * The session's user and their membership in `orgId`, in one round trip (the two were two
- * ORM queries on every request of the portal, most of its time under load): the session must
- * be live as in authenticate(); the membership row is null for a non-member.
+ * A live session's user and their membership in `orgId` (null for none asked or not a member),
+ * in one round trip: signed out, expired or issued before a password change (newer
+ * session_version) is no session.
  */
 const USER_AND_MEMBERSHIP_SQL = `
   SELECT u.id, u.email, u.name, u.password_hash, u.session_version, u.created_at, m.roles, o.name AS organisation_name
@@ -45,16 +33,11 @@ interface UserAndMembershipRow {
   organisation_name: string | null;
 }
 
-/**
- * authenticate() and the caller's membership in `:orgId`, let in when any role it holds is
- * among `roles`. Not signed in answers 401 first; not a member answers exactly as a missing
- * organisation (404), so ids of other tenants reveal nothing.
- */
-export async function authenticateInOrg(req: Request, orgId: string | undefined, roles: readonly Role[]): Promise<{ user: UserEntity; tenant: TenantContext }> {
+/** The session cookie's user (401 without a live session) and the row holding their membership in `orgId`. */
+async function sessionUser(req: Request, orgId: string | null): Promise<{ user: UserEntity; row: UserAndMembershipRow }> {
   const claims = readSessionClaims(req);
   if (!claims) throw new DomainError('unauthenticated', NOT_SIGNED_IN);
-  const knownOrg = orgId !== undefined && UUID_PATTERN.test(orgId) ? orgId : null;
-  const [row] = (await dataSource.query(USER_AND_MEMBERSHIP_SQL, [claims.sid, claims.sub, claims.ver, knownOrg])) as UserAndMembershipRow[];
+  const [row] = (await dataSource.query(USER_AND_MEMBERSHIP_SQL, [claims.sid, claims.sub, claims.ver, orgId])) as UserAndMembershipRow[];
   if (!row) throw new DomainError('unauthenticated', NOT_SIGNED_IN);
   const user = Object.assign(new UserEntity(), {
     id: row.id,
@@ -64,6 +47,22 @@ export async function authenticateInOrg(req: Request, orgId: string | undefined,
     sessionVersion: row.session_version,
     createdAt: row.created_at,
   });
+  return { user, row };
+}
+
+/** The user of a valid session cookie whose server-side session is live (see sessionUser). */
+export async function authenticate(req: Request): Promise<UserEntity> {
+  return (await sessionUser(req, null)).user;
+}
+
+/**
+ * authenticate() and the caller's membership in `:orgId`, let in when any role it holds is
+ * among `roles`. Not signed in answers 401 first; not a member answers exactly as a missing
+ * organisation (404), so ids of other tenants reveal nothing.
+ */
+export async function authenticateInOrg(req: Request, orgId: string | undefined, roles: readonly Role[]): Promise<{ user: UserEntity; tenant: TenantContext }> {
+  const knownOrg = orgId !== undefined && UUID_PATTERN.test(orgId) ? orgId : null;
+  const { user, row } = await sessionUser(req, knownOrg);
   if (knownOrg === null || row.roles === null || row.organisation_name === null) throw new NotFoundError('organisation');
   if (!holdsAnyRole(row.roles, roles)) {
     const held = row.roles.length === 1 ? 'role' : 'roles';
