@@ -75,7 +75,7 @@ const port = await freePort();
 const api = await start(
   // BENCH_NODE_ARGS, e.g. "--cpu-prof --cpu-prof-dir=/tmp/prof": node options for the API (a profile of the run).
   [...(process.env['BENCH_NODE_ARGS']?.split(' ').filter(Boolean) ?? []), 'dist/src/server.js'],
-  { NODE_ENV: 'production', PORT: String(port), LOG_LEVEL: 'info', API_PROCESSES: process.env['API_PROCESSES'] ?? '1', SIGN_IN_CLIENT_RATE_LIMIT: '100000', RESET_RATE_LIMIT: '100000', RESET_CLIENT_RATE_LIMIT: '100000' },
+  { NODE_ENV: 'production', PORT: String(port), LOG_LEVEL: process.env['BENCH_LOG_LEVEL'] ?? 'info', API_PROCESSES: process.env['API_PROCESSES'] ?? '1', SIGN_IN_CLIENT_RATE_LIMIT: '100000', RESET_RATE_LIMIT: '100000', RESET_CLIENT_RATE_LIMIT: '100000' },
   port,
 );
 const base = `http://127.0.0.1:${port}`;
@@ -127,10 +127,12 @@ async function measure(label: string, url: string, paths: string[], withSessions
   };
 }
 
+// BENCH_ROUTES, e.g. "list": only these of floor, list and detail (a profile of one route).
+const routes = new Set((process.env['BENCH_ROUTES'] ?? 'floor,list,detail').split(','));
 const figures: Figures[] = [];
-figures.push(await measure('bare Express route (the floor)', `http://127.0.0.1:${floorPort}`, ['/bare'], false));
-figures.push(await measure('GET /tests (the organisation’s tests list)', base, [`/api/orgs/${admin.orgId}/tests`], true));
-figures.push(await measure('GET /tests/:id (a test’s detail)', base, testIds.map((id) => `/api/orgs/${admin.orgId}/tests/${id}`), true));
+if (routes.has('floor')) figures.push(await measure('bare Express route (the floor)', `http://127.0.0.1:${floorPort}`, ['/bare'], false));
+if (routes.has('list')) figures.push(await measure('GET /tests (the organisation’s tests list)', base, [`/api/orgs/${admin.orgId}/tests`], true));
+if (routes.has('detail')) figures.push(await measure('GET /tests/:id (a test’s detail)', base, testIds.map((id) => `/api/orgs/${admin.orgId}/tests/${id}`), true));
 
 // BENCH_LOAD_ONLY=1 measures the routes under load only (quicker, while tuning them).
 if (process.env['BENCH_LOAD_ONLY'] !== '1') {

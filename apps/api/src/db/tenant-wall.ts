@@ -24,7 +24,7 @@ export const TENANT_ROLE = 'porestack_tenant';
 
 /** The organisation each pooled connection was last set to; empty for none. */
 const SET_FOR = Symbol('porestack.org');
-type Tagged = { [SET_FOR]?: string; query: (text: string, values: unknown[]) => Promise<unknown> };
+type Tagged = { [SET_FOR]?: string; query: (config: { name: string; text: string; values: unknown[] }) => Promise<unknown> };
 
 let installed = false;
 
@@ -44,7 +44,11 @@ export function installTenantWall(): void {
       try {
         // Inside an organisation the connection acts as porestack_tenant, whom the policies bind;
         // outside, as the login role again.
-        await connection.query("SELECT set_config('porestack.org_id', $1, false), set_config('role', $2, false)", [orgId, orgId === '' ? 'none' : TENANT_ROLE]);
+        await connection.query({
+          name: 'porestack_tenant_wall',
+          text: "SELECT set_config('porestack.org_id', $1, false), set_config('role', $2, false)",
+          values: [orgId, orgId === '' ? 'none' : TENANT_ROLE],
+        });
       } catch (error) {
         release(error);
         throw error;

@@ -1,6 +1,6 @@
 import { holdsAnyRole, ROLE_LABELS, roleList, type Role } from '@porestack/types';
 import type { Request } from 'express';
-import { dataSource } from '../data-source.js';
+import { preparedQuery } from '../db/prepared.js';
 import { DomainError, NotFoundError } from '../errors/domain-error.js';
 import { UserEntity } from '../modules/users/user.entity.js';
 import { UUID_PATTERN } from './params.js';
@@ -37,7 +37,7 @@ interface UserAndMembershipRow {
 async function sessionUser(req: Request, orgId: string | null): Promise<{ user: UserEntity; row: UserAndMembershipRow }> {
   const claims = readSessionClaims(req);
   if (!claims) throw new DomainError('unauthenticated', NOT_SIGNED_IN);
-  const [row] = (await dataSource.query(USER_AND_MEMBERSHIP_SQL, [claims.sid, claims.sub, claims.ver, orgId])) as UserAndMembershipRow[];
+  const [row] = await preparedQuery<UserAndMembershipRow>(USER_AND_MEMBERSHIP_SQL, [claims.sid, claims.sub, claims.ver, orgId]);
   if (!row) throw new DomainError('unauthenticated', NOT_SIGNED_IN);
   const user = Object.assign(new UserEntity(), {
     id: row.id,

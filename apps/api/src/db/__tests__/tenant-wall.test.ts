@@ -3,6 +3,7 @@ import { createApp } from '../../app.js';
 import { dataSource } from '../../data-source.js';
 import { createMember, signedInBrowser, signUpAdmin, type Browser } from '../../testing/browser.js';
 import { draftTest, type LabFixture } from '../../testing/lab-fixtures.js';
+import { preparedQuery } from '../prepared.js';
 import { runInTenant } from '../tenant-wall.js';
 
 // PostgreSQL row-level security as the last wall between organisations: a query that forgets
@@ -99,5 +100,24 @@ describe('row-level security between organisations', () => {
     expect(tables.map((t) => t.name)).toEqual(expect.arrayContaining(['projects', 'consolidation_tests', 'readings', 'soil_record_versions', 'memberships', 'audit_entries']));
     const unwalled = tables.filter((t) => !t.enabled || !t.policy).map((t) => t.name);
     expect(unwalled, 'tables with an organisation_id but no tenant wall (call porestack_add_tenant_wall in their migration)').toEqual([]);
+  });
+
+  it('when one prepared statement runs for one organisation, then another, then outside any, then each run sees only what its own setting allows', async () => {
+    // The same text each time: the one statement, prepared once per pooled connection and its plan kept.
+    const everyTest = async () => (await preparedQuery<{ id: string }>('SELECT id FROM consolidation_tests WHERE $1::int = 1', [1])).map((r) => r.id);
+    for (let round = 0; round < 8; round += 1) {
+      const [forUs, forThem] = await Promise.all([runInTenant(ours.orgId, everyTest), runInTenant(theirs.orgId, everyTest)]);
+      expect(forUs).toContain(ours.test.testId);
+      expect(forUs).not.toContain(theirs.test.testId);
+      expect(forThem).toContain(theirs.test.testId);
+      expect(forThem).not.toContain(ours.test.testId);
+    }
+    expect(await everyTest()).toEqual(expect.arrayContaining([ours.test.testId, theirs.test.testId]));
+  });
+
+  it('when a prepared statement fails in PostgreSQL, then the error comes back and its connection serves the next query', async () => {
+    await expect(runInTenant(ours.orgId, () => preparedQuery('SELECT 1 / $1::int AS x', [0]))).rejects.toThrow(/division by zero/);
+    const again = await runInTenant(ours.orgId, () => preparedQuery<{ x: number }>('SELECT 1 / $1::int AS x', [1]));
+    expect(again).toEqual([{ x: 1 }]);
   });
 });

@@ -1,24 +1,49 @@
-import type { AnalysisSummary, ReviewDecision, TestDetail, TestListQuery, TestSummary } from '@porestack/types';
+import type { AnalysisSummary, CompliancePoint, JobState, Picks, TestDetail, TestListQuery, TestStatus, TestSummary } from '@porestack/types';
 import { dataSource } from '../../data-source.js';
+import { preparedQuery } from '../../db/prepared.js';
 import { NotFoundError } from '../../errors/domain-error.js';
 import { ANALYSE_TEST_QUEUE } from '../../jobs/analyse-test-queue.js';
 import { AnalysisEntity } from '../analyses/analysis.entity.js';
 import { toAnalysisSummary } from '../analyses/analyses.service.js';
-import { jobRuns } from '../job-runs/job-runs.service.js';
-import { assertProjectVisible, assertTestOpenable, openableTestsSql, type Viewer } from '../projects/project-scope.js';
+import { assertProjectVisible, openableTestsSql, opensLabTest, projectView, type Viewer } from '../projects/project-scope.js';
 import { inSituStress } from '../samples/in-situ-stress.js';
-import { ConsolidationTestEntity } from './consolidation-test.entity.js';
 
-const SUMMARY_SQL = `
-  SELECT t.id, t.reference, t.status, p.id AS project_id, p.name AS project_name, b.id AS borehole_id, b.name AS borehole_name,
-         b.water_table_depth_m, s.id AS sample_id, s.reference AS sample_reference, s.top_depth_m, s.bottom_depth_m,
-         s.bulk_unit_weight_kn_per_m3, s.in_situ_stress_kpa, u.id AS technician_id, u.name AS technician_name, t.submitted_at, t.updated_at
+/** A test with its sample, borehole, project and technician. */
+const SUMMARY_JOINS = `
     FROM consolidation_tests t
     JOIN samples s ON s.id = t.sample_id
     JOIN boreholes b ON b.id = s.borehole_id
     JOIN projects p ON p.id = b.project_id
-    JOIN users u ON u.id = t.technician_id
-   WHERE t.organisation_id = $1`;
+    JOIN users u ON u.id = t.technician_id`;
+
+const SUMMARY_COLUMNS = `t.id, t.reference, t.status, p.id AS project_id, p.name AS project_name, b.id AS borehole_id, b.name AS borehole_name,
+         b.water_table_depth_m, s.id AS sample_id, s.reference AS sample_reference, s.top_depth_m, s.bottom_depth_m,
+         s.bulk_unit_weight_kn_per_m3, s.in_situ_stress_kpa, u.id AS technician_id, u.name AS technician_name, t.submitted_at, t.updated_at`;
+
+/**
+ * A test's whole detail in one row: its summary, its set-up, and beside them the newest pending
+ * and the newest analysis job ($3, the queue) and the comment of the last change request while
+ * changes stand requested. Dates as text ('YYYY-MM-DD'), as the entity reads them.
+ */
+const DETAIL_SQL = `
+  SELECT ${SUMMARY_COLUMNS},
+         t.initial_height_mm, t.diameter_mm, t.specific_gravity, t.dry_mass_g, t.initial_water_content, t.wet_mass_g,
+         t.final_water_content, t.drainage, t.apparatus_name, t.compliance, t.started_on::text AS started_on,
+         t.finished_on::text AS finished_on, t.picks, t.latest_upload_id, t.latest_analysis_id, t.created_at,
+         pending.id AS pending_job_id, latest.id AS latest_job_id, latest.state AS latest_job_state,
+         latest.message AS latest_job_message, latest.updated_at AS latest_job_updated_at, changes.comment AS changes_requested_comment
+  ${SUMMARY_JOINS}
+    LEFT JOIN LATERAL (SELECT r.id FROM job_runs r
+                        WHERE r.organisation_id = t.organisation_id AND r.test_id = t.id AND r.kind = $3 AND r.state IN ('queued', 'running')
+                        ORDER BY r.created_at DESC LIMIT 1) pending ON TRUE
+    LEFT JOIN LATERAL (SELECT r.id, r.state, r.message, r.updated_at FROM job_runs r
+                        WHERE r.organisation_id = t.organisation_id AND r.test_id = t.id AND r.kind = $3
+                        ORDER BY r.created_at DESC LIMIT 1) latest ON TRUE
+    LEFT JOIN LATERAL (SELECT e.comment FROM review_events e
+                        WHERE t.status = 'changes_requested' AND e.organisation_id = t.organisation_id AND e.test_id = t.id
+                          AND e.decision = 'changes_requested'
+                        ORDER BY e.at DESC LIMIT 1) changes ON TRUE
+   WHERE t.organisation_id = $1 AND t.id = $2`;
 
 type Row = Record<string, unknown>;
 
@@ -56,8 +81,10 @@ export async function listTests(viewer: Viewer, filter: TestListQuery): Promise<
   add('s.id', filter.sampleId);
   add('t.status', filter.status);
   add('t.technician_id', filter.technicianId);
-  const sql = `${SUMMARY_SQL}${clauses.map((c) => ` AND ${c}`).join('')} ORDER BY p.name, b.name, s.top_depth_m, t.reference`;
-  return ((await dataSource.query(sql, values)) as Row[]).map(toSummary);
+  const sql = `SELECT ${SUMMARY_COLUMNS} ${SUMMARY_JOINS}
+   WHERE t.organisation_id = $1${clauses.map((c) => ` AND ${c}`).join('')}
+   ORDER BY p.name, b.name, s.top_depth_m, t.reference`;
+  return (await preparedQuery<Row>(sql, values)).map(toSummary);
 }
 
 /** Summaries of analyses already read, by organisation and id; the oldest goes first past the bound. */
@@ -81,36 +108,35 @@ async function analysisSummary(orgId: string, analysisId: string): Promise<Analy
   return summary;
 }
 
+/** The test's detail row (DETAIL_SQL); the same 404 as for a test of another tenant when there is none. */
+async function detailRow(orgId: string, testId: string): Promise<Row> {
+  const [row] = await preparedQuery<Row>(DETAIL_SQL, [orgId, testId, ANALYSE_TEST_QUEUE]);
+  if (!row) throw new NotFoundError('test');
+  return row;
+}
+
 /**
  * A test as the viewer may read it: the lab's whole detail; for a designer (only while the test
  * stands approved) without the lab's working state — job messages and the upload to download.
+ * Outside the viewer's scope, the same 404 as a missing test (the rule of assertTestOpenable).
  */
 export async function readTestDetail(viewer: Viewer, testId: string): Promise<TestDetail> {
-  const view = await assertTestOpenable(viewer, testId);
-  const detail = await getTestDetail(viewer.orgId, testId);
+  const row = await detailRow(viewer.orgId, testId);
+  const view = projectView(viewer, row['project_id'] as string);
+  if (!view || !opensLabTest(view, row['status'] as TestStatus)) throw new NotFoundError('test');
+  const detail = await toDetail(viewer.orgId, row);
   if (view === 'lab') return detail;
   return { ...detail, latestUploadId: null, pendingJobId: null, latestAnalysisJob: null, changesRequestedComment: null };
 }
 
 /** The lab's whole detail of a test of the organisation; for lab routes and after the lab's own changes. */
 export async function getTestDetail(orgId: string, testId: string): Promise<TestDetail> {
-  // Independent reads side by side, each on its own pooled connection.
-  const [[row], test] = await Promise.all([
-    dataSource.query(`${SUMMARY_SQL} AND t.id = $2`, [orgId, testId]) as Promise<Row[]>,
-    dataSource.getRepository(ConsolidationTestEntity).findOneBy({ organisationId: orgId, id: testId }),
-  ]);
-  if (!row || !test) throw new NotFoundError('test');
-  const [analysis, pending, latestJob, [lastChangeRequest]] = await Promise.all([
-    test.latestAnalysisId ? analysisSummary(orgId, test.latestAnalysisId) : null,
-    jobRuns.pendingFor(orgId, testId, ANALYSE_TEST_QUEUE),
-    jobRuns.latestFor(orgId, testId, ANALYSE_TEST_QUEUE),
-    test.status === 'changes_requested'
-      ? (dataSource.query(
-          'SELECT comment FROM review_events WHERE organisation_id = $1 AND test_id = $2 AND decision = $3 ORDER BY at DESC LIMIT 1',
-          [orgId, testId, 'changes_requested' satisfies ReviewDecision],
-        ) as Promise<Array<{ comment: string | null }>>)
-      : [],
-  ]);
+  return toDetail(orgId, await detailRow(orgId, testId));
+}
+
+async function toDetail(orgId: string, row: Row): Promise<TestDetail> {
+  const latestAnalysisId = row['latest_analysis_id'] as string | null;
+  const analysis = latestAnalysisId ? await analysisSummary(orgId, latestAnalysisId) : null;
   const stress = inSituStress(
     {
       topDepthM: row['top_depth_m'] as number,
@@ -120,29 +146,37 @@ export async function getTestDetail(orgId: string, testId: string): Promise<Test
     },
     row['water_table_depth_m'] as number | null,
   );
+  const latestJobId = row['latest_job_id'] as string | null;
   return {
     ...toSummary(row),
     specimen: {
-      initialHeightMm: test.initialHeightMm,
-      diameterMm: test.diameterMm,
-      specificGravity: test.specificGravity,
-      dryMassG: test.dryMassG,
-      initialWaterContent: test.initialWaterContent,
-      wetMassG: test.wetMassG,
-      finalWaterContent: test.finalWaterContent,
-      drainage: test.drainage,
+      initialHeightMm: row['initial_height_mm'] as number | null,
+      diameterMm: row['diameter_mm'] as number | null,
+      specificGravity: row['specific_gravity'] as number | null,
+      dryMassG: row['dry_mass_g'] as number | null,
+      initialWaterContent: row['initial_water_content'] as number | null,
+      wetMassG: row['wet_mass_g'] as number | null,
+      finalWaterContent: row['final_water_content'] as number | null,
+      drainage: row['drainage'] as 'double' | 'single',
     },
-    apparatusName: test.apparatusName,
-    compliance: test.compliance,
-    startedOn: test.startedOn,
-    finishedOn: test.finishedOn,
+    apparatusName: row['apparatus_name'] as string,
+    compliance: row['compliance'] as CompliancePoint[],
+    startedOn: row['started_on'] as string | null,
+    finishedOn: row['finished_on'] as string | null,
     inSituStressKpa: stress.kpa,
-    latestUploadId: test.latestUploadId,
-    picks: test.picks,
+    latestUploadId: row['latest_upload_id'] as string | null,
+    picks: row['picks'] as Picks,
     latestAnalysis: analysis,
-    pendingJobId: pending?.id ?? null,
-    latestAnalysisJob: latestJob ? { id: latestJob.id, state: latestJob.state, message: latestJob.message, updatedAt: latestJob.updatedAt.toISOString() } : null,
-    changesRequestedComment: lastChangeRequest?.comment ?? null,
-    createdAt: test.createdAt.toISOString(),
+    pendingJobId: (row['pending_job_id'] as string | null) ?? null,
+    latestAnalysisJob: latestJobId
+      ? {
+          id: latestJobId,
+          state: row['latest_job_state'] as JobState,
+          message: row['latest_job_message'] as string | null,
+          updatedAt: (row['latest_job_updated_at'] as Date).toISOString(),
+        }
+      : null,
+    changesRequestedComment: (row['changes_requested_comment'] as string | null) ?? null,
+    createdAt: (row['created_at'] as Date).toISOString(),
   };
 }
