@@ -4,11 +4,10 @@ import { fileURLToPath } from 'node:url';
 import cookieParser from 'cookie-parser';
 import express, { type Express } from 'express';
 import helmet from 'helmet';
-import { pinoHttp } from 'pino-http';
 import { env } from './config/env.js';
 import { createCsrf } from './http/csrf.js';
 import { apiNotFound, errorMiddleware } from './http/error-middleware.js';
-import { logger } from './http/logger.js';
+import { requestLog } from './http/request-log.js';
 import { defineRoutes } from './http/routes.js';
 import { isSecureOrigin } from './http/session-cookie.js';
 import { auditRouter } from './modules/audit/audit.router.js';
@@ -83,19 +82,7 @@ export function createApp(options: AppOptions = {}): Express {
     }),
   );
   // One short line per request: method, path, status and time — no headers, no cookies.
-  app.use(
-    pinoHttp({
-      logger,
-      autoLogging: config.NODE_ENV !== 'test',
-      quietReqLogger: true,
-      serializers: {
-        req: (req: { method: string; url: string }) => ({ method: req.method, url: req.url }),
-        res: (res: { statusCode: number }) => ({ status: res.statusCode }),
-      },
-      customSuccessMessage: (req, res, responseTime) => `${req.method} ${req.url} ${res.statusCode} ${Math.round(responseTime)} ms`,
-      customErrorMessage: (req, res) => `${req.method} ${req.url} ${res.statusCode}`,
-    }),
-  );
+  if (config.NODE_ENV !== 'test') app.use(requestLog);
   app.use(express.json({ limit: '1mb' }));
   app.use(cookieParser());
 

@@ -47,6 +47,7 @@ import { ClientSharing1796322759129 } from './migrations/1796322759129-client-sh
 import { Design1796323725979 } from './migrations/1796323725979-design.js';
 import { ImportNotesAndSheets1796323849735 } from './migrations/1796323849735-import-notes-and-sheets.js';
 import { RowLevelSecurity1796324847360 } from './migrations/1796324847360-row-level-security.js';
+import { ReadChangeNotices1796394000000 } from './migrations/1796394000000-read-change-notices.js';
 
 /**
  * The one DataSource (the TypeORM CLI requires exactly one export here). Entities and
@@ -66,7 +67,8 @@ export const dataSource = new DataSource({
     SettlementCheckEntity, CheckRevisionEntity, FootingResultEntity],
   migrations: [Init1796179339734, LabRecords1796180920952, ReadingsImport1796181181337, ReadingsOneForeignKey1796181664432, MembershipRoles1796313749156,
     IssuedReports1796313882857, SessionsAndRateLimits1796317586769, SignUpRequests1796318744210, TestContributions1796320068018,
-    ClientSharing1796322759129, Design1796323725979, ImportNotesAndSheets1796323849735, RowLevelSecurity1796324847360],
+    ClientSharing1796322759129, Design1796323725979, ImportNotesAndSheets1796323849735, RowLevelSecurity1796324847360,
+    ReadChangeNotices1796394000000],
   // gen_random_uuid() is built into PostgreSQL 13+, so no extension is needed on a managed server.
   uuidExtension: 'pgcrypto',
   synchronize: false,

@@ -1,8 +1,10 @@
 import 'reflect-metadata';
 import cluster from 'node:cluster';
+import type { PostgresDriver } from 'typeorm/driver/postgres/PostgresDriver.js';
 import { createApp } from './app.js';
 import { env } from './config/env.js';
 import { dataSource } from './data-source.js';
+import { readCache } from './db/read-cache.js';
 import { logger } from './http/logger.js';
 import { closeMailer } from './mail/mailer.js';
 import { closeParsePool } from './modules/readings-import/parse-pool.js';
@@ -48,6 +50,7 @@ function runProcesses(count: number): void {
 async function serve(): Promise<void> {
   await dataSource.initialize();
   await ensureBucket();
+  if (config.READ_CACHE_MB > 0) await readCache().start();
 
   const server = createApp().listen(config.PORT, config.HOST, () => {
     logger.info({ port: config.PORT, publicUrl: config.PUBLIC_URL }, 'Porestack API listening');
@@ -58,14 +61,28 @@ async function serve(): Promise<void> {
     if (stopping) return;
     stopping = true;
     logger.info({ signal }, 'shutting down');
-    // Stop taking connections, let requests in flight finish, then close the pool.
+    // Stop taking connections, let requests in flight finish — also those whose client has gone
+    // and which still wait on the database — then close the pool.
     server.close(() => {
       closeMailer();
-      Promise.allSettled([closeParsePool(), dataSource.destroy()]).finally(() => process.exit(0));
+      void queriesSettled(5_000)
+        .then(() => Promise.allSettled([closeParsePool(), readCache().stop(), dataSource.destroy()]))
+        .finally(() => process.exit(0));
     });
     server.closeIdleConnections();
     setTimeout(() => process.exit(1), 10_000).unref();
   }
   process.on('SIGTERM', () => shutdown('SIGTERM'));
   process.on('SIGINT', () => shutdown('SIGINT'));
+}
+
+/** Resolves once no pooled connection has been in use for 100 ms (or after `ms`). */
+async function queriesSettled(ms: number): Promise<void> {
+  const pool = (dataSource.driver as PostgresDriver).master as { totalCount: number; idleCount: number; waitingCount: number };
+  const deadline = Date.now() + ms;
+  let quietSince = Date.now();
+  while (Date.now() < deadline && Date.now() - quietSince < 100) {
+    if (pool.waitingCount > 0 || pool.totalCount > pool.idleCount) quietSince = Date.now();
+    await new Promise((resolve) => setTimeout(resolve, 20));
+  }
 }

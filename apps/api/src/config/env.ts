@@ -55,6 +55,11 @@ const EnvSchema = z.object({
   WEB_DIST: z.string().optional(),
   /** API processes sharing the port (node:cluster); each has its own pool and parse threads. */
   API_PROCESSES: z.coerce.number().int().min(1).max(16).default(1),
+  /**
+   * MB of reads each API process keeps until the database notices a change (db/read-cache.ts: the
+   * tests list, a test's detail); 0 reads everything from the database every time.
+   */
+  READ_CACHE_MB: z.coerce.number().min(0).default(64),
 });
 export type Env = z.infer<typeof EnvSchema>;
 

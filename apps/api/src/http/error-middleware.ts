@@ -72,14 +72,14 @@ function fromUnavailableService(error: unknown): DomainError | null {
 
 export const errorMiddleware: ErrorRequestHandler = (error: unknown, req, res, _next) => {
   const known = error instanceof DomainError ? error : (fromBodyParser(error) ?? fromUnavailableService(error));
-  if (known?.code === 'service_unavailable') (req.log ?? logger).warn({ err: error }, 'a service is not answering');
+  if (known?.code === 'service_unavailable') logger.warn({ err: error, method: req.method, url: req.originalUrl }, 'a service is not answering');
   if (known) {
     const body: ApiError = { code: known.code, message: known.message };
     if (known.issues) body.issues = known.issues;
     res.status(statusFor(known.code)).json(body);
     return;
   }
-  (req.log ?? logger).error({ err: error }, 'unhandled error');
+  logger.error({ err: error, method: req.method, url: req.originalUrl }, 'unhandled error');
   const body: ApiError = {
     code: 'internal',
     message: 'Something went wrong on our side. Try again in a moment; if it keeps happening, tell your administrator.',

@@ -1,5 +1,6 @@
 import type { Role } from '@porestack/types';
 import { Router, type Express, type NextFunction, type Request, type RequestHandler, type Response } from 'express';
+import { readCache } from '../db/read-cache.js';
 import { runInTenant } from '../db/tenant-wall.js';
 import { authenticate, authenticateInOrg } from './authenticate.js';
 import { UUID_PATTERN } from './params.js';
@@ -57,7 +58,7 @@ const ACCESS = Symbol('porestack.access');
 type Guard = RequestHandler & { [ACCESS]: Access };
 
 function guardFor(access: Access): Guard {
-  const guard: RequestHandler = async (req: Request, _res: Response, next: NextFunction) => {
+  const guard: RequestHandler = async (req: Request, res: Response, next: NextFunction) => {
     if (access === 'public') return next();
     if (access === 'signed-in') {
       req.user = await authenticate(req);
@@ -70,6 +71,9 @@ function guardFor(access: Access): Guard {
     const { user, tenant } = orgId !== undefined && UUID_PATTERN.test(orgId) ? await runInTenant(orgId, check) : await check();
     req.user = user;
     req.tenant = tenant;
+    // A change of this organisation's rows: this process's next read of them comes from the database
+    // even before PostgreSQL's notice of it arrives (db/read-cache.ts).
+    if (req.method !== 'GET' && req.method !== 'HEAD') res.once('finish', () => readCache().forget(tenant.orgId));
     // From here on, every query of this request sees only this organisation's rows.
     runInTenant(tenant.orgId, next);
   };

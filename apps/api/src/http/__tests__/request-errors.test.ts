@@ -7,6 +7,7 @@ import { OrganisationEntity } from '../../modules/organisations/organisation.ent
 import { UserEntity } from '../../modules/users/user.entity.js';
 import { openBrowser, signUpAdmin, TEST_PASSWORD, uniqueEmail } from '../../testing/browser.js';
 import { errorMiddleware } from '../error-middleware.js';
+import { logger } from '../logger.js';
 
 const app = createApp();
 
@@ -63,13 +64,15 @@ describe('malformed requests', () => {
 
   it('when a route fails unexpectedly, then 500 with a generic message and no stack trace', () => {
     const res = { status: vi.fn().mockReturnThis(), json: vi.fn() };
-    const req = { log: { error: vi.fn() } };
+    const logged = vi.spyOn(logger, 'error').mockImplementation(() => undefined);
+    const req = { method: 'GET', originalUrl: '/api/orgs/x/tests' };
     errorMiddleware(new Error('secret internals'), req as unknown as Request, res as unknown as Response, vi.fn() as NextFunction);
     expect(res.status).toHaveBeenCalledWith(500);
     const body = res.json.mock.calls[0]?.[0] as { code: string; message: string };
     expect(body.code).toBe('internal');
     expect(JSON.stringify(body)).not.toMatch(/secret internals|at /);
-    expect(req.log.error).toHaveBeenCalled();
+    expect(logged).toHaveBeenCalledWith(expect.objectContaining({ method: 'GET', url: '/api/orgs/x/tests' }), 'unhandled error');
+    logged.mockRestore();
   });
 });
 

@@ -1,6 +1,7 @@
-import type { AnalysisSummary, CompliancePoint, JobState, Picks, TestDetail, TestListQuery, TestStatus, TestSummary } from '@porestack/types';
+import type { AnalysisSummary, CompliancePoint, JobState, Picks, TestDetail, TestListQuery, TestSummary } from '@porestack/types';
 import { dataSource } from '../../data-source.js';
 import { preparedQuery } from '../../db/prepared.js';
+import { readCache } from '../../db/read-cache.js';
 import { NotFoundError } from '../../errors/domain-error.js';
 import { ANALYSE_TEST_QUEUE } from '../../jobs/analyse-test-queue.js';
 import { AnalysisEntity } from '../analyses/analysis.entity.js';
@@ -84,7 +85,12 @@ export async function listTests(viewer: Viewer, filter: TestListQuery): Promise<
   const sql = `SELECT ${SUMMARY_COLUMNS} ${SUMMARY_JOINS}
    WHERE t.organisation_id = $1${clauses.map((c) => ` AND ${c}`).join('')}
    ORDER BY p.name, b.name, s.top_depth_m, t.reference`;
-  return (await preparedQuery<Row>(sql, values)).map(toSummary);
+  return readCache().read(
+    viewer.orgId,
+    `tests ${sql} ${JSON.stringify(values)}`,
+    async () => (await preparedQuery<Row>(sql, values)).map(toSummary),
+    (tests) => 200 + tests.length * 700,
+  );
 }
 
 /** Summaries of analyses already read, by organisation and id; the oldest goes first past the bound. */
@@ -121,15 +127,15 @@ async function detailRow(orgId: string, testId: string): Promise<Row> {
  * Outside the viewer's scope, the same 404 as a missing test (the rule of assertTestOpenable).
  */
 export async function readTestDetail(viewer: Viewer, testId: string): Promise<TestDetail> {
-  const row = await detailRow(viewer.orgId, testId);
-  const view = projectView(viewer, row['project_id'] as string);
-  if (!view || !opensLabTest(view, row['status'] as TestStatus)) throw new NotFoundError('test');
-  const detail = await toDetail(viewer.orgId, row);
+  // Kept (db/read-cache.ts) as the lab reads it; the viewer's scope is checked on it each time.
+  const detail = await readCache().read(viewer.orgId, `test ${testId}`, () => getTestDetail(viewer.orgId, testId), (kept) => JSON.stringify(kept).length);
+  const view = projectView(viewer, detail.projectId);
+  if (!view || !opensLabTest(view, detail.status)) throw new NotFoundError('test');
   if (view === 'lab') return detail;
   return { ...detail, latestUploadId: null, pendingJobId: null, latestAnalysisJob: null, changesRequestedComment: null };
 }
 
-/** The lab's whole detail of a test of the organisation; for lab routes and after the lab's own changes. */
+/** The lab's whole detail of a test of the organisation, from the database; for lab routes and after the lab's own changes. */
 export async function getTestDetail(orgId: string, testId: string): Promise<TestDetail> {
   return toDetail(orgId, await detailRow(orgId, testId));
 }
