@@ -51,18 +51,37 @@ export function clearSessionCookie(res: Response): void {
 }
 
 /**
+ * Tokens already verified, with their claims and expiry (ms): a token is checked against the key
+ * once, not on every request — its expiry still is, and the server-side session (sessions table)
+ * is still read every time. The oldest go first past the bound.
+ */
+const verified = new Map<string, { claims: SessionClaims; expiresAt: number }>();
+const VERIFIED_KEPT = 20_000;
+
+/**
  * The claims of a valid, unexpired session cookie, or null. A token must carry an expiry,
  * and user and session ids that are uuids: anything else is no session (never a 500).
  */
 export function readSessionClaims(req: Request): SessionClaims | null {
   const token: unknown = req.cookies?.[SESSION_COOKIE];
   if (typeof token !== 'string' || token === '') return null;
+  const known = verified.get(token);
+  if (known) return known.expiresAt > Date.now() ? known.claims : null;
+  const claims = verifySessionToken(token);
+  if (claims) {
+    verified.set(token, claims);
+    if (verified.size > VERIFIED_KEPT) verified.delete(verified.keys().next().value as string);
+  }
+  return claims?.claims ?? null;
+}
+
+function verifySessionToken(token: string): { claims: SessionClaims; expiresAt: number } | null {
   try {
     const payload = jwt.verify(token, sessionKey(), { algorithms: ['HS256'] });
     if (typeof payload !== 'object' || typeof payload.exp !== 'number') return null;
     const { sub, sid, ver } = payload as { sub?: unknown; sid?: unknown; ver?: unknown };
     if (typeof sub !== 'string' || !UUID_PATTERN.test(sub) || typeof sid !== 'string' || !UUID_PATTERN.test(sid) || !Number.isInteger(ver)) return null;
-    return { sub, sid, ver: ver as number };
+    return { claims: { sub, sid, ver: ver as number }, expiresAt: payload.exp * 1000 };
   } catch {
     return null;
   }

@@ -1,5 +1,6 @@
 import { PicksUpdateSchema, TestCreateSchema, TestListQuerySchema, TestUpdateSchema } from '@porestack/types';
 import type { Router } from 'express';
+import { sendJsonBody } from '../../http/json-body.js';
 import { uuidParam } from '../../http/params.js';
 import { parse } from '../../http/parse.js';
 import { currentTenant, currentUser } from '../../http/request-context.js';
@@ -10,7 +11,7 @@ import { jobRuns } from '../job-runs/job-runs.service.js';
 import { LAB_READERS, LAB_WORKERS } from '../projects/lab-roles.js';
 import { viewerFor } from '../projects/project-scope.js';
 import { createTest, updateTest } from './consolidation-tests.service.js';
-import { getTestDetail, listTests, readTestDetail } from './tests-query.service.js';
+import { getTestDetail, listTestsBody, readTestDetailBody } from './tests-query.service.js';
 
 export function consolidationTestsRouter(): Router {
   return defineRoutes('/api/orgs/:orgId', [
@@ -28,13 +29,13 @@ export function consolidationTestsRouter(): Router {
       method: 'get',
       path: '/tests',
       access: LAB_READERS,
-      handler: async (req, res) => res.json(await listTests(await viewerFor(req), parse(TestListQuerySchema, req.query))),
+      handler: async (req, res) => sendJsonBody(res, await listTestsBody(await viewerFor(req), parse(TestListQuerySchema, req.query))),
     },
     {
       method: 'get',
       path: '/tests/:testId',
       access: LAB_READERS,
-      handler: async (req, res) => res.json(await readTestDetail(await viewerFor(req), uuidParam(req, 'testId', 'test'))),
+      handler: async (req, res) => sendJsonBody(res, await readTestDetailBody(await viewerFor(req), uuidParam(req, 'testId', 'test'))),
     },
     {
       method: 'patch',

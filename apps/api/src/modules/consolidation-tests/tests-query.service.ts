@@ -3,6 +3,7 @@ import { dataSource } from '../../data-source.js';
 import { preparedQuery } from '../../db/prepared.js';
 import { readCache } from '../../db/read-cache.js';
 import { NotFoundError } from '../../errors/domain-error.js';
+import { jsonBody, type JsonBody } from '../../http/json-body.js';
 import { ANALYSE_TEST_QUEUE } from '../../jobs/analyse-test-queue.js';
 import { AnalysisEntity } from '../analyses/analysis.entity.js';
 import { toAnalysisSummary } from '../analyses/analyses.service.js';
@@ -67,8 +68,11 @@ function toSummary(row: Row): TestSummary {
   };
 }
 
-/** The tests the viewer may open (project-scope.ts: a designer, their projects' tests as approved), filtered. */
-export async function listTests(viewer: Viewer, filter: TestListQuery): Promise<TestSummary[]> {
+/**
+ * The tests the viewer may open (project-scope.ts: a designer, their projects' tests as approved),
+ * filtered: a TestSummary[] as the JSON answer, encoded once and kept until the rows change.
+ */
+export async function listTestsBody(viewer: Viewer, filter: TestListQuery): Promise<JsonBody> {
   if (filter.projectId) assertProjectVisible(viewer, filter.projectId);
   const values: unknown[] = [viewer.orgId];
   const clauses: string[] = [openableTestsSql(viewer, 'p.id', 't.status', values)];
@@ -88,8 +92,8 @@ export async function listTests(viewer: Viewer, filter: TestListQuery): Promise<
   return readCache().read(
     viewer.orgId,
     `tests ${sql} ${JSON.stringify(values)}`,
-    async () => (await preparedQuery<Row>(sql, values)).map(toSummary),
-    (tests) => 200 + tests.length * 700,
+    async () => jsonBody((await preparedQuery<Row>(sql, values)).map(toSummary)),
+    (kept) => kept.body.length + 200,
   );
 }
 
@@ -125,14 +129,23 @@ async function detailRow(orgId: string, testId: string): Promise<Row> {
  * A test as the viewer may read it: the lab's whole detail; for a designer (only while the test
  * stands approved) without the lab's working state — job messages and the upload to download.
  * Outside the viewer's scope, the same 404 as a missing test (the rule of assertTestOpenable).
+ * As the JSON answer: the lab's is kept (db/read-cache.ts) encoded, and the scope checked on it each time.
  */
-export async function readTestDetail(viewer: Viewer, testId: string): Promise<TestDetail> {
-  // Kept (db/read-cache.ts) as the lab reads it; the viewer's scope is checked on it each time.
-  const detail = await readCache().read(viewer.orgId, `test ${testId}`, () => getTestDetail(viewer.orgId, testId), (kept) => JSON.stringify(kept).length);
+export async function readTestDetailBody(viewer: Viewer, testId: string): Promise<JsonBody> {
+  const kept = await readCache().read(
+    viewer.orgId,
+    `test ${testId}`,
+    async () => {
+      const detail = await getTestDetail(viewer.orgId, testId);
+      return { detail, body: jsonBody(detail) };
+    },
+    (kept) => kept.body.body.length * 3,
+  );
+  const { detail } = kept;
   const view = projectView(viewer, detail.projectId);
   if (!view || !opensLabTest(view, detail.status)) throw new NotFoundError('test');
-  if (view === 'lab') return detail;
-  return { ...detail, latestUploadId: null, pendingJobId: null, latestAnalysisJob: null, changesRequestedComment: null };
+  if (view === 'lab') return kept.body;
+  return jsonBody({ ...detail, latestUploadId: null, pendingJobId: null, latestAnalysisJob: null, changesRequestedComment: null } satisfies TestDetail);
 }
 
 /** The lab's whole detail of a test of the organisation, from the database; for lab routes and after the lab's own changes. */

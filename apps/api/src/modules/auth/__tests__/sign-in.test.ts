@@ -84,6 +84,16 @@ describe('sign-up, sign-in, session, sign-out', () => {
       expect(res.body.code).toBe('unauthenticated');
     }
   });
+
+  it('when a cookie that was accepted before passes its expiry, then 401: its expiry is checked on every request', async () => {
+    const { browser, session } = await signUpAdmin(app, 'expiring');
+    const sid = (jwt.decode(sessionCookieOf(browser)) as { sid: string }).sid;
+    const token = jwt.sign({ sub: session.user.id, sid, ver: 0 }, env().JWT_SECRET, { algorithm: 'HS256', expiresIn: 2 });
+    await request(app).get('/api/auth/session').set('Cookie', `porestack_session=${token}`).expect(200);
+    await new Promise((resolve) => setTimeout(resolve, 2_100));
+    const res = await request(app).get('/api/auth/session').set('Cookie', `porestack_session=${token}`).expect(401);
+    expect(res.body.code).toBe('unauthenticated');
+  });
 });
 
 function sessionCookieOf(browser: Browser): string {
