@@ -88,15 +88,4 @@ export const jobRuns = {
       .orderBy('run.created_at', 'DESC')
       .getOne();
   },
-
-  /** The newest queued or running job of this kind for a test, if any. */
-  async pendingFor(orgId: string, testId: string, kind: string): Promise<JobRunEntity | null> {
-    return dataSource
-      .getRepository(JobRunEntity)
-      .createQueryBuilder('run')
-      .where('run.organisation_id = :orgId AND run.test_id = :testId AND run.kind = :kind', { orgId, testId, kind })
-      .andWhere("run.state IN ('queued', 'running')")
-      .orderBy('run.created_at', 'DESC')
-      .getOne();
-  },
 };
