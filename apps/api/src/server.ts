@@ -61,12 +61,15 @@ async function serve(): Promise<void> {
     if (stopping) return;
     stopping = true;
     logger.info({ signal }, 'shutting down');
+    // No more kept reads: the last requests read from the database, and the notices' connection
+    // closes now rather than complain when the database stops beside this process.
+    void readCache().stop();
     // Stop taking connections, let requests in flight finish — also those whose client has gone
     // and which still wait on the database — then close the pool.
     server.close(() => {
       closeMailer();
       void queriesSettled(5_000)
-        .then(() => Promise.allSettled([closeParsePool(), readCache().stop(), dataSource.destroy()]))
+        .then(() => Promise.allSettled([closeParsePool(), dataSource.destroy()]))
         .finally(() => process.exit(0));
     });
     server.closeIdleConnections();
