@@ -67,12 +67,11 @@ export function readSessionClaims(req: Request): SessionClaims | null {
   if (typeof token !== 'string' || token === '') return null;
   const known = verified.get(token);
   if (known) return known.expiresAt > Date.now() ? known.claims : null;
-  const claims = verifySessionToken(token);
-  if (claims) {
-    verified.set(token, claims);
-    if (verified.size > VERIFIED_KEPT) verified.delete(verified.keys().next().value as string);
-  }
-  return claims?.claims ?? null;
+  const checked = verifySessionToken(token);
+  if (!checked) return null;
+  verified.set(token, checked);
+  if (verified.size > VERIFIED_KEPT) verified.delete(verified.keys().next().value as string);
+  return checked.claims;
 }
 
 function verifySessionToken(token: string): { claims: SessionClaims; expiresAt: number } | null {

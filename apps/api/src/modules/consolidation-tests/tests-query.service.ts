@@ -132,19 +132,18 @@ async function detailRow(orgId: string, testId: string): Promise<Row> {
  * As the JSON answer: the lab's is kept (db/read-cache.ts) encoded, and the scope checked on it each time.
  */
 export async function readTestDetailBody(viewer: Viewer, testId: string): Promise<JsonBody> {
-  const kept = await readCache().read(
+  const { detail, answer } = await readCache().read(
     viewer.orgId,
     `test ${testId}`,
     async () => {
-      const detail = await getTestDetail(viewer.orgId, testId);
-      return { detail, body: jsonBody(detail) };
+      const lab = await getTestDetail(viewer.orgId, testId);
+      return { detail: lab, answer: jsonBody(lab) };
     },
-    (kept) => kept.body.body.length * 3,
+    (kept) => kept.answer.body.length * 3,
   );
-  const { detail } = kept;
   const view = projectView(viewer, detail.projectId);
   if (!view || !opensLabTest(view, detail.status)) throw new NotFoundError('test');
-  if (view === 'lab') return kept.body;
+  if (view === 'lab') return answer;
   return jsonBody({ ...detail, latestUploadId: null, pendingJobId: null, latestAnalysisJob: null, changesRequestedComment: null } satisfies TestDetail);
 }
 
