@@ -15,6 +15,11 @@ export function runInTenant<T>(orgId: string, work: () => T): T {
   return tenant.run({ orgId }, work);
 }
 
+/** Runs `work` outside any organisation (the walls open), whichever organisation the caller acts for. */
+export function outsideTenant<T>(work: () => T): T {
+  return tenant.exit(work);
+}
+
 export function currentTenantOrg(): string | null {
   return tenant.getStore()?.orgId ?? null;
 }

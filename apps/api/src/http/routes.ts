@@ -25,7 +25,7 @@ import { UUID_PATTERN } from './params.js';
  *
  * Adding a resource under an organisation:
  *
- *   export function testsRouter(): Router {
+ *   export function testsRouter(): RouteGroup {
  *     return defineRoutes('/api/orgs/:orgId/tests', [
  *       { method: 'get', path: '/', access: ROLE_ACCESS.labReaders, handler: list },
  *       { method: 'post', path: '/', access: ROLE_ACCESS.importers, before: [upload.single('file')], handler: create },
@@ -34,6 +34,9 @@ import { UUID_PATTERN } from './params.js';
  *   // and in app.ts: app.use(testsRouter());
  */
 export type Access = 'public' | 'signed-in' | readonly Role[];
+
+/** The routes of one defineRoutes call, mounted with `app.use(group)`; `stack` is its router's, read by listRoutes. */
+export type RouteGroup = RequestHandler & { stack: unknown[] };
 
 export type HttpMethod = 'get' | 'post' | 'put' | 'patch' | 'delete';
 
@@ -86,10 +89,28 @@ function joinPath(base: string, path: string): string {
 }
 
 /**
+ * A pattern every path that `paths` can match starts with: each path's segments up to the first
+ * that is not plain text or a `:param`, a param standing for one segment (as path-to-regexp
+ * matches it), followed by a slash or the end; case-insensitive, as Express routes are.
+ */
+export function routeStarts(paths: readonly string[]): RegExp {
+  const starts = paths.map((path) => {
+    const segments: string[] = [];
+    for (const segment of path.split('/').filter(Boolean)) {
+      if (/^:\w+$/.test(segment)) segments.push('[^/]+');
+      else if (/^[\w.~-]+$/.test(segment)) segments.push(segment.replace(/\./g, '\\.'));
+      else break;
+    }
+    return segments.map((segment) => `/${segment}`).join('');
+  });
+  return new RegExp(`^(?:${[...new Set(starts)].join('|')})(?:/|$)`, 'i');
+}
+
+/**
  * A router whose routes are registered at their full paths (mount it with `app.use(router)`,
  * without a path, so the full paths stay visible to `listRoutes`).
  */
-export function defineRoutes(base: string, routes: RouteDefinition[]): Router {
+export function defineRoutes(base: string, routes: RouteDefinition[]): RouteGroup {
   const router = Router();
   for (const route of routes) {
     const fullPath = joinPath(base, route.path);
@@ -100,7 +121,11 @@ export function defineRoutes(base: string, routes: RouteDefinition[]): Router {
       await route.handler(req, res);
     });
   }
-  return router;
+  // A request for none of these paths passes by at once, rather than being tried against each route
+  // in turn and then leaving the router on the next turn of the event loop (as a router does).
+  const paths = routeStarts(routes.map((route) => joinPath(base, route.path)));
+  const group: RequestHandler = (req, res, next) => (paths.test(req.path) ? router(req, res, next) : next());
+  return Object.assign(group, { stack: router.stack as unknown[] });
 }
 
 interface StackLayer {

@@ -15,7 +15,7 @@ function sessionKey(): KeyObject {
 
 export const SESSION_COOKIE = 'porestack_session';
 
-interface SessionClaims {
+export interface SessionClaims {
   /** user id */
   sub: string;
   /** the server-side session (sessions table) */
@@ -74,12 +74,17 @@ export function readSessionClaims(req: Request): SessionClaims | null {
   return checked.claims;
 }
 
+/** A users.session_version (an int4): anything else is no session, not a failed query for a whole batch. */
+function isSessionVersion(value: unknown): value is number {
+  return Number.isSafeInteger(value) && (value as number) >= 0 && (value as number) <= 2_147_483_647;
+}
+
 function verifySessionToken(token: string): { claims: SessionClaims; expiresAt: number } | null {
   try {
     const payload = jwt.verify(token, sessionKey(), { algorithms: ['HS256'] });
     if (typeof payload !== 'object' || typeof payload.exp !== 'number') return null;
     const { sub, sid, ver } = payload as { sub?: unknown; sid?: unknown; ver?: unknown };
-    if (typeof sub !== 'string' || !UUID_PATTERN.test(sub) || typeof sid !== 'string' || !UUID_PATTERN.test(sid) || !Number.isInteger(ver)) return null;
+    if (typeof sub !== 'string' || !UUID_PATTERN.test(sub) || typeof sid !== 'string' || !UUID_PATTERN.test(sid) || !isSessionVersion(ver)) return null;
     return { claims: { sub, sid, ver: ver as number }, expiresAt: payload.exp * 1000 };
   } catch {
     return null;

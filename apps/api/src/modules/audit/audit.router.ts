@@ -1,10 +1,9 @@
 import { ROLE_ACCESS } from '@porestack/types';
-import type { Router } from 'express';
 import { currentTenant } from '../../http/request-context.js';
-import { defineRoutes } from '../../http/routes.js';
+import { defineRoutes, type RouteGroup } from '../../http/routes.js';
 import { audit } from './audit.service.js';
 
-export function auditRouter(): Router {
+export function auditRouter(): RouteGroup {
   return defineRoutes('/api/orgs/:orgId/audit', [
     {
       method: 'get',

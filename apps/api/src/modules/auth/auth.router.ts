@@ -7,11 +7,10 @@ import {
   type CsrfToken,
   type SignUpSent,
 } from '@porestack/types';
-import type { Router } from 'express';
 import type { Csrf } from '../../http/csrf.js';
 import { parse } from '../../http/parse.js';
 import { currentUser } from '../../http/request-context.js';
-import { defineRoutes } from '../../http/routes.js';
+import { defineRoutes, type RouteGroup } from '../../http/routes.js';
 import { clearSessionCookie, openSession, readSessionClaims } from '../../http/session-cookie.js';
 import { endSession } from '../sessions/sessions.service.js';
 import { clientKey } from '../../http/rate-limits.js';
@@ -24,7 +23,7 @@ import { confirmPasswordReset, requestPasswordReset } from './password-reset.ser
 const signUpSentMessage = (email: string) =>
   `We sent a link to ${email}. Open it within ${SIGN_UP_LINK_HOURS} hours to finish creating your account (check the spam folder if it does not arrive).`;
 
-export function authRouter(csrf: Csrf): Router {
+export function authRouter(csrf: Csrf): RouteGroup {
   return defineRoutes('/api/auth', [
     {
       method: 'get',

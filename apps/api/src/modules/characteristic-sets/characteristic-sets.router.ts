@@ -1,9 +1,8 @@
 import { CharacteristicSetInputSchema, SetStatisticsQuerySchema } from '@porestack/types';
-import type { Router } from 'express';
 import { z } from 'zod';
 import { uuidParam } from '../../http/params.js';
 import { parse } from '../../http/parse.js';
-import { defineRoutes } from '../../http/routes.js';
+import { defineRoutes, type RouteGroup } from '../../http/routes.js';
 import { designProject } from '../design-records/design-project.js';
 import { DESIGN_READERS, DESIGN_WRITERS } from '../projects/design-roles.js';
 import { createCharacteristicSet, getCharacteristicSet, listCharacteristicSets, previewSetStatistics, reviseCharacteristicSet } from './characteristic-sets.service.js';
@@ -11,7 +10,7 @@ import { createCharacteristicSet, getCharacteristicSet, listCharacteristicSets, 
 const RevisionQuerySchema = z.object({ revision: z.coerce.number().int().min(1).optional() });
 
 /** Characteristic sets: approved versions of one stratum, their statistics and the adopted values. */
-export function characteristicSetsRouter(): Router {
+export function characteristicSetsRouter(): RouteGroup {
   return defineRoutes('/api/orgs/:orgId/projects/:projectId/characteristic-sets', [
     {
       method: 'get',

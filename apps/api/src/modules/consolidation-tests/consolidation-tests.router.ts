@@ -1,10 +1,9 @@
 import { PicksUpdateSchema, TestCreateSchema, TestListQuerySchema, TestUpdateSchema } from '@porestack/types';
-import type { Router } from 'express';
 import { sendJsonBody } from '../../http/json-body.js';
 import { uuidParam } from '../../http/params.js';
 import { parse } from '../../http/parse.js';
 import { currentTenant, currentUser } from '../../http/request-context.js';
-import { defineRoutes } from '../../http/routes.js';
+import { defineRoutes, type RouteGroup } from '../../http/routes.js';
 import { currentAnalysis, toAnalysis } from '../analyses/analyses.service.js';
 import { requestAnalysis, setPicks } from '../analyses/picks.service.js';
 import { jobRuns } from '../job-runs/job-runs.service.js';
@@ -13,7 +12,7 @@ import { viewerFor } from '../projects/project-scope.js';
 import { createTest, updateTest } from './consolidation-tests.service.js';
 import { getTestDetail, listTestsBody, readTestDetailBody } from './tests-query.service.js';
 
-export function consolidationTestsRouter(): Router {
+export function consolidationTestsRouter(): RouteGroup {
   return defineRoutes('/api/orgs/:orgId', [
     {
       method: 'post',

@@ -1,15 +1,14 @@
 import { DesignRecordQuerySchema } from '@porestack/types';
-import type { Router } from 'express';
 import { uuidParam } from '../../http/params.js';
 import { parse } from '../../http/parse.js';
-import { defineRoutes } from '../../http/routes.js';
+import { defineRoutes, type RouteGroup } from '../../http/routes.js';
 import { traceSetRevision } from '../characteristic-sets/characteristic-sets.service.js';
 import { DESIGN_READERS } from '../projects/design-roles.js';
 import { designProject } from './design-project.js';
 import { listDesignRecords, traceRecordVersion } from './design-records.service.js';
 
 /** Approved soil records as design reads them, and where a parameter came from. */
-export function designRecordsRouter(): Router {
+export function designRecordsRouter(): RouteGroup {
   return defineRoutes('/api/orgs/:orgId/projects/:projectId/design', [
     {
       method: 'get',

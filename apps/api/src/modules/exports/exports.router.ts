@@ -1,7 +1,6 @@
-import type { Router } from 'express';
 import { uuidParam } from '../../http/params.js';
 import { currentTenant, currentUser } from '../../http/request-context.js';
-import { defineRoutes } from '../../http/routes.js';
+import { defineRoutes, type RouteGroup } from '../../http/routes.js';
 import { LAB_READERS, RECORD_READERS } from '../projects/lab-roles.js';
 import { assertProjectInScope, assertTestOpenable, viewerFor } from '../projects/project-scope.js';
 import { sendDownload } from '../reports/reports.router.js';
@@ -12,7 +11,7 @@ import { reducedDataWorkbook } from './reduced-data.workbook.js';
 
 const XLSX = 'application/vnd.openxmlformats-officedocument.spreadsheetml.sheet';
 
-export function exportsRouter(): Router {
+export function exportsRouter(): RouteGroup {
   return defineRoutes('/api/orgs/:orgId', [
     {
       method: 'get',

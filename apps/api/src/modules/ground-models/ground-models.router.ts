@@ -1,9 +1,8 @@
 import { GroundModelContentInputSchema, GroundModelCreateSchema, GroundModelReviseSchema } from '@porestack/types';
-import type { Router } from 'express';
 import { z } from 'zod';
 import { uuidParam } from '../../http/params.js';
 import { parse } from '../../http/parse.js';
-import { defineRoutes } from '../../http/routes.js';
+import { defineRoutes, type RouteGroup } from '../../http/routes.js';
 import { designProject } from '../design-records/design-project.js';
 import { DESIGN_READERS, DESIGN_WRITERS } from '../projects/design-roles.js';
 import { createGroundModel, getGroundModel, listGroundModels, previewGroundModel, reviseGroundModel } from './ground-models.service.js';
@@ -11,7 +10,7 @@ import { createGroundModel, getGroundModel, listGroundModels, previewGroundModel
 const RevisionQuerySchema = z.object({ revision: z.coerce.number().int().min(1).optional() });
 
 /** A project's ground models (designers build them; the lab's managers read them). */
-export function groundModelsRouter(): Router {
+export function groundModelsRouter(): RouteGroup {
   return defineRoutes('/api/orgs/:orgId/projects/:projectId/ground-models', [
     {
       method: 'get',

@@ -1,6 +1,5 @@
-import type { Router } from 'express';
 import { dataSource } from '../../data-source.js';
-import { defineRoutes } from '../../http/routes.js';
+import { defineRoutes, type RouteGroup } from '../../http/routes.js';
 import { bucketName, storage } from '../../storage/storage.js';
 
 /** How long a check may take before its service counts as down. */
@@ -25,7 +24,7 @@ async function answers(check: () => Promise<unknown>): Promise<'ok' | 'down'> {
  * For a load balancer or a person: 200 when the database and the file storage both answer,
  * otherwise 503, saying which is down.
  */
-export function healthRouter(): Router {
+export function healthRouter(): RouteGroup {
   return defineRoutes('/api/health', [
     {
       method: 'get',

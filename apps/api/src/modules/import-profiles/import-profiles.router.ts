@@ -1,12 +1,11 @@
 import { ImportProfileCreateSchema } from '@porestack/types';
-import type { Router } from 'express';
 import { parse } from '../../http/parse.js';
 import { currentTenant, currentUser } from '../../http/request-context.js';
-import { defineRoutes } from '../../http/routes.js';
+import { defineRoutes, type RouteGroup } from '../../http/routes.js';
 import { PROFILE_EDITORS, UPLOAD_READERS } from '../uploads/upload-roles.js';
 import { importProfiles } from './import-profiles.service.js';
 
-export function importProfilesRouter(): Router {
+export function importProfilesRouter(): RouteGroup {
   return defineRoutes('/api/orgs/:orgId/import-profiles', [
     {
       method: 'get',

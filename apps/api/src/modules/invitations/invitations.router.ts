@@ -1,9 +1,8 @@
 import { InvitationAcceptSchema, InvitationCreateSchema, ROLE_ACCESS } from '@porestack/types';
-import type { Router } from 'express';
 import { uuidParam } from '../../http/params.js';
 import { parse } from '../../http/parse.js';
 import { currentTenant, currentUser } from '../../http/request-context.js';
-import { defineRoutes } from '../../http/routes.js';
+import { defineRoutes, type RouteGroup } from '../../http/routes.js';
 import { openSession } from '../../http/session-cookie.js';
 import { sessionFor } from '../users/sessions.service.js';
 import {
@@ -15,7 +14,7 @@ import {
 } from './invitations.service.js';
 
 /** What an invitee opens from the e-mail: the token is the credential. */
-export function invitationsRouter(): Router {
+export function invitationsRouter(): RouteGroup {
   return defineRoutes('/api/invitations', [
     {
       method: 'get',
@@ -39,7 +38,7 @@ export function invitationsRouter(): Router {
 }
 
 /** An organisation's invitations, managed by its admins. */
-export function orgInvitationsRouter(): Router {
+export function orgInvitationsRouter(): RouteGroup {
   return defineRoutes('/api/orgs/:orgId/invitations', [
     {
       method: 'get',

@@ -1,11 +1,10 @@
-import type { Router } from 'express';
 import { uuidParam } from '../../http/params.js';
-import { defineRoutes } from '../../http/routes.js';
+import { defineRoutes, type RouteGroup } from '../../http/routes.js';
 import { LAB_READERS } from '../projects/lab-roles.js';
 import { viewerFor } from '../projects/project-scope.js';
 import { jobRuns } from './job-runs.service.js';
 
-export function jobRunsRouter(): Router {
+export function jobRunsRouter(): RouteGroup {
   return defineRoutes('/api/orgs/:orgId/jobs', [
     {
       method: 'get',

@@ -1,12 +1,11 @@
 import { MemberRolesUpdateSchema, ROLE_ACCESS } from '@porestack/types';
-import type { Router } from 'express';
 import { uuidParam } from '../../http/params.js';
 import { parse } from '../../http/parse.js';
 import { currentTenant, currentUser } from '../../http/request-context.js';
-import { defineRoutes } from '../../http/routes.js';
+import { defineRoutes, type RouteGroup } from '../../http/routes.js';
 import { changeMemberRoles, listMembers, removeMember } from './members.service.js';
 
-export function membersRouter(): Router {
+export function membersRouter(): RouteGroup {
   return defineRoutes('/api/orgs/:orgId/members', [
     {
       method: 'get',

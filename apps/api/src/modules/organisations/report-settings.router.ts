@@ -1,12 +1,11 @@
 import { ReportSettingsSchema } from '@porestack/types';
-import type { Router } from 'express';
 import { parse } from '../../http/parse.js';
 import { currentTenant, currentUser } from '../../http/request-context.js';
-import { defineRoutes } from '../../http/routes.js';
+import { defineRoutes, type RouteGroup } from '../../http/routes.js';
 import { getReportSettings, updateReportSettings } from './report-settings.service.js';
 
 /** What the laboratory prints about itself on its reports: read by who issues them, set by admins. */
-export function reportSettingsRouter(): Router {
+export function reportSettingsRouter(): RouteGroup {
   return defineRoutes('/api/orgs/:orgId/report-settings', [
     { method: 'get', path: '/', access: ['admin', 'lab_manager'], handler: async (req, res) => res.json(await getReportSettings(currentTenant(req).orgId)) },
     {

@@ -1,14 +1,13 @@
 import { ProjectShareCreateSchema } from '@porestack/types';
-import type { Router } from 'express';
 import { uuidParam } from '../../http/params.js';
 import { parse } from '../../http/parse.js';
 import { currentTenant, currentUser } from '../../http/request-context.js';
-import { defineRoutes } from '../../http/routes.js';
+import { defineRoutes, type RouteGroup } from '../../http/routes.js';
 import { PROJECT_EDITORS } from './lab-roles.js';
 import { listProjectClients, shareProject, withdrawClient, withdrawClientInvitation } from './project-clients.service.js';
 
 /** Sharing a project with clients: kept by the lab managers and admins, like the project itself. */
-export function projectClientsRouter(): Router {
+export function projectClientsRouter(): RouteGroup {
   return defineRoutes('/api/orgs/:orgId/projects/:projectId', [
     {
       method: 'get',

@@ -1,9 +1,8 @@
 import { BoreholeCreateSchema, ProjectCreateSchema, ProjectUpdateSchema, SampleCreateSchema } from '@porestack/types';
-import type { Router } from 'express';
 import { uuidParam } from '../../http/params.js';
 import { parse } from '../../http/parse.js';
 import { currentTenant, currentUser } from '../../http/request-context.js';
-import { defineRoutes } from '../../http/routes.js';
+import { defineRoutes, type RouteGroup } from '../../http/routes.js';
 import { createBorehole, listBoreholes } from '../boreholes/boreholes.service.js';
 import { createSample, listSamples } from '../samples/samples.service.js';
 import { LAB_WORKERS, PROJECT_EDITORS, PROJECT_READERS } from './lab-roles.js';
@@ -11,7 +10,7 @@ import { viewerFor } from './project-scope.js';
 import { createProject, getProject, listDesignerCandidates, listProjects, updateProject } from './projects.service.js';
 
 /** Projects, their boreholes and the boreholes' samples; reads are limited to the caller's project scope by the services. */
-export function projectsRouter(): Router {
+export function projectsRouter(): RouteGroup {
   return defineRoutes('/api/orgs/:orgId', [
     {
       method: 'get',

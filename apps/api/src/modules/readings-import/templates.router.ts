@@ -1,12 +1,11 @@
-import type { Router } from 'express';
-import { defineRoutes } from '../../http/routes.js';
+import { defineRoutes, type RouteGroup } from '../../http/routes.js';
 import { UPLOAD_READERS } from '../uploads/upload-roles.js';
 import { canonicalCsvTemplate, canonicalXlsxTemplate } from './demo-files.js';
 
 let xlsxTemplate: Promise<Buffer> | undefined;
 
 /** Templates of the canonical layout filled with the invented demo test's readings. */
-export function templatesRouter(): Router {
+export function templatesRouter(): RouteGroup {
   return defineRoutes('/api/orgs/:orgId/templates', [
     {
       method: 'get',

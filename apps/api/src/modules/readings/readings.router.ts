@@ -1,9 +1,8 @@
 import { ReadingsPageQuerySchema } from '@porestack/types';
 import { z } from 'zod';
-import type { Router } from 'express';
 import { uuidParam } from '../../http/params.js';
 import { parse } from '../../http/parse.js';
-import { defineRoutes } from '../../http/routes.js';
+import { defineRoutes, type RouteGroup } from '../../http/routes.js';
 import { LAB_READERS } from '../projects/lab-roles.js';
 import { viewerFor } from '../projects/project-scope.js';
 import { readReadings } from './readings.service.js';
@@ -18,7 +17,7 @@ const ReadingsQuerySchema = ReadingsPageQuerySchema.extend({
  * the test (project-scope.ts: the lab; a project's designer while it stands approved) may read its
  * readings: they are what its plots show.
  */
-export function readingsRouter(): Router {
+export function readingsRouter(): RouteGroup {
   return defineRoutes('/api/orgs/:orgId/tests/:testId/readings', [
     {
       method: 'get',

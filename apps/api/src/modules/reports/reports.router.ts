@@ -1,6 +1,6 @@
-import type { Response, Router } from 'express';
+import type { Response } from 'express';
 import { currentUser } from '../../http/request-context.js';
-import { defineRoutes } from '../../http/routes.js';
+import { defineRoutes, type RouteGroup } from '../../http/routes.js';
 import { RECORD_READERS, REVIEWERS } from '../projects/lab-roles.js';
 import { findReport, reportFile, retryReport, toIssuedReport } from './reports.service.js';
 import { versionInScope } from './version-subject.js';
@@ -17,7 +17,7 @@ export function sendDownload(res: Response, file: { bytes: Buffer; fileName: str
   res.send(file.bytes);
 }
 
-export function reportsRouter(): Router {
+export function reportsRouter(): RouteGroup {
   return defineRoutes('/api/orgs/:orgId/soil-records/:recordId/versions/:version/report', [
     {
       method: 'get',

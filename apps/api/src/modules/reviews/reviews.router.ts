@@ -1,15 +1,14 @@
 import { ApprovalSchema, ChangeRequestSchema } from '@porestack/types';
-import type { Router } from 'express';
 import { uuidParam } from '../../http/params.js';
 import { parse } from '../../http/parse.js';
 import { currentTenant, currentUser } from '../../http/request-context.js';
-import { defineRoutes } from '../../http/routes.js';
+import { defineRoutes, type RouteGroup } from '../../http/routes.js';
 import { getTestDetail } from '../consolidation-tests/tests-query.service.js';
 import { LAB_READERS, LAB_WORKERS, REVIEWERS } from '../projects/lab-roles.js';
 import { viewerFor } from '../projects/project-scope.js';
 import { approveTest, listReviewEvents, requestChanges, reviewQueue, submitTest } from './reviews.service.js';
 
-export function reviewsRouter(): Router {
+export function reviewsRouter(): RouteGroup {
   return defineRoutes('/api/orgs/:orgId', [
     {
       method: 'post',

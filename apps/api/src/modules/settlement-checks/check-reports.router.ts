@@ -1,7 +1,7 @@
-import type { Request, Router } from 'express';
+import type { Request } from 'express';
 import { NotFoundError } from '../../errors/domain-error.js';
 import { uuidParam } from '../../http/params.js';
-import { defineRoutes } from '../../http/routes.js';
+import { defineRoutes, type RouteGroup } from '../../http/routes.js';
 import { designProject } from '../design-records/design-project.js';
 import { DESIGN_WRITERS, ISSUED_CHECK_READERS } from '../projects/design-roles.js';
 import { sendDownload } from '../reports/reports.router.js';
@@ -19,7 +19,7 @@ function revisionParam(req: Request): number {
  * revision once; the design readers and the project's clients read what was issued. Every
  * route is scoped to the project (designProject: 404 outside the caller's projects).
  */
-export function checkReportsRouter(): Router {
+export function checkReportsRouter(): RouteGroup {
   const revision = '/projects/:projectId/settlement-checks/:checkId/revisions/:revision';
   return defineRoutes('/api/orgs/:orgId', [
     {

@@ -1,12 +1,12 @@
 import { CompareQuerySchema, FootingPasteSchema, RunCheckSchema, SettlementCheckCreateSchema, SettlementCheckUpdateSchema, SizingApplySchema, SizingRequestSchema } from '@porestack/types';
 import multer from 'multer';
-import type { Request, RequestHandler, Router } from 'express';
+import type { Request, RequestHandler } from 'express';
 import { z } from 'zod';
 import { DomainError, NotFoundError } from '../../errors/domain-error.js';
 import { uuidParam } from '../../http/params.js';
 import { parse } from '../../http/parse.js';
 import { currentTenant, currentUser } from '../../http/request-context.js';
-import { defineRoutes } from '../../http/routes.js';
+import { defineRoutes, type RouteGroup } from '../../http/routes.js';
 import { designProject } from '../design-records/design-project.js';
 import { DESIGN_READERS, DESIGN_WRITERS } from '../projects/design-roles.js';
 import { projectScope } from '../projects/project-scope.js';
@@ -42,7 +42,7 @@ const footingFile: RequestHandler = (req, res, next) => {
 };
 
 /** Settlement checks of a project: the draft, its runs (revisions), sizing, comparison and the workbook. */
-export function settlementChecksRouter(): Router {
+export function settlementChecksRouter(): RouteGroup {
   return defineRoutes('/api/orgs/:orgId', [
     {
       method: 'get',

@@ -1,12 +1,11 @@
-import type { Router } from 'express';
 import { uuidParam, versionParam } from '../../http/params.js';
-import { defineRoutes } from '../../http/routes.js';
+import { defineRoutes, type RouteGroup } from '../../http/routes.js';
 import { RECORD_READERS } from '../projects/lab-roles.js';
 import { viewerFor } from '../projects/project-scope.js';
 import { issuedTestSummary, projectResults } from './issued-results.service.js';
 
 /** What a project has issued — approved versions only — for everyone who may read the project, clients included. */
-export function issuedResultsRouter(): Router {
+export function issuedResultsRouter(): RouteGroup {
   return defineRoutes('/api/orgs/:orgId', [
     {
       method: 'get',

@@ -1,13 +1,12 @@
 import { SoilRecordListQuerySchema } from '@porestack/types';
-import type { Router } from 'express';
 import { uuidParam, versionParam } from '../../http/params.js';
 import { parse } from '../../http/parse.js';
-import { defineRoutes } from '../../http/routes.js';
+import { defineRoutes, type RouteGroup } from '../../http/routes.js';
 import { RECORD_READERS } from '../projects/lab-roles.js';
 import { viewerFor } from '../projects/project-scope.js';
 import { getSoilRecord, getSoilRecordVersion, listSoilRecords } from './soil-records.service.js';
 
-export function soilRecordsRouter(): Router {
+export function soilRecordsRouter(): RouteGroup {
   return defineRoutes('/api/orgs/:orgId/soil-records', [
     {
       method: 'get',

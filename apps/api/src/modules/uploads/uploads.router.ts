@@ -1,10 +1,9 @@
 import { CsvDelimiterSchema, ImportRequestSchema, ImportTrialRequestSchema } from '@porestack/types';
-import type { Router } from 'express';
 import { z } from 'zod';
 import { uuidParam } from '../../http/params.js';
 import { parse } from '../../http/parse.js';
 import { currentTenant, currentUser } from '../../http/request-context.js';
-import { defineRoutes } from '../../http/routes.js';
+import { defineRoutes, type RouteGroup } from '../../http/routes.js';
 import { receiveFile } from './receive-file.js';
 import { fileMissing } from './upload.exception.js';
 import { IMPORTERS, UPLOAD_READERS } from './upload-roles.js';
@@ -21,7 +20,7 @@ function attachment(name: string): string {
   return `attachment; filename="${ascii}"; filename*=UTF-8''${encodeURIComponent(name)}`;
 }
 
-export function uploadsRouter(): Router {
+export function uploadsRouter(): RouteGroup {
   return defineRoutes('/api/orgs/:orgId', [
     {
       method: 'post',
