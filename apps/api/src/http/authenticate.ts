@@ -45,8 +45,8 @@ interface SessionLookup {
 /** The rows for one organisation's lookups (or none's), in their order; null where no live session. */
 async function lookUpSessions(orgId: string | null, lookups: readonly SessionLookup[]): Promise<(UserAndMembershipRow | null)[]> {
   const values = [lookups.map((l) => l.claims.sid), lookups.map((l) => l.claims.sub), lookups.map((l) => l.claims.ver), orgId];
-  // The membership rows are behind the tenant wall: read within the organisation asked for, or
-  // outside any, whichever request happened to start the batch.
+  // The membership rows are behind the tenant wall: read within the organisation asked for (or
+  // outside any), not within that of whichever request happened to start the batch.
   const read = () => preparedQuery<UserAndMembershipRow>(USERS_AND_MEMBERSHIPS_SQL, values);
   const rows = orgId === null ? await outsideTenant(read) : await runInTenant(orgId, read);
   const answers: (UserAndMembershipRow | null)[] = lookups.map(() => null);
